@@ -1,0 +1,91 @@
+/**
+ * Connected regions of a grid: the cells reachable from each other through neighbours
+ * (4 = edges only, 8 = edges and corners), either of one colour or of any non-background
+ * colour.
+ */
+import { EMPTY, Grid } from './grid.ts';
+import { GridObject } from '../language/grid-object.ts';
+
+export interface ComponentOptions {
+  readonly diagonal: boolean;
+  /** true: one object may hold several colours; false: each object is one colour. */
+  readonly multicolour: boolean;
+  /** Cells of this colour belong to no object; -1 keeps every cell. */
+  readonly background: number;
+}
+
+/** Objects in reading order of their first cell (top row first, then left). */
+export function components(grid: Grid, options: ComponentOptions): GridObject[] {
+  const { height, width, cells } = grid;
+  const seen = new Uint8Array(height * width);
+  const queue = new Int32Array(height * width);
+  const objects: GridObject[] = [];
+  for (let start = 0; start < cells.length; start++) {
+    if (seen[start] || cells[start] === options.background) continue;
+    const colour = cells[start]!;
+    let head = 0;
+    let tail = 0;
+    queue[tail++] = start;
+    seen[start] = 1;
+    let top = height, left = width, bottom = -1, right = -1;
+    while (head < tail) {
+      const index = queue[head++]!;
+      const r = (index / width) | 0;
+      const c = index - r * width;
+      if (r < top) top = r;
+      if (r > bottom) bottom = r;
+      if (c < left) left = c;
+      if (c > right) right = c;
+      for (let dr = -1; dr <= 1; dr++) {
+        const nr = r + dr;
+        if (nr < 0 || nr >= height) continue;
+        for (let dc = -1; dc <= 1; dc++) {
+          if (dr === 0 && dc === 0) continue;
+          if (!options.diagonal && dr !== 0 && dc !== 0) continue;
+          const nc = c + dc;
+          if (nc < 0 || nc >= width) continue;
+          const n = nr * width + nc;
+          if (seen[n]) continue;
+          const v = cells[n]!;
+          if (v === options.background) continue;
+          if (!options.multicolour && v !== colour) continue;
+          seen[n] = 1;
+          queue[tail++] = n;
+        }
+      }
+    }
+    const h = bottom - top + 1;
+    const w = right - left + 1;
+    const shape = new Uint8Array(h * w).fill(EMPTY);
+    for (let i = 0; i < tail; i++) {
+      const index = queue[i]!;
+      const r = (index / width) | 0;
+      const c = index - r * width;
+      shape[(r - top) * w + (c - left)] = cells[index]!;
+    }
+    objects.push(new GridObject(top, left, new Grid(h, w, shape)));
+  }
+  return objects;
+}
+
+/** Counts of each colour 0–9. */
+export function colourCounts(grid: Grid): Uint32Array {
+  const counts = new Uint32Array(10);
+  const cells = grid.cells;
+  for (let i = 0; i < cells.length; i++) {
+    const v = cells[i]!;
+    if (v < 10) counts[v]!++;
+  }
+  return counts;
+}
+
+/**
+ * The background colour: the most frequent colour, preferring black (0) when it ties for
+ * first place; other ties go to the lowest colour.
+ */
+export function backgroundColour(grid: Grid): number {
+  const counts = colourCounts(grid);
+  let best = 0;
+  for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
+  return best;
+}

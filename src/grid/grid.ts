@@ -1,0 +1,104 @@
+/**
+ * The grid value: an immutable rectangle of colours 0–9 stored row-major in a Uint8Array,
+ * with its hash computed once at construction so the search can dedupe values cheaply.
+ */
+
+/** Largest height or width a grid may have; raise it with {@link setSizeCap}. */
+let sizeCap = 30;
+
+/** The current cap on grid height and width (30 unless raised). */
+export function getSizeCap(): number {
+  return sizeCap;
+}
+
+/**
+ * Raise (or lower) the cap on grid height and width for this process, for datasets with
+ * larger grids. Primitives refuse to build grids beyond the cap, which keeps every step
+ * bounded in output size.
+ */
+export function setSizeCap(cap: number): void {
+  if (!Number.isInteger(cap) || cap < 1 || cap > 1000) {
+    throw new RangeError(`grid size cap must be a whole number from 1 to 1000, got ${cap}`);
+  }
+  sizeCap = cap;
+}
+
+/** Cell value used inside objects for "not part of this object"; never a colour. */
+export const EMPTY = 255;
+
+export class Grid {
+  readonly height: number;
+  readonly width: number;
+  /** Row-major cells; callers must not mutate a grid after construction. */
+  readonly cells: Uint8Array;
+  readonly hash: number;
+
+  /** Takes ownership of `cells` (length height × width). */
+  constructor(height: number, width: number, cells: Uint8Array) {
+    this.height = height;
+    this.width = width;
+    this.cells = cells;
+    this.hash = hashCells(height, width, cells);
+  }
+
+  static filled(height: number, width: number, colour: number): Grid {
+    return new Grid(height, width, new Uint8Array(height * width).fill(colour));
+  }
+
+  /** Builds a grid from a list of rows; rows must be equally long. */
+  static fromRows(rows: readonly (readonly number[])[]): Grid {
+    const height = rows.length;
+    const width = height === 0 ? 0 : rows[0]!.length;
+    const cells = new Uint8Array(height * width);
+    for (let r = 0; r < height; r++) {
+      const row = rows[r]!;
+      if (row.length !== width) throw new RangeError(`row ${r} has ${row.length} cells, expected ${width}`);
+      for (let c = 0; c < width; c++) cells[r * width + c] = row[c]!;
+    }
+    return new Grid(height, width, cells);
+  }
+
+  get(row: number, column: number): number {
+    return this.cells[row * this.width + column]!;
+  }
+
+  toRows(): number[][] {
+    const rows: number[][] = [];
+    for (let r = 0; r < this.height; r++) rows.push(Array.from(this.cells.subarray(r * this.width, (r + 1) * this.width)));
+    return rows;
+  }
+
+  equals(other: Grid): boolean {
+    if (this === other) return true;
+    if (this.hash !== other.hash || this.height !== other.height || this.width !== other.width) return false;
+    const a = this.cells;
+    const b = other.cells;
+    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+    return true;
+  }
+
+  toString(): string {
+    return this.toRows()
+      .map((row) => row.map((v) => (v === EMPTY ? '.' : String(v))).join(''))
+      .join('\n');
+  }
+}
+
+/** FNV-1a over the shape and the cells, finished with a murmur-style mix. */
+export function hashCells(height: number, width: number, cells: Uint8Array): number {
+  let h = 0x811c9dc5 ^ (height * 31 + width);
+  h = Math.imul(h, 0x01000193);
+  for (let i = 0; i < cells.length; i++) {
+    h ^= cells[i]!;
+    h = Math.imul(h, 0x01000193);
+  }
+  h ^= h >>> 16;
+  h = Math.imul(h, 0x85ebca6b);
+  h ^= h >>> 13;
+  return h >>> 0;
+}
+
+/** True when a grid of this shape is allowed (non-empty and within the cap). */
+export function shapeAllowed(height: number, width: number): boolean {
+  return height >= 1 && width >= 1 && height <= sizeCap && width <= sizeCap;
+}

@@ -1,0 +1,51 @@
+/**
+ * Programs as data. A program names its input grid, computes named steps in order, and ends
+ * with an answer expression. Comments are part of the tree so printing keeps them.
+ */
+import type { BaseType } from './types.ts';
+
+export type LiteralValue =
+  | { readonly type: 'Colour'; readonly value: number }
+  | { readonly type: 'Int'; readonly value: number }
+  | { readonly type: 'Bool'; readonly value: boolean }
+  | { readonly type: 'Point'; readonly row: number; readonly column: number }
+  | { readonly type: 'Palette'; readonly pairs: readonly (readonly [number, number])[] };
+
+export type Expression =
+  | { readonly kind: 'variable'; readonly name: string }
+  | { readonly kind: 'literal'; readonly literal: LiteralValue }
+  | { readonly kind: 'call'; readonly primitive: string; readonly arguments: readonly Expression[] }
+  /** `_`: the open first argument of a section such as `has_colour(_, #3)`. */
+  | { readonly kind: 'hole' };
+
+export interface Step {
+  readonly comments: readonly string[];
+  readonly name: string;
+  readonly expression: Expression;
+}
+
+export interface Program {
+  /** Comment lines before `with`. */
+  readonly comments: readonly string[];
+  readonly input: string;
+  readonly steps: readonly Step[];
+  /** Comment lines just before `answer`. */
+  readonly answerComments: readonly string[];
+  readonly answer: Expression;
+}
+
+export const variable = (name: string): Expression => ({ kind: 'variable', name });
+export const call = (primitive: string, ...args: Expression[]): Expression => ({ kind: 'call', primitive, arguments: args });
+export const hole: Expression = { kind: 'hole' };
+export const literal = (literal: LiteralValue): Expression => ({ kind: 'literal', literal });
+export const colour = (value: number): Expression => literal({ type: 'Colour', value });
+export const integer = (value: number): Expression => literal({ type: 'Int', value });
+
+export function literalType(l: LiteralValue): BaseType {
+  return l.type;
+}
+
+/** A program whose answer is a single expression over the input `grid`, with no steps. */
+export function expressionProgram(answer: Expression, input = 'grid'): Program {
+  return { comments: [], input, steps: [], answerComments: [], answer };
+}

@@ -1,0 +1,93 @@
+/**
+ * Runs a checked program on a grid. Every step's value can be kept (the trace). A primitive
+ * that cannot apply yields FAILURE, which flows on to the answer; an exception inside a
+ * primitive is caught and becomes FAILURE too, so nothing escapes.
+ */
+import { Grid, shapeAllowed } from '../grid/grid.ts';
+import type { Library } from '../library/library.ts';
+import { applyPrimitive, type Primitive } from '../library/primitive.ts';
+import type { Expression, LiteralValue, Program } from './ast.ts';
+import { checkProgram } from './checker.ts';
+import { FAILURE, type Failure } from './failure.ts';
+import { Palette } from './palette.ts';
+import { Point } from './point.ts';
+import type { Type } from './types.ts';
+
+export interface TraceEntry {
+  /** The step's name, or 'answer'. */
+  readonly name: string;
+  readonly type: Type;
+  readonly value: unknown;
+}
+
+export interface RunResult {
+  /** The answer grid, or FAILURE. */
+  readonly output: Grid | Failure;
+  /** Every step in order, then the answer; empty unless a trace was asked for. */
+  readonly trace: readonly TraceEntry[];
+}
+
+export function literalValue(l: LiteralValue): unknown {
+  switch (l.type) {
+    case 'Colour':
+    case 'Int':
+    case 'Bool':
+      return l.value;
+    case 'Point':
+      return new Point(l.row, l.column);
+    case 'Palette':
+      return Palette.fromPairs(l.pairs);
+  }
+}
+
+/** Applies a primitive, turning exceptions and over-cap grids into FAILURE. */
+export function safeApply(p: Primitive, args: readonly unknown[]): unknown {
+  for (let i = 0; i < args.length; i++) if (args[i] === FAILURE) return FAILURE;
+  try {
+    const result = applyPrimitive(p, args);
+    if (result instanceof Grid && !shapeAllowed(result.height, result.width)) return FAILURE;
+    return result;
+  } catch {
+    return FAILURE;
+  }
+}
+
+export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unknown>, library: Library): unknown {
+  switch (e.kind) {
+    case 'variable':
+      return env.has(e.name) ? env.get(e.name) : FAILURE;
+    case 'literal':
+      return literalValue(e.literal);
+    case 'hole':
+      return FAILURE;
+    case 'call': {
+      const p = library.get(e.primitive);
+      if (!p) return FAILURE;
+      if (e.arguments.length > 0 && e.arguments[0]!.kind === 'hole') {
+        const bound = e.arguments.slice(1).map((a) => evaluateExpression(a, env, library));
+        return (x: unknown) => safeApply(p, [x, ...bound]);
+      }
+      const args = e.arguments.map((a) => evaluateExpression(a, env, library));
+      return safeApply(p, args);
+    }
+  }
+}
+
+/**
+ * Runs `program` on `input`. The program is type-checked first (a ProgramTypeError is thrown
+ * for an ill-typed one); after that, running never throws.
+ */
+export function runProgram(program: Program, input: Grid, library: Library, options: { trace?: boolean } = {}): RunResult {
+  const types = checkProgram(program, library);
+  const env = new Map<string, unknown>([[program.input, input]]);
+  const trace: TraceEntry[] = [];
+  for (const step of program.steps) {
+    const value = evaluateExpression(step.expression, env, library);
+    env.set(step.name, value);
+    if (options.trace) trace.push({ name: step.name, type: types.steps.get(step.name)!, value });
+  }
+  const answer = evaluateExpression(program.answer, env, library);
+  const output = answer instanceof Grid ? answer : FAILURE;
+  if (options.trace) trace.push({ name: 'answer', type: 'Grid', value: output });
+  return { output, trace };
+}

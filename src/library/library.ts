@@ -1,0 +1,26 @@
+/** A set of primitives indexed by name, as the checker, interpreter and search see it. */
+import type { Primitive } from './primitive.ts';
+
+export class Library {
+  readonly primitives: readonly Primitive[];
+  private readonly byName = new Map<string, Primitive>();
+
+  constructor(primitives: readonly Primitive[]) {
+    this.primitives = primitives;
+    for (const p of primitives) {
+      if (this.byName.has(p.name)) throw new Error(`primitive '${p.name}' is defined twice`);
+      if (!/^[a-z][a-z0-9_]*$/.test(p.name)) throw new Error(`primitive name '${p.name}' must be lower-case words joined by _`);
+      this.byName.set(p.name, p);
+    }
+  }
+
+  get(name: string): Primitive | undefined {
+    return this.byName.get(name);
+  }
+
+  /** A copy without the named primitives (for ablations and tests). */
+  without(names: readonly string[]): Library {
+    const drop = new Set(names);
+    return new Library(this.primitives.filter((p) => !drop.has(p.name)));
+  }
+}

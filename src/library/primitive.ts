@@ -1,0 +1,75 @@
+/**
+ * The primitive record: everything the language, the checker, the search and the reference
+ * document need to know about one primitive, in one place.
+ */
+import type { Failure } from '../language/failure.ts';
+import type { Type, ValueOf } from '../language/types.ts';
+
+export const CATEGORIES = [
+  'objects',
+  'selection',
+  'cropping',
+  'colour',
+  'symmetry',
+  'geometry',
+  'composition',
+  'filling',
+  'counting',
+] as const;
+export type Category = (typeof CATEGORIES)[number];
+
+export const CATEGORY_TITLES: Record<Category, string> = {
+  objects: 'Object extraction',
+  selection: 'Object selection',
+  cropping: 'Cropping',
+  colour: 'Recolouring',
+  symmetry: 'Symmetry',
+  geometry: 'Geometry',
+  composition: 'Composition',
+  filling: 'Filling',
+  counting: 'Counting and comparison',
+};
+
+/**
+ * A worked example: `expression` is an expression of the language over the variable `grid`,
+ * which holds `input`; evaluating it gives `output` (a grid as rows, a number or a boolean).
+ */
+export interface WorkedExample {
+  readonly input: readonly (readonly number[])[];
+  readonly expression: string;
+  readonly output: readonly (readonly number[])[] | number | boolean;
+}
+
+type ValuesOf<P extends readonly Type[]> = { [K in keyof P]: P[K] extends Type ? ValueOf<P[K]> : never };
+
+export interface Primitive {
+  readonly name: string;
+  readonly category: Category;
+  readonly parameters: readonly Type[];
+  readonly result: Type;
+  /** Description-length prior in bits: what one use of the primitive costs a program. */
+  readonly bits: number;
+  readonly doc: string;
+  readonly example: WorkedExample;
+  /** Pure; returns FAILURE when it cannot apply. Arguments arrive already type-checked. */
+  readonly run: (...args: never[]) => unknown;
+}
+
+/** Declares a primitive with its implementation typed from its signature. */
+export function primitive<const P extends readonly Type[], const R extends Type>(record: {
+  name: string;
+  category: Category;
+  parameters: P;
+  result: R;
+  bits: number;
+  doc: string;
+  example: WorkedExample;
+  run: (...args: ValuesOf<P>) => ValueOf<R> | Failure;
+}): Primitive {
+  return record as unknown as Primitive;
+}
+
+/** Calls a primitive's implementation with untyped arguments (interpreter and search). */
+export function applyPrimitive(p: Primitive, args: readonly unknown[]): unknown {
+  return (p.run as (...a: unknown[]) => unknown)(...args);
+}

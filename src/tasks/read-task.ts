@@ -1,0 +1,144 @@
+/**
+ * Reads task JSON files, checking every grid, and reports bad input with the file and the
+ * JSON path of the problem.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { basename, join } from 'node:path';
+import { Grid, getSizeCap } from '../grid/grid.ts';
+import type { Pair, Task, TestCase } from './task.ts';
+
+export class TaskFileError extends Error {
+  constructor(
+    readonly file: string,
+    readonly jsonPath: string,
+    readonly problem: string,
+  ) {
+    super(`${file}: at ${jsonPath}: ${problem}`);
+    this.name = 'TaskFileError';
+  }
+}
+
+function describe(value: unknown): string {
+  if (value === null) return 'null';
+  if (Array.isArray(value)) return `a list of ${value.length}`;
+  if (typeof value === 'object') return 'an object';
+  if (typeof value === 'string') return `the string ${JSON.stringify(value.length > 20 ? value.slice(0, 20) + '…' : value)}`;
+  return `${typeof value} ${String(value)}`;
+}
+
+function readGrid(value: unknown, file: string, path: string): Grid {
+  const cap = getSizeCap();
+  if (!Array.isArray(value)) throw new TaskFileError(file, path, `expected a grid (a list of rows), found ${describe(value)}`);
+  if (value.length === 0) throw new TaskFileError(file, path, 'expected a grid with at least one row, found an empty list');
+  if (value.length > cap) throw new TaskFileError(file, path, `grid has ${value.length} rows, over the size cap of ${cap}`);
+  let width = -1;
+  const rows: number[][] = [];
+  for (let r = 0; r < value.length; r++) {
+    const row: unknown = value[r];
+    const rowPath = `${path}[${r}]`;
+    if (!Array.isArray(row)) throw new TaskFileError(file, rowPath, `expected a row (a list of colours), found ${describe(row)}`);
+    if (row.length === 0) throw new TaskFileError(file, rowPath, 'expected a row with at least one cell, found an empty row');
+    if (row.length > cap) throw new TaskFileError(file, rowPath, `row has ${row.length} cells, over the size cap of ${cap}`);
+    if (width < 0) width = row.length;
+    else if (row.length !== width) throw new TaskFileError(file, rowPath, `row has ${row.length} cells but row 0 has ${width}: rows must be equally long`);
+    for (let c = 0; c < row.length; c++) {
+      const cell: unknown = row[c];
+      if (typeof cell !== 'number' || !Number.isInteger(cell) || cell < 0 || cell > 9) {
+        throw new TaskFileError(file, `${rowPath}[${c}]`, `expected a colour, a whole number from 0 to 9, found ${describe(cell)}`);
+      }
+    }
+    rows.push(row as number[]);
+  }
+  return Grid.fromRows(rows);
+}
+
+function readList(root: Record<string, unknown>, key: 'train' | 'test', file: string): unknown[] {
+  const list = root[key];
+  if (!Array.isArray(list)) throw new TaskFileError(file, `$.${key}`, `expected a list of pairs, found ${list === undefined ? 'nothing' : describe(list)}`);
+  return list;
+}
+
+function readEntry(value: unknown, file: string, path: string): Record<string, unknown> {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    throw new TaskFileError(file, path, `expected an object with "input"${path.includes('train') ? ' and "output"' : ''}, found ${describe(value)}`);
+  }
+  return value as Record<string, unknown>;
+}
+
+/** Parses task JSON text; `file` names the source in error messages. */
+export function parseTask(text: string, file: string, name = basename(file).replace(/\.json$/i, '')): Task {
+  let root: unknown;
+  try {
+    root = JSON.parse(text);
+  } catch (error) {
+    throw new TaskFileError(file, '$', `not valid JSON (${(error as Error).message})`);
+  }
+  if (typeof root !== 'object' || root === null || Array.isArray(root)) {
+    throw new TaskFileError(file, '$', `expected an object with "train" and "test", found ${describe(root)}`);
+  }
+  const object = root as Record<string, unknown>;
+  const trainList = readList(object, 'train', file);
+  if (trainList.length === 0) throw new TaskFileError(file, '$.train', 'expected at least one train pair, found none');
+  const train: Pair[] = trainList.map((entry, i) => {
+    const e = readEntry(entry, file, `$.train[${i}]`);
+    return { input: readGrid(e.input, file, `$.train[${i}].input`), output: readGrid(e.output, file, `$.train[${i}].output`) };
+  });
+  const testList = readList(object, 'test', file);
+  if (testList.length === 0) throw new TaskFileError(file, '$.test', 'expected at least one test input, found none');
+  const test: TestCase[] = testList.map((entry, i) => {
+    const e = readEntry(entry, file, `$.test[${i}]`);
+    const input = readGrid(e.input, file, `$.test[${i}].input`);
+    return e.output === undefined ? { input } : { input, output: readGrid(e.output, file, `$.test[${i}].output`) };
+  });
+  return { name, path: file, train, test };
+}
+
+export function readTaskFile(file: string): Task {
+  let text: string;
+  try {
+    text = readFileSync(file, 'utf8');
+  } catch (error) {
+    throw new TaskFileError(file, '$', `cannot read the file (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`);
+  }
+  return parseTask(text, file);
+}
+
+/** The task files a path names: the file itself, or every *.json in a directory, sorted. */
+export function taskFiles(path: string): string[] {
+  let stats;
+  try {
+    stats = statSync(path);
+  } catch {
+    throw new TaskFileError(path, '$', 'no such file or directory');
+  }
+  if (!stats.isDirectory()) return [path];
+  return readdirSync(path)
+    .filter((f) => f.toLowerCase().endsWith('.json'))
+    .sort()
+    .map((f) => join(path, f));
+}
+
+export type TaskOrError = { readonly ok: true; readonly task: Task } | { readonly ok: false; readonly file: string; readonly error: TaskFileError };
+
+/** Reads every task under the given paths; a bad file becomes an error entry, the rest go on. */
+export function readTasks(paths: readonly string[]): TaskOrError[] {
+  const out: TaskOrError[] = [];
+  for (const path of paths) {
+    let files: string[];
+    try {
+      files = taskFiles(path);
+    } catch (error) {
+      out.push({ ok: false, file: path, error: error as TaskFileError });
+      continue;
+    }
+    for (const file of files) {
+      try {
+        out.push({ ok: true, task: readTaskFile(file) });
+      } catch (error) {
+        if (!(error instanceof TaskFileError)) throw error;
+        out.push({ ok: false, file, error });
+      }
+    }
+  }
+  return out;
+}
