@@ -1,6 +1,23 @@
 /** The primitive library: every record, gathered from the category files. */
 import type { Primitive } from '../src/library/primitive.ts';
+import { colourPrimitives } from './colour.ts';
+import { compositionPrimitives } from './composition.ts';
+import { countingPrimitives } from './counting.ts';
+import { croppingPrimitives } from './cropping.ts';
+import { fillingPrimitives } from './filling.ts';
+import { geometryPrimitives } from './geometry.ts';
 import { objectPrimitives } from './objects.ts';
+import { selectionPrimitives } from './selection.ts';
 import { symmetryPrimitives } from './symmetry.ts';
 
-export const PRIMITIVES: readonly Primitive[] = [...objectPrimitives, ...symmetryPrimitives];
+export const PRIMITIVES: readonly Primitive[] = [
+  ...objectPrimitives,
+  ...selectionPrimitives,
+  ...croppingPrimitives,
+  ...colourPrimitives,
+  ...symmetryPrimitives,
+  ...geometryPrimitives,
+  ...compositionPrimitives,
+  ...fillingPrimitives,
+  ...countingPrimitives,
+];

@@ -13,14 +13,4 @@ export const objectPrimitives = [
     example: { input: [[1, 1, 0], [0, 0, 2], [0, 2, 2]], expression: 'count_objects(objects_by_colour(grid))', output: 2 },
     run: (g) => components(g, { diagonal: false, multicolour: false, background: backgroundColour(g) }),
   }),
-  primitive({
-    name: 'count_objects',
-    category: 'counting',
-    parameters: ['Objects'],
-    result: 'Int',
-    bits: 5,
-    doc: 'How many objects there are.',
-    example: { input: [[1, 0, 1]], expression: 'count_objects(objects_by_colour(grid))', output: 2 },
-    run: (objects) => objects.length,
-  }),
 ];

@@ -1,0 +1,4 @@
+/** Colour primitives. */
+import type { Primitive } from '../src/library/primitive.ts';
+
+export const colourPrimitives: Primitive[] = [];

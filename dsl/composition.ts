@@ -1,0 +1,4 @@
+/** Composition primitives. */
+import type { Primitive } from '../src/library/primitive.ts';
+
+export const compositionPrimitives: Primitive[] = [];
