@@ -1,0 +1,48 @@
+/**
+ * The `pithy` command line: builds the commander program and registers one command per
+ * file. Each command is a thin layer over library functions.
+ */
+import { realpathSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Command } from 'commander';
+import { registerCheckCommand } from './check-command.ts';
+import { registerPrimitivesCommand } from './primitives-command.ts';
+import { registerRunCommand } from './run-command.ts';
+import { registerShowCommand } from './show-command.ts';
+
+export function buildProgram(): Command {
+  const program = new Command();
+  program
+    .name('pithy')
+    .description('finds the shortest program in a typed grid language that maps every demonstration input of a grid puzzle to its output')
+    .showHelpAfterError();
+  registerRunCommand(program);
+  registerCheckCommand(program);
+  registerShowCommand(program);
+  registerPrimitivesCommand(program);
+  // ---------------------------------------------------------------------------------------
+  // Search commands: the lead registers `solve` and `eval` here (src/search/ provides them).
+  // ---------------------------------------------------------------------------------------
+  return program;
+}
+
+export async function main(argv: readonly string[]): Promise<void> {
+  await buildProgram().parseAsync([...argv]);
+}
+
+/** True when this file is the entry point (run by tsx directly or through bin/pithy.js). */
+function isEntryPoint(): boolean {
+  const invoked = process.argv[1];
+  if (!invoked) return false;
+  let path: string;
+  try {
+    path = realpathSync(invoked);
+  } catch {
+    return false;
+  }
+  const self = fileURLToPath(import.meta.url);
+  return path === self || path === join(dirname(self), '..', '..', 'bin', 'pithy.js');
+}
+
+if (isEntryPoint()) await main(process.argv);

@@ -1,0 +1,86 @@
+/**
+ * `pithy run PROGRAM TASK`: runs a program on every train pair and every test pair with an
+ * output; prints pass/fail per pair and, for a failure, where the answer first differs.
+ */
+import type { Command } from 'commander';
+import { defaultLibrary } from '../library/default-library.ts';
+import { describeValue, valueToData } from '../output/describe-value.ts';
+import { drawPair } from '../output/terminal-grid.ts';
+import { readTasks } from '../tasks/read-task.ts';
+import { describeDifference, runOnTask, type PairResult } from '../tasks/run-on-task.ts';
+import { formatProblem, loadProgramFile, ProgramFileError, type LoadedProgram } from './program-file.ts';
+import { stdoutColourMode, taskErrorData, writeError, writeJson, writeLines } from './output.ts';
+
+function pairData(r: PairResult): Record<string, unknown> {
+  return {
+    set: r.set,
+    index: r.index,
+    passed: r.passed,
+    ...(r.difference ? { difference: r.difference } : {}),
+    output: r.got ? r.got.toRows() : 'FAILURE',
+    ...(r.trace ? { trace: r.trace.map((t) => ({ name: t.name, type: t.type, value: valueToData(t.value) })) } : {}),
+  };
+}
+
+function pairLines(r: PairResult, trace: boolean): string[] {
+  const mode = stdoutColourMode();
+  const label = `${r.set} ${r.index}`.padEnd(9);
+  const lines = [r.passed ? `  ${label} pass` : `  ${label} FAIL  ${describeDifference(r.difference!)}`];
+  if (trace && r.trace) {
+    for (const entry of r.trace) {
+      const shown = describeValue(entry.type, entry.value, mode);
+      lines.push(`      ${entry.name} : ${entry.type} = ${shown[0]}`, ...shown.slice(1).map((l) => `        ${l}`));
+    }
+    if (!r.passed && r.got) lines.push(...drawPair(r.expected, r.got, mode, { input: 'expected', output: 'got' }).map((l) => `      ${l}`));
+  }
+  return lines;
+}
+
+export function registerRunCommand(program: Command): void {
+  program
+    .command('run')
+    .description('run a program on every pair of a task that has an output; exit code 1 when any pair fails')
+    .argument('<program>', 'file with the program text')
+    .argument('<task>', 'task JSON file or directory of them')
+    .option('--trace', "print every step's value")
+    .option('--json', 'print the results as JSON')
+    .action((programFile: string, taskPath: string, options: { trace?: boolean; json?: boolean }) => {
+      let loaded: LoadedProgram;
+      try {
+        loaded = loadProgramFile(programFile, defaultLibrary);
+      } catch (error) {
+        if (!(error instanceof ProgramFileError)) throw error;
+        if (options.json) writeJson({ program: programFile, ok: false, problems: error.problems });
+        else writeError(error.problems.map(formatProblem).join('\n'));
+        process.exitCode = 1;
+        return;
+      }
+      const entries = readTasks([taskPath]);
+      let allPassed = true;
+      const tasks: unknown[] = [];
+      const errors: ReturnType<typeof taskErrorData>[] = [];
+      for (const entry of entries) {
+        if (!entry.ok) {
+          allPassed = false;
+          errors.push(taskErrorData(entry.error));
+          if (!options.json) writeError(entry.error.message);
+          continue;
+        }
+        const results = runOnTask(loaded.program, entry.task, defaultLibrary, { trace: options.trace });
+        const passed = results.every((r) => r.passed);
+        if (!passed) allPassed = false;
+        if (options.json) {
+          tasks.push({ task: entry.task.name, file: entry.task.path, passed, pairs: results.map(pairData) });
+          continue;
+        }
+        const count = results.filter((r) => r.passed).length;
+        writeLines([
+          `${entry.task.name} (${entry.task.path})`,
+          ...results.flatMap((r) => pairLines(r, options.trace === true)),
+          `  ${count}/${results.length} pairs passed`,
+        ]);
+      }
+      if (options.json) writeJson({ program: programFile, ok: true, passed: allPassed, tasks, errors });
+      if (!allPassed) process.exitCode = 1;
+    });
+}

@@ -1,0 +1,60 @@
+/**
+ * Shows a runtime value of the language to a person (lines of text, grids drawn) or as plain
+ * JSON data (for --json output and exported traces).
+ */
+import { EMPTY, Grid } from '../grid/grid.ts';
+import { isFailure } from '../language/failure.ts';
+import { GridObject } from '../language/grid-object.ts';
+import { Palette } from '../language/palette.ts';
+import { Point } from '../language/point.ts';
+import type { Type } from '../language/types.ts';
+import { drawGrid, type ColourMode } from './terminal-grid.ts';
+
+/** JSON-ready data: grids as rows (EMPTY cells of object shapes as null). */
+export type ValueData =
+  | number
+  | boolean
+  | string
+  | null
+  | readonly ValueData[]
+  | { readonly [key: string]: ValueData };
+
+function rowsWithEmpty(grid: Grid): (number | null)[][] {
+  return grid.toRows().map((row) => row.map((v) => (v === EMPTY ? null : v)));
+}
+
+export function valueToData(value: unknown): ValueData {
+  if (isFailure(value)) return 'FAILURE';
+  if (value instanceof Grid) return rowsWithEmpty(value);
+  if (value instanceof GridObject) return { top: value.top, left: value.left, size: value.size, colour: value.mainColour, shape: rowsWithEmpty(value.shape) };
+  if (value instanceof Point) return { row: value.row, column: value.column };
+  if (value instanceof Palette) return value.pairs().map(([from, to]) => [from, to]);
+  if (Array.isArray(value)) return value.map(valueToData);
+  if (typeof value === 'number' || typeof value === 'boolean') return value;
+  if (typeof value === 'function') return 'function';
+  return String(value);
+}
+
+function describeObject(o: GridObject, mode: ColourMode): string[] {
+  return [`object at (${o.top}, ${o.left}), ${o.height}x${o.width}, ${o.size} cells, colour #${o.mainColour}`, ...drawGrid(o.shape, mode).map((l) => `  ${l}`)];
+}
+
+/** Lines showing the value; grids and object shapes are drawn. */
+export function describeValue(type: Type, value: unknown, mode: ColourMode): string[] {
+  if (isFailure(value)) return ['FAILURE'];
+  if (value instanceof Grid) return [`grid ${value.height}x${value.width}`, ...drawGrid(value, mode)];
+  if (value instanceof GridObject) return describeObject(value, mode);
+  if (value instanceof Point) return [`(${value.row}, ${value.column})`];
+  if (value instanceof Palette) return [`{${value.pairs().map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`];
+  if (Array.isArray(value)) {
+    const out = [`${value.length} ${type === 'Objects' ? 'object' : 'grid'}${value.length === 1 ? '' : 's'}`];
+    value.forEach((item, i) => {
+      const lines = item instanceof GridObject ? describeObject(item, mode) : describeValue('Grid', item, mode);
+      out.push(`[${i}] ${lines[0]}`, ...lines.slice(1).map((l) => `    ${l}`));
+    });
+    return out;
+  }
+  if (type === 'Colour' && typeof value === 'number') return [`#${value}`];
+  if (typeof value === 'number' || typeof value === 'boolean') return [String(value)];
+  return [String(value)];
+}
