@@ -1,0 +1,150 @@
+// Bad task files are rejected with the file and the JSON path of the problem; a directory with
+// one bad file still yields its good tasks; the CLI exits non-zero on bad input. All data here
+// is invented for these checks.
+import { spawnSync } from 'node:child_process';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { parseTask, readTasks, TaskFileError } from '../src/tasks/read-task.ts';
+
+const folder = mkdtempSync(join(tmpdir(), 'pithy-task-files-'));
+afterAll(() => rmSync(folder, { recursive: true, force: true }));
+
+const good = { train: [{ input: [[1, 0], [0, 1]], output: [[0, 1], [1, 0]] }], test: [{ input: [[2, 2], [0, 0]], output: [[0, 0], [2, 2]] }] };
+
+function rejection(text: string, file = 'harbour.json'): TaskFileError {
+  try {
+    parseTask(text, file);
+  } catch (error) {
+    expect(error).toBeInstanceOf(TaskFileError);
+    return error as TaskFileError;
+  }
+  throw new Error('expected the task to be rejected');
+}
+
+describe('bad task files', () => {
+  it('not JSON', () => {
+    const e = rejection('{"train": [', 'broken/quay.json');
+    expect(e.message).toContain('broken/quay.json');
+    expect(e.jsonPath).toBe('$');
+    expect(e.message).toMatch(/not valid JSON/);
+  });
+
+  it('rows of different lengths', () => {
+    const e = rejection(JSON.stringify({ train: [{ input: [[1, 2, 3], [4, 5]], output: [[1]] }], test: [{ input: [[1]] }] }));
+    expect(e.message).toContain('harbour.json');
+    expect(e.jsonPath).toBe('$.train[0].input[1]');
+    expect(e.message).toContain('$.train[0].input[1]');
+  });
+
+  it('a colour outside 0-9', () => {
+    const e = rejection(JSON.stringify({ train: [{ input: [[1]], output: [[0, 10]] }], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train[0].output[0][1]');
+    expect(e.message).toContain('harbour.json: at $.train[0].output[0][1]');
+    expect(e.message).toMatch(/0 to 9/);
+  });
+
+  it('a colour that is not a whole number', () => {
+    const e = rejection(JSON.stringify({ train: [{ input: [[1]], output: [[1]] }], test: [{ input: [[0.5]] }] }));
+    expect(e.jsonPath).toBe('$.test[0].input[0][0]');
+  });
+
+  it('an empty grid', () => {
+    const e = rejection(JSON.stringify({ train: [{ input: [], output: [[1]] }], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train[0].input');
+    expect(e.message).toContain('$.train[0].input');
+    expect(e.message).toMatch(/empty/);
+  });
+
+  it('an empty row', () => {
+    const e = rejection(JSON.stringify({ train: [{ input: [[]], output: [[1]] }], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train[0].input[0]');
+  });
+
+  it('a grid over the size cap (31 rows)', () => {
+    const tall = Array.from({ length: 31 }, () => [0, 1]);
+    const e = rejection(JSON.stringify({ train: [{ input: [[1]], output: [[1]] }, { input: tall, output: [[1]] }], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train[1].input');
+    expect(e.message).toMatch(/size cap of 30/);
+  });
+
+  it('a row over the size cap (31 cells)', () => {
+    const wide = [Array.from({ length: 31 }, () => 3)];
+    const e = rejection(JSON.stringify({ train: [{ input: [[1]], output: wide }], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train[0].output[0]');
+  });
+
+  it('no train pairs', () => {
+    const e = rejection(JSON.stringify({ train: [], test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train');
+    expect(e.message).toContain('harbour.json: at $.train');
+  });
+
+  it('train missing altogether', () => {
+    const e = rejection(JSON.stringify({ test: [{ input: [[1]] }] }));
+    expect(e.jsonPath).toBe('$.train');
+  });
+
+  it('a good file is read, with an optional test output', () => {
+    const task = parseTask(JSON.stringify({ ...good, test: [{ input: [[3]] }] }), 'good.json');
+    expect(task.name).toBe('good');
+    expect(task.train[0]!.output.toRows()).toEqual([[0, 1], [1, 0]]);
+    expect(task.test[0]!.output).toBeUndefined();
+  });
+});
+
+describe('a directory with one bad file', () => {
+  const directory = join(folder, 'mixed');
+  rmSync(directory, { recursive: true, force: true });
+  mkdirSync(directory, { recursive: true });
+  writeFileSync(join(directory, 'a-good.json'), JSON.stringify(good));
+  writeFileSync(join(directory, 'b-bad.json'), '{"train": [{"input": [[1, 2], [3]], "output": [[1]]}], "test": [{"input": [[1]]}]}');
+  writeFileSync(join(directory, 'c-good.json'), JSON.stringify(good));
+  writeFileSync(join(directory, 'notes.txt'), 'not a task');
+
+  it('still yields the good tasks and reports the bad one', () => {
+    const entries = readTasks([directory]);
+    expect(entries.map((e) => e.ok)).toEqual([true, false, true]);
+    const bad = entries[1]!;
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) {
+      expect(bad.file).toContain('b-bad.json');
+      expect(bad.error.message).toContain('b-bad.json');
+      expect(bad.error.jsonPath).toBe('$.train[0].input[1]');
+    }
+  });
+});
+
+describe('the command line on bad input', () => {
+  const bin = new URL('../bin/pithy.js', import.meta.url).pathname;
+  const pithy = (...args: string[]) => spawnSync(process.execPath, [bin, ...args], { encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' } });
+  const program = join(folder, 'swap.pithy');
+  writeFileSync(program, 'with deck\nanswer reflect_vertically(deck)\n');
+  const goodFile = join(folder, 'flip.json');
+  writeFileSync(goodFile, JSON.stringify({ train: [{ input: [[1, 1], [0, 2]], output: [[0, 2], [1, 1]] }], test: [{ input: [[3], [4]], output: [[4], [3]] }] }));
+  const badFile = join(folder, 'bad-colour.json');
+  writeFileSync(badFile, JSON.stringify({ train: [{ input: [[1, 12]], output: [[1]] }], test: [{ input: [[1]] }] }));
+
+  it('run exits 0 when every pair passes', () => {
+    const result = pithy('run', program, goodFile);
+    expect(result.stdout).toContain('2/2 pairs passed');
+    expect(result.status).toBe(0);
+  });
+
+  it('run exits non-zero on a bad task file and names the file and JSON path', () => {
+    const result = pithy('run', program, badFile);
+    expect(result.status).not.toBe(0);
+    expect(result.stderr).toContain('bad-colour.json');
+    expect(result.stderr).toContain('$.train[0].input[0][1]');
+  });
+
+  it('check exits non-zero on an ill-typed program, naming file:line:column and the expected type', () => {
+    const ill = join(folder, 'ill.pithy');
+    writeFileSync(ill, 'with deck\nboats = objects_by_colour(deck)\nanswer reflect_vertically(boats)\n');
+    const result = pithy('check', ill);
+    expect(result.status).toBe(1);
+    expect(result.stderr).toContain(`${ill}:3:1`);
+    expect(result.stderr).toContain('expected Grid, found Objects');
+  });
+});
