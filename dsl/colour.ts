@@ -1,4 +1,222 @@
-/** Colour primitives. */
-import type { Primitive } from '../src/library/primitive.ts';
+/** Recolouring: fixed changes, colour maps, swaps, keeping or removing a colour, colour ranks. */
+import { backgroundColour, colourCounts, components } from '../src/grid/components.ts';
+import { EMPTY, Grid } from '../src/grid/grid.ts';
+import { GridObject } from '../src/language/grid-object.ts';
+import { FAILURE, type Failure } from '../src/language/failure.ts';
+import { primitive } from '../src/library/primitive.ts';
 
-export const colourPrimitives: Primitive[] = [];
+/** The grid with every colour c replaced by `target[c]`; the same grid when nothing changes. */
+export function mapColours(g: Grid, target: Uint8Array): Grid {
+  const source = g.cells;
+  let changed = false;
+  for (let c = 0; c < 10; c++) {
+    if (target[c] !== c && hasCell(source, c)) {
+      changed = true;
+      break;
+    }
+  }
+  if (!changed) return g;
+  const cells = new Uint8Array(source.length);
+  for (let i = 0; i < source.length; i++) cells[i] = target[source[i]!]!;
+  return new Grid(g.height, g.width, cells);
+}
+
+function hasCell(cells: Uint8Array, colour: number): boolean {
+  return cells.indexOf(colour) >= 0;
+}
+
+function identityMap(): Uint8Array {
+  const target = new Uint8Array(256);
+  for (let c = 0; c < 256; c++) target[c] = c;
+  return target;
+}
+
+function recolour(g: Grid, from: number, to: number): Grid {
+  const target = identityMap();
+  target[from] = to;
+  return mapColours(g, target);
+}
+
+/** Cells of the colour keep it; every other cell becomes the background. */
+function keepColour(g: Grid, colour: number): Grid {
+  const background = backgroundColour(g);
+  const target = new Uint8Array(256).fill(background);
+  target[colour] = colour;
+  return mapColours(g, target);
+}
+
+/** The present colour with the most (sign 1) or fewest (sign -1) cells, lowest on ties. */
+function rankColour(g: Grid, sign: 1 | -1, skipBackground: boolean): number | Failure {
+  const counts = colourCounts(g);
+  const skip = skipBackground ? backgroundColour(g) : -1;
+  let best = -1;
+  for (let c = 0; c < 10; c++) {
+    if (c === skip || counts[c] === 0) continue;
+    if (best < 0 || (counts[c]! - counts[best]!) * sign > 0) best = c;
+  }
+  return best < 0 ? FAILURE : best;
+}
+
+export function recolourObject(o: GridObject, colour: number): GridObject {
+  const source = o.shape.cells;
+  const cells = new Uint8Array(source.length);
+  for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? EMPTY : colour;
+  return new GridObject(o.top, o.left, new Grid(o.height, o.width, cells));
+}
+
+/** Paints the cells of an object (at its position) in one colour, onto a copy's cells. */
+function paintCellsOf(cells: Uint8Array, width: number, o: GridObject, colour: number): void {
+  const shape = o.shape.cells;
+  const w = o.width;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < w; c++) if (shape[r * w + c] !== EMPTY) cells[(o.top + r) * width + o.left + c] = colour;
+  }
+}
+
+/** The first largest object gets `large`, the first smallest `small`; needs two objects. */
+function recolourBySize(g: Grid, large: number, small: number): Grid | Failure {
+  const objects = components(g, { diagonal: false, multicolour: false, background: backgroundColour(g) });
+  if (objects.length < 2) return FAILURE;
+  let biggest = 0;
+  let least = 0;
+  for (let i = 1; i < objects.length; i++) {
+    if (objects[i]!.size > objects[biggest]!.size) biggest = i;
+    if (objects[i]!.size < objects[least]!.size) least = i;
+  }
+  if (biggest === least) return FAILURE;
+  const cells = g.cells.slice();
+  paintCellsOf(cells, g.width, objects[biggest]!, large);
+  paintCellsOf(cells, g.width, objects[least]!, small);
+  return new Grid(g.height, g.width, cells);
+}
+
+export const colourPrimitives = [
+  primitive({
+    name: 'recolour',
+    category: 'colour',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 4,
+    doc: 'Cells of the first colour get the second colour.',
+    example: { input: [[1, 2], [2, 1]], expression: 'recolour(grid, #1, #7)', output: [[7, 2], [2, 7]] },
+    run: recolour,
+  }),
+  primitive({
+    name: 'recolour_all',
+    category: 'colour',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Every non-background cell gets the colour.',
+    example: { input: [[0, 1, 0], [2, 0, 3]], expression: 'recolour_all(grid, #4)', output: [[0, 4, 0], [4, 0, 4]] },
+    run: (g, colour) => {
+      const target = new Uint8Array(256).fill(colour);
+      const background = backgroundColour(g);
+      target[background] = background;
+      return mapColours(g, target);
+    },
+  }),
+  primitive({
+    name: 'apply_palette',
+    category: 'colour',
+    parameters: ['Grid', 'Palette'],
+    result: 'Grid',
+    bits: 4,
+    doc: 'Replaces every colour by what the palette maps it to, all at once.',
+    example: { input: [[1, 2], [3, 1]], expression: 'apply_palette(grid, {#1 -> #2, #2 -> #1})', output: [[2, 1], [3, 2]] },
+    run: (g, palette) => {
+      const target = identityMap();
+      for (let c = 0; c < 10; c++) target[c] = palette.target[c]!;
+      return mapColours(g, target);
+    },
+  }),
+  primitive({
+    name: 'swap_colours',
+    category: 'colour',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Cells of the first colour get the second and cells of the second get the first.',
+    example: { input: [[1, 0, 2]], expression: 'swap_colours(grid, #1, #2)', output: [[2, 0, 1]] },
+    run: (g, a, b) => {
+      const target = identityMap();
+      target[a] = b;
+      target[b] = a;
+      return mapColours(g, target);
+    },
+  }),
+  primitive({
+    name: 'keep_colour',
+    category: 'colour',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Cells of the colour stay; every other cell becomes the background colour.',
+    example: { input: [[0, 1, 2], [2, 0, 0]], expression: 'keep_colour(grid, #2)', output: [[0, 0, 2], [2, 0, 0]] },
+    run: keepColour,
+  }),
+  primitive({
+    name: 'remove_colour',
+    category: 'colour',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Cells of the colour become the background colour.',
+    example: { input: [[0, 1, 2], [2, 0, 0]], expression: 'remove_colour(grid, #2)', output: [[0, 1, 0], [0, 0, 0]] },
+    run: (g, colour) => recolour(g, colour, backgroundColour(g)),
+  }),
+  primitive({
+    name: 'most_common_colour',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Colour',
+    bits: 5,
+    doc: 'The non-background colour with the most cells (the lowest on ties); fails when there is none.',
+    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'most_common_colour(grid)', output: 4 },
+    run: (g) => rankColour(g, 1, true),
+  }),
+  primitive({
+    name: 'least_common_colour',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Colour',
+    bits: 5,
+    doc: 'The colour present with the fewest cells, background included (the lowest on ties).',
+    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'least_common_colour(grid)', output: 3 },
+    run: (g) => rankColour(g, -1, false),
+  }),
+  primitive({
+    name: 'recolour_object',
+    category: 'colour',
+    parameters: ['Object', 'Colour'],
+    result: 'Object',
+    bits: 5,
+    doc: 'The same object with every cell in the colour.',
+    example: { input: [[1, 2, 0], [0, 0, 0]], expression: 'object_picture(recolour_object(first_object(objects_multicolour(grid)), #6))', output: [[6, 6]] },
+    run: recolourObject,
+  }),
+  primitive({
+    name: 'recolour_objects_by_size',
+    category: 'colour',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Among the one-colour objects (edge neighbours), the largest gets the first colour and the smallest the second; fails with fewer than two.',
+    example: {
+      input: [[1, 1, 0, 1], [0, 0, 0, 0], [1, 0, 1, 1]],
+      expression: 'recolour_objects_by_size(grid, #2, #3)',
+      output: [[2, 2, 0, 3], [0, 0, 0, 0], [1, 0, 1, 1]],
+    },
+    run: recolourBySize,
+  }),
+  primitive({
+    name: 'colour_of_cell',
+    category: 'colour',
+    parameters: ['Grid', 'Point'],
+    result: 'Colour',
+    bits: 7,
+    doc: 'The colour of the cell at (row, column); fails outside the grid.',
+    example: { input: [[1, 2], [3, 4]], expression: 'colour_of_cell(grid, (1, 0))', output: 3 },
+    run: (g, p) => (p.row >= 0 && p.column >= 0 && p.row < g.height && p.column < g.width ? g.cells[p.row * g.width + p.column]! : FAILURE),
+  }),
+];

@@ -1,0 +1,19 @@
+/** All the cells of one colour gathered into a single object, wherever they lie. */
+import { EMPTY, Grid } from './grid.ts';
+import { GridObject } from '../language/grid-object.ts';
+import { cellBounds } from './crop.ts';
+
+/** The object made of every cell of `colour`, or undefined when the grid has none. */
+export function cellsOfColour(grid: Grid, colour: number): GridObject | undefined {
+  const bounds = cellBounds(grid, colour, true);
+  if (!bounds) return undefined;
+  const h = bounds.bottom - bounds.top + 1;
+  const w = bounds.right - bounds.left + 1;
+  const shape = new Uint8Array(h * w).fill(EMPTY);
+  const cells = grid.cells;
+  for (let r = 0; r < h; r++) {
+    const from = (bounds.top + r) * grid.width + bounds.left;
+    for (let c = 0; c < w; c++) if (cells[from + c] === colour) shape[r * w + c] = colour;
+  }
+  return new GridObject(bounds.top, bounds.left, new Grid(h, w, shape));
+}
