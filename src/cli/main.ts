@@ -7,6 +7,8 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
 import { registerCheckCommand } from './check-command.ts';
+import { registerEvalCommand } from './eval-command.ts';
+import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
@@ -21,9 +23,8 @@ export function buildProgram(): Command {
   registerCheckCommand(program);
   registerShowCommand(program);
   registerPrimitivesCommand(program);
-  // ---------------------------------------------------------------------------------------
-  // Search commands: the lead registers `solve` and `eval` here (src/search/ provides them).
-  // ---------------------------------------------------------------------------------------
+  registerSolveCommand(program);
+  registerEvalCommand(program);
   return program;
 }
 

@@ -1,0 +1,20 @@
+/** Worker thread: solves the task files it is sent, one at a time. */
+import { parentPort } from 'node:worker_threads';
+import type { SolveOptions } from '../search/solve.ts';
+import { errorReport, solveFile } from './solve-file.ts';
+
+export interface WorkerRequest {
+  readonly id: number;
+  readonly file: string;
+  readonly options: Omit<SolveOptions, 'library'>;
+}
+
+parentPort!.on('message', (request: WorkerRequest) => {
+  let report;
+  try {
+    report = solveFile(request.file, request.options);
+  } catch (error) {
+    report = errorReport(request.file, `${request.file}: the solver stopped with an internal error: ${(error as Error).message}`);
+  }
+  parentPort!.postMessage({ id: request.id, report });
+});

@@ -1,0 +1,24 @@
+/** What solving one task file gives, in a form that crosses threads and lands in JSON lines. */
+import type { EnumerationStatistics, StopReason } from '../search/enumerator.ts';
+
+export interface ReportedSolution {
+  readonly program: string;
+  readonly bits: number;
+}
+
+export interface TaskReport {
+  /** The file name without `.json`. */
+  readonly task: string;
+  readonly file: string;
+  /** 'found': at least one program fits every demonstration; 'error': the task could not be read or the solver crashed. */
+  readonly status: 'found' | 'not found' | 'error';
+  /** For 'error': what went wrong, naming the file. */
+  readonly error?: string;
+  /** Cheapest first. */
+  readonly solutions: readonly ReportedSolution[];
+  /** Per test input in file order: the attempted output grids as rows. */
+  readonly attempts: readonly (readonly number[][])[][];
+  readonly reason: StopReason | 'error';
+  readonly seconds: number;
+  readonly statistics?: EnumerationStatistics;
+}

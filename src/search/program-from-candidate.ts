@@ -1,0 +1,51 @@
+/**
+ * Turns a found candidate into a readable program: every call used as an argument becomes a
+ * named step (shared when it appears twice), named after its type; sections stay inline,
+ * since a step holds a value, not a function.
+ */
+import type { Expression, Program, Step } from '../language/ast.ts';
+import { printExpression } from '../language/printer.ts';
+import type { Candidate } from './value-store.ts';
+
+const STEP_NAMES: Record<string, string> = {
+  Grid: 'grid',
+  Colour: 'colour',
+  Int: 'number',
+  Bool: 'flag',
+  Object: 'object',
+  Objects: 'objects',
+  Point: 'point',
+  Grids: 'parts',
+  Palette: 'palette',
+};
+
+export function programFromCandidate(candidate: Candidate, inputName: string): Program {
+  const steps: Step[] = [];
+  const named = new Map<string, string>();
+  const used = new Map<string, number>();
+
+  const visit = (c: Candidate, asStep: boolean): Expression => {
+    if (c.leaf) return c.leaf;
+    const production = c.production!;
+    const args = c.arguments.map((a) => visit(a, true));
+    const e: Expression = {
+      kind: 'call',
+      primitive: production.primitive.name,
+      arguments: production.section ? [{ kind: 'hole' }, ...args] : args,
+    };
+    if (!asStep || production.section) return e;
+    const key = printExpression(e);
+    const existing = named.get(key);
+    if (existing) return { kind: 'variable', name: existing };
+    const base = STEP_NAMES[c.type] ?? 'value';
+    const n = (used.get(base) ?? 0) + 1;
+    used.set(base, n);
+    const name = n === 1 ? base : `${base}_${n}`;
+    named.set(key, name);
+    steps.push({ comments: [], name, expression: e });
+    return { kind: 'variable', name };
+  };
+
+  const answer = visit(candidate, false);
+  return { comments: [], input: inputName, steps, answerComments: [], answer };
+}

@@ -1,0 +1,84 @@
+/**
+ * Solving one puzzle: the shortest program (in bits) consistent with every demonstration,
+ * and up to N attempts per test input from the N cheapest solutions with distinct test outputs.
+ */
+import type { Grid } from '../grid/grid.ts';
+import type { Program } from '../language/ast.ts';
+import { printProgram } from '../language/printer.ts';
+import { defaultLibrary } from '../library/default-library.ts';
+import type { Library } from '../library/library.ts';
+import type { Puzzle } from '../tasks/task.ts';
+import { taskConstants } from './constants.ts';
+import { enumerate, type EnumerationStatistics, type StopReason } from './enumerator.ts';
+import { programFromCandidate } from './program-from-candidate.ts';
+import { buildProductions, type Production } from './productions.ts';
+
+export interface SolveOptions {
+  /** Wall-time limit per task in seconds (default 20). */
+  readonly timeLimitSeconds?: number;
+  /** Attempts per test input (default 2). */
+  readonly attempts?: number;
+  /** Cap on candidates evaluated (default 50 million). */
+  readonly maxCandidates?: number;
+  /** Cap on the approximate bytes of values kept by the store (default 1.5 GB). */
+  readonly maxStoreBytes?: number;
+  /** Highest program cost in bits to try (default 60). */
+  readonly maxBits?: number;
+  /** Observational-equivalence pruning (default on; off only for measuring it). */
+  readonly pruning?: boolean;
+  /** After the first solution, how many more bits to search for further attempts (default 6). */
+  readonly extraBits?: number;
+  readonly library?: Library;
+}
+
+export interface Solution {
+  readonly program: Program;
+  readonly text: string;
+  /** Description length of the program in bits (see README, "Description length"). */
+  readonly bits: number;
+  /** The program's output for each test input, in file order. */
+  readonly testOutputs: readonly Grid[];
+}
+
+export interface SolveResult {
+  readonly task: string;
+  /** Cheapest first; empty when nothing was found. */
+  readonly solutions: readonly Solution[];
+  /** Why the search stopped: 'solved', or the budget that ran out, or 'exhausted' (every cost up to maxBits tried). */
+  readonly reason: StopReason;
+  readonly seconds: number;
+  readonly statistics: Readonly<EnumerationStatistics>;
+}
+
+const productionCache = new WeakMap<Library, Production[]>();
+
+function productionsFor(library: Library): Production[] {
+  let p = productionCache.get(library);
+  if (!p) productionCache.set(library, (p = buildProductions(library)));
+  return p;
+}
+
+export const INPUT_NAME = 'input';
+
+export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveResult {
+  const started = performance.now();
+  const library = options.library ?? defaultLibrary;
+  const attempts = options.attempts ?? 2;
+  const inputs = [...puzzle.train.map((p) => p.input), ...puzzle.testInputs];
+  const outputs = puzzle.train.map((p) => p.output);
+  const outcome = enumerate(inputs, outputs, taskConstants(puzzle), productionsFor(library), {
+    deadline: started + (options.timeLimitSeconds ?? 20) * 1000,
+    maxCandidates: options.maxCandidates ?? 50_000_000,
+    maxStoreBytes: options.maxStoreBytes ?? 1.5e9,
+    maxCost: options.maxBits ?? 60,
+    attempts,
+    extraBits: options.extraBits ?? 6,
+    pruning: options.pruning ?? true,
+  }, INPUT_NAME);
+  const trainCount = outputs.length;
+  const solutions: Solution[] = outcome.solutions.slice(0, attempts).map((c) => {
+    const program = programFromCandidate(c, INPUT_NAME);
+    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[] };
+  });
+  return { task: puzzle.name, solutions, reason: outcome.reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
+}
