@@ -1,0 +1,282 @@
+/** Geometry primitives: hand-worked cases and fast-check laws. */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { geometryPrimitives } from '../dsl/geometry.ts';
+import { colourCounts } from '../src/grid/components.ts';
+import { Grid } from '../src/grid/grid.ts';
+import { FAILURE } from '../src/language/failure.ts';
+import { evaluateExpression } from '../src/language/interpreter.ts';
+import { parseExpression } from '../src/language/parser.ts';
+import { Point } from '../src/language/point.ts';
+import { defaultLibrary } from '../src/library/default-library.ts';
+import { Library } from '../src/library/library.ts';
+import { applyPrimitive } from '../src/library/primitive.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
+
+const library = new Library(geometryPrimitives);
+function apply(name: string, ...args: unknown[]): unknown {
+  const p = library.get(name);
+  if (!p) throw new Error(`tests/primitives-geometry.test.ts: no primitive named '${name}'`);
+  return applyPrimitive(p, args);
+}
+function grid(name: string, ...args: unknown[]): Grid {
+  const result = apply(name, ...args);
+  if (!(result instanceof Grid)) throw new Error(`tests/primitives-geometry.test.ts: ${name} gave no grid`);
+  return result;
+}
+function grids(name: string, ...args: unknown[]): readonly Grid[] {
+  const result = apply(name, ...args);
+  if (!Array.isArray(result)) throw new Error(`tests/primitives-geometry.test.ts: ${name} gave no list of grids`);
+  return result as Grid[];
+}
+const rows = (value: unknown): unknown =>
+  value instanceof Grid ? value.toRows() : Array.isArray(value) ? value.map((g: Grid) => g.toRows()) : value;
+const G = Grid.fromRows;
+
+/** The colours of one column of a grid, non-zero only, top to bottom. */
+function columnColours(g: Grid, column: number, background: number): number[] {
+  const out: number[] = [];
+  for (let r = 0; r < g.height; r++) if (g.get(r, column) !== background) out.push(g.get(r, column));
+  return out;
+}
+
+describe('geometry laws', () => {
+  it('tile multiplies the size and repeats the grid', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 5, maxWidth: 5 }), fc.integer({ min: 1, max: 5 }), fc.integer({ min: 1, max: 5 }), (g, down, across) => {
+        const t = grid('tile', g, down, across);
+        expect([t.height, t.width]).toEqual([g.height * down, g.width * across]);
+        for (let r = 0; r < t.height; r++) for (let c = 0; c < t.width; c++) expect(t.get(r, c)).toBe(g.get(r % g.height, c % g.width));
+      }),
+    );
+  });
+
+  it('scale_up multiplies the size, and scale_down undoes it', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 6, maxWidth: 6 }), fc.integer({ min: 1, max: 5 }), (g, k) => {
+        const big = grid('scale_up', g, k);
+        expect([big.height, big.width]).toEqual([g.height * k, g.width * k]);
+        expect(grid('scale_down', big, k).equals(g)).toBe(true);
+      }),
+    );
+  });
+
+  it('split_across then join_right of the parts restores the grid; same for split_down and join_below', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 4 }), fc.integer({ min: 1, max: 4 }), arbitraryGrid({ maxHeight: 4, maxWidth: 4 }), (n, m, seed) => {
+        const g = grid('tile', seed, m, n);
+        const across = grids('split_across', g, n);
+        expect(across.length).toBe(n);
+        let joined = across[0]!;
+        for (let i = 1; i < across.length; i++) joined = grid('join_right', joined, across[i]!);
+        expect(joined.equals(g)).toBe(true);
+        const down = grids('split_down', g, m);
+        let stacked = down[0]!;
+        for (let i = 1; i < down.length; i++) stacked = grid('join_below', stacked, down[i]!);
+        expect(stacked.equals(g)).toBe(true);
+      }),
+    );
+  });
+
+  it('translate by (0, 0) is the identity; translate there and back keeps the cells that stayed inside', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: -3, max: 3 }), fc.integer({ min: -3, max: 3 }), (g, dr, dc) => {
+        expect(grid('translate', g, new Point(0, 0)).equals(g)).toBe(true);
+        const moved = grid('translate', g, new Point(dr, dc));
+        for (let r = 0; r < g.height; r++) {
+          for (let c = 0; c < g.width; c++) {
+            const tr = r + dr;
+            const tc = c + dc;
+            if (tr >= 0 && tr < g.height && tc >= 0 && tc < g.width) expect(moved.get(tr, tc)).toBe(g.get(r, c));
+          }
+        }
+      }),
+    );
+  });
+
+  it('fall_down is idempotent and keeps the colours of every column in order', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const fallen = grid('fall_down', g);
+        expect(grid('fall_down', fallen).equals(fallen)).toBe(true);
+        // The background cannot change: the cells are only moved.
+        expect(Array.from(colourCounts(fallen))).toEqual(Array.from(colourCounts(g)));
+        let background = 0;
+        const counts = colourCounts(g);
+        for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
+        for (let c = 0; c < g.width; c++) {
+          expect(columnColours(fallen, c, background)).toEqual(columnColours(g, c, background));
+          // All non-background cells sit at the bottom of the column.
+          const n = columnColours(g, c, background).length;
+          for (let r = g.height - n; r < g.height; r++) expect(fallen.get(r, c)).not.toBe(background);
+        }
+      }),
+    );
+  });
+
+  it('each fall is idempotent and fall_left is fall_up seen through the transpose', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        for (const name of ['fall_up', 'fall_left', 'fall_right']) {
+          const once = grid(name, g);
+          expect(grid(name, once).equals(once)).toBe(true);
+        }
+        const transposed = new Grid(g.width, g.height, Uint8Array.from({ length: g.cells.length }, (_, i) => g.get(i % g.height, Math.floor(i / g.height))));
+        const viaTranspose = grid('fall_up', transposed);
+        const left = grid('fall_left', g);
+        for (let r = 0; r < g.height; r++) for (let c = 0; c < g.width; c++) expect(left.get(r, c)).toBe(viaTranspose.get(c, r));
+      }),
+    );
+  });
+
+  it('settle_objects_down keeps the colour counts and is idempotent', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const settled = grid('settle_objects_down', g);
+        expect(Array.from(colourCounts(settled))).toEqual(Array.from(colourCounts(g)));
+        expect(grid('settle_objects_down', settled).equals(settled)).toBe(true);
+      }),
+    );
+  });
+
+  it('split_at_lines returns the two panes either side of a separator column', () => {
+    // Panes hold no colour 5, and their first two rows are 1s then 2s, so no pane column is
+    // a full line of one colour and no window row is full (the 5 interrupts it).
+    const pane = (g: Grid): Grid =>
+      G(g.toRows().map((row, r) => row.map((v) => (r === 0 ? 1 : r === 1 ? 2 : v === 5 ? 6 : v))));
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 4 }), arbitraryGrid({ minHeight: 4, maxHeight: 4, maxWidth: 4 }), arbitraryGrid({ minHeight: 4, maxHeight: 4, maxWidth: 4 }), (h, a, b) => {
+        const left = pane(G(a.toRows().slice(0, h)));
+        const right = pane(G(b.toRows().slice(0, h)));
+        const window = grid('join_right', grid('join_right', left, G(Array.from({ length: h }, () => [5]))), right);
+        const panes = grids('split_at_lines', window);
+        expect(panes.length).toBe(2);
+        expect(panes[0]!.equals(left)).toBe(true);
+        expect(panes[1]!.equals(right)).toBe(true);
+      }),
+    );
+  });
+
+  it('blank_like keeps the size', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        const b = grid('blank_like', g, colour);
+        expect([b.height, b.width]).toEqual([g.height, g.width]);
+        expect(colourCounts(b)[colour]).toBe(g.height * g.width);
+      }),
+    );
+  });
+});
+
+describe('geometry hand-worked cases', () => {
+  it('translate clips and fills with the background', () => {
+    const g = G([[5, 5, 5], [5, 1, 2], [5, 5, 5]]); // background 5
+    expect(rows(apply('translate', g, new Point(-1, 1)))).toEqual([[5, 5, 1], [5, 5, 5], [5, 5, 5]]);
+    expect(rows(apply('translate', g, new Point(0, -9)))).toEqual([[5, 5, 5], [5, 5, 5], [5, 5, 5]]);
+  });
+
+  it('scale_down fails on mixed blocks and bad factors; scale_up respects the cap', () => {
+    expect(apply('scale_down', G([[1, 2], [1, 1]]), 2)).toBe(FAILURE);
+    expect(apply('scale_down', G([[1, 1, 1]]), 2)).toBe(FAILURE);
+    expect(apply('scale_up', G([[1]]), 0)).toBe(FAILURE);
+    expect(apply('scale_up', G([[1]]), 11)).toBe(FAILURE);
+    expect(apply('scale_up', Grid.filled(4, 4, 1), 8)).toBe(FAILURE);
+    expect(rows(apply('scale_up', G([[1, 2]]), 3))).toEqual([[1, 1, 1, 2, 2, 2], [1, 1, 1, 2, 2, 2], [1, 1, 1, 2, 2, 2]]);
+  });
+
+  it('tile rejects counts out of range and sizes over the cap', () => {
+    expect(apply('tile', G([[1]]), 0, 2)).toBe(FAILURE);
+    expect(apply('tile', G([[1]]), 2, 11)).toBe(FAILURE);
+    expect(apply('tile', Grid.filled(1, 4, 1), 1, 8)).toBe(FAILURE);
+    expect(rows(apply('tile', G([[1], [2]]), 1, 3))).toEqual([[1, 1, 1], [2, 2, 2]]);
+  });
+
+  it('repeat_to_size crops the repetition and rejects bad sizes', () => {
+    expect(rows(apply('repeat_to_size', G([[1, 2, 3]]), 2, 4))).toEqual([[1, 2, 3, 1], [1, 2, 3, 1]]);
+    expect(apply('repeat_to_size', G([[1]]), 0, 4)).toBe(FAILURE);
+    expect(apply('repeat_to_size', G([[1]]), 31, 4)).toBe(FAILURE);
+  });
+
+  it('fractal_tile puts a copy of the grid under each non-background cell', () => {
+    expect(rows(apply('fractal_tile', G([[0, 2], [0, 0]])))).toEqual([
+      [0, 0, 0, 2],
+      [0, 0, 0, 0],
+      [0, 0, 0, 0],
+      [0, 0, 0, 0],
+    ]);
+    expect(apply('fractal_tile', Grid.filled(6, 6, 1))).toBe(FAILURE);
+  });
+
+  it('join_right and join_below need matching sides', () => {
+    expect(apply('join_right', G([[1]]), G([[1], [2]]))).toBe(FAILURE);
+    expect(apply('join_below', G([[1]]), G([[1, 2]]))).toBe(FAILURE);
+    expect(rows(apply('join_below', G([[1, 2]]), G([[3, 4], [5, 6]])))).toEqual([[1, 2], [3, 4], [5, 6]]);
+    expect(apply('join_right', Grid.filled(1, 20, 1), Grid.filled(1, 11, 1))).toBe(FAILURE);
+  });
+
+  it('split_across and split_down: exact parts, parts with one-cell separators, and failures', () => {
+    expect(rows(apply('split_across', G([[1, 2, 3, 4, 5, 6]]), 3))).toEqual([[[1, 2]], [[3, 4]], [[5, 6]]]);
+    expect(rows(apply('split_across', G([[1, 9, 2, 9, 3]]), 3))).toEqual([[[1]], [[2]], [[3]]]);
+    expect(apply('split_across', G([[1, 2, 3, 4]]), 3)).toBe(FAILURE);
+    expect(apply('split_across', G([[1, 2]]), 3)).toBe(FAILURE);
+    expect(apply('split_across', G([[1, 2]]), 0)).toBe(FAILURE);
+    expect(rows(apply('split_down', G([[1, 1], [7, 7], [2, 2]]), 2))).toEqual([[[1, 1]], [[2, 2]]]);
+  });
+
+  it('split_at_lines finds grey separators on a black background, in reading order', () => {
+    const window = G([
+      [1, 0, 5, 0, 2],
+      [0, 0, 5, 0, 0],
+      [5, 5, 5, 5, 5],
+      [0, 3, 5, 4, 0],
+      [0, 0, 5, 0, 0],
+    ]);
+    expect(rows(apply('split_at_lines', window))).toEqual([
+      [[1, 0], [0, 0]],
+      [[0, 2], [0, 0]],
+      [[0, 3], [0, 0]],
+      [[4, 0], [0, 0]],
+    ]);
+    expect(apply('split_at_lines', G([[1, 2], [3, 4]]))).toBe(FAILURE);
+  });
+
+  it('part counts from 0 and fails outside the list', () => {
+    const parts = [G([[1]]), G([[2]])];
+    expect(rows(apply('part', parts, 1))).toEqual([[2]]);
+    expect(apply('part', parts, 2)).toBe(FAILURE);
+    expect(apply('part', parts, -1)).toBe(FAILURE);
+  });
+
+  it('falls keep order on a non-black background', () => {
+    const g = G([[7, 1, 7], [2, 7, 7], [7, 7, 3]]); // background 7
+    expect(rows(apply('fall_right', g))).toEqual([[7, 7, 1], [7, 7, 2], [7, 7, 3]]);
+    expect(rows(apply('fall_down', G([[4, 0], [0, 0], [6, 0]])))).toEqual([[0, 0], [4, 0], [6, 0]]);
+  });
+
+  it('settle_objects_down lets a shape land on the one below it', () => {
+    const g = G([
+      [0, 3, 3, 0],
+      [0, 0, 3, 0],
+      [0, 0, 0, 0],
+      [0, 0, 0, 0],
+      [0, 0, 8, 0],
+    ]);
+    expect(rows(apply('settle_objects_down', g))).toEqual([
+      [0, 0, 0, 0],
+      [0, 0, 0, 0],
+      [0, 3, 3, 0],
+      [0, 0, 3, 0],
+      [0, 0, 8, 0],
+    ]);
+  });
+});
+
+describe('geometry worked examples', () => {
+  for (const p of geometryPrimitives) {
+    it(`${p.name}: the worked example gives the hand-worked output`, () => {
+      const env = new Map<string, unknown>([['grid', Grid.fromRows(p.example.input)]]);
+      const value = evaluateExpression(parseExpression(p.example.expression), env, defaultLibrary);
+      expect(rows(value)).toEqual(p.example.output);
+    });
+  }
+});
