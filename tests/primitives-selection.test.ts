@@ -1,0 +1,244 @@
+/** Object selection primitives: hand-worked cases and fast-check laws. */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { EMPTY, Grid } from '../src/grid/grid.ts';
+import { FAILURE } from '../src/language/failure.ts';
+import { GridObject } from '../src/language/grid-object.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { callPrimitive, evaluate } from './support/run-primitive.ts';
+
+const G = Grid.fromRows;
+
+function objectsOf(g: Grid, extractor = 'objects_by_colour'): GridObject[] {
+  return callPrimitive(extractor, g) as GridObject[];
+}
+const size = (o: GridObject) => callPrimitive('object_size', o) as number;
+const EXTRACTORS = ['objects_by_colour', 'objects_multicolour_diagonal', 'colour_groups'] as const;
+const arbitraryObjects = fc.tuple(arbitraryGrid(), fc.constantFrom(...EXTRACTORS)).map(([g, e]) => ({ grid: g, objects: objectsOf(g, e) }));
+
+const KEYS = ['object_size', 'object_height', 'object_width', 'colour_count', 'object_top', 'object_left', 'object_colour', 'hole_count'] as const;
+const keyFunction = (name: string) => (o: GridObject) => callPrimitive(name, o) as number;
+
+describe('selection laws', () => {
+  it('largest_object is at least as big as every object, and the first such; smallest_object likewise', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, ({ objects }) => {
+        const largest = callPrimitive('largest_object', objects);
+        const smallest = callPrimitive('smallest_object', objects);
+        if (objects.length === 0) {
+          expect(largest).toBe(FAILURE);
+          expect(smallest).toBe(FAILURE);
+          return;
+        }
+        const big = largest as GridObject;
+        const small = smallest as GridObject;
+        for (const o of objects) {
+          expect(big.size).toBeGreaterThanOrEqual(o.size);
+          expect(small.size).toBeLessThanOrEqual(o.size);
+        }
+        expect(objects.findIndex((o) => o.size === big.size)).toBe(objects.indexOf(big));
+        expect(objects.findIndex((o) => o.size === small.size)).toBe(objects.indexOf(small));
+      }),
+    );
+  });
+
+  it('keep_objects and drop_objects split the list into the holding and the failing objects, order kept', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, fc.integer({ min: 0, max: 9 }), fc.integer({ min: 0, max: 6 }), ({ objects }, colour, n) => {
+        const tests = [(o: GridObject) => callPrimitive('has_colour', o, colour) as boolean, (o: GridObject) => callPrimitive('is_bigger_than', o, n) as boolean];
+        for (const test of tests) {
+          const kept = callPrimitive('keep_objects', objects, test) as GridObject[];
+          const dropped = callPrimitive('drop_objects', objects, test) as GridObject[];
+          expect(kept).toEqual(objects.filter((o) => test(o)));
+          expect(dropped).toEqual(objects.filter((o) => !test(o)));
+          expect(kept.length + dropped.length).toBe(objects.length);
+        }
+      }),
+    );
+  });
+
+  it('sort_objects is a permutation, ordered by the key, equal keys in their old order', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, fc.constantFrom(...KEYS), ({ objects }, keyName) => {
+        const key = keyFunction(keyName);
+        const sorted = callPrimitive('sort_objects', objects, key) as GridObject[];
+        expect(sorted.length).toBe(objects.length);
+        expect(new Set(sorted)).toEqual(new Set(objects));
+        for (let i = 1; i < sorted.length; i++) {
+          const a = key(sorted[i - 1]!);
+          const b = key(sorted[i]!);
+          expect(a).toBeLessThanOrEqual(b);
+          if (a === b) expect(objects.indexOf(sorted[i - 1]!)).toBeLessThan(objects.indexOf(sorted[i]!));
+        }
+      }),
+    );
+  });
+
+  it('object_with_most / object_with_least have the extreme key', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, fc.constantFrom(...KEYS), ({ objects }, keyName) => {
+        const key = keyFunction(keyName);
+        const most = callPrimitive('object_with_most', objects, key);
+        const least = callPrimitive('object_with_least', objects, key);
+        if (objects.length === 0) {
+          expect(most).toBe(FAILURE);
+          expect(least).toBe(FAILURE);
+          return;
+        }
+        for (const o of objects) {
+          expect(key(most as GridObject)).toBeGreaterThanOrEqual(key(o));
+          expect(key(least as GridObject)).toBeLessThanOrEqual(key(o));
+        }
+      }),
+    );
+  });
+
+  it('first_object, last_object and object_at pick by position and fail out of range', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, fc.integer({ min: -3, max: 40 }), ({ objects }, index) => {
+        expect(callPrimitive('first_object', objects)).toBe(objects.length ? objects[0] : FAILURE);
+        expect(callPrimitive('last_object', objects)).toBe(objects.length ? objects[objects.length - 1] : FAILURE);
+        expect(callPrimitive('object_at', objects, index)).toBe(index >= 0 && index < objects.length ? objects[index] : FAILURE);
+      }),
+    );
+  });
+
+  it('keys agree with the object itself', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, ({ objects }) => {
+        for (const o of objects) {
+          let cells = 0;
+          const colours = new Set<number>();
+          for (const v of o.shape.cells) if (v !== EMPTY) (cells++, colours.add(v));
+          expect(size(o)).toBe(cells);
+          expect(callPrimitive('colour_count', o)).toBe(colours.size);
+          expect(callPrimitive('is_single_colour', o)).toBe(colours.size === 1);
+          expect(callPrimitive('is_solid_rectangle', o)).toBe(cells === o.height * o.width);
+          expect(callPrimitive('object_height', o)).toBe(o.shape.height);
+          expect(callPrimitive('object_width', o)).toBe(o.shape.width);
+          expect(callPrimitive('has_size', o, cells)).toBe(true);
+          expect(callPrimitive('is_bigger_than', o, cells)).toBe(false);
+          expect(callPrimitive('is_bigger_than', o, cells - 1)).toBe(true);
+          const rows = o.shape.toRows();
+          const mirrored = rows.map((row) => [...row].reverse());
+          expect(callPrimitive('is_symmetric_object', o)).toBe(JSON.stringify(rows) === JSON.stringify(mirrored));
+        }
+      }),
+    );
+  });
+
+  it('odd_one_out, when it succeeds, gives an object no other object looks like while all others have a twin', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, ({ objects }) => {
+        const odd = callPrimitive('odd_one_out', objects);
+        if (odd === FAILURE) return;
+        const same = (a: GridObject, b: GridObject) => a.shape.equals(b.shape);
+        for (const o of objects) {
+          const twins = objects.filter((p) => p !== o && same(o, p)).length;
+          if (o === odd) expect(twins).toBe(0);
+          else expect(twins).toBeGreaterThan(0);
+        }
+      }),
+    );
+  });
+});
+
+describe('selection, hand-worked cases', () => {
+  // 1 1 0 2
+  // 0 0 0 2
+  // 3 0 1 0
+  const g = G([
+    [1, 1, 0, 2],
+    [0, 0, 0, 2],
+    [3, 0, 1, 0],
+  ]);
+  const picture = (expression: string) => {
+    const value = evaluate(expression, g);
+    return value instanceof Grid ? value.toRows() : value;
+  };
+
+  it('largest and smallest take the first on ties', () => {
+    expect(picture('object_picture(largest_object(objects_by_colour(grid)))')).toEqual([[1, 1]]);
+    expect(picture('object_picture(smallest_object(objects_by_colour(grid)))')).toEqual([[3]]);
+  });
+
+  it('keep_objects with a section, and sort_objects by a key', () => {
+    expect(picture('count_objects(keep_objects(objects_by_colour(grid), has_colour(_, #1)))')).toBe(2);
+    expect(picture('count_objects(drop_objects(objects_by_colour(grid), is_bigger_than(_, 1)))')).toBe(2);
+    expect(picture('object_picture(last_object(sort_objects(objects_by_colour(grid), object_height(_))))')).toEqual([[2], [2]]);
+    expect(picture('object_picture(first_object(sort_objects(objects_by_colour(grid), object_left(_))))')).toEqual([[1, 1]]);
+  });
+
+  it('object_with_most / least by a key', () => {
+    expect(picture('object_picture(object_with_most(objects_by_colour(grid), object_top(_)))')).toEqual([[3]]);
+    expect(picture('object_picture(object_with_least(objects_by_colour(grid), object_width(_)))')).toEqual([[2], [2]]);
+  });
+
+  it('odd_one_out finds the single different pattern and fails when two differ or none repeat', () => {
+    const three = G([
+      [5, 0, 5, 0, 5],
+      [5, 0, 5, 0, 0],
+    ]);
+    expect((callPrimitive('odd_one_out', objectsOf(three)) as GridObject).left).toBe(4);
+    expect(callPrimitive('odd_one_out', objectsOf(G([[5, 0, 6, 0, 7, 0]])))).toBe(FAILURE);
+    expect(callPrimitive('odd_one_out', objectsOf(G([[5, 0, 5, 0, 6, 0, 7]])))).toBe(FAILURE);
+    // same shape, other colour: a different pattern
+    expect((callPrimitive('odd_one_out', objectsOf(G([[5, 0, 5, 0, 8, 0, 5]]))) as GridObject).left).toBe(4);
+  });
+
+  it('unique_colour_object finds the one colour no other object has', () => {
+    expect((callPrimitive('unique_colour_object', objectsOf(G([[1, 0, 2, 0, 1]]))) as GridObject).left).toBe(2);
+    // colours 1, 2, 3, 1: both 2 and 3 stand alone, so there is no single answer
+    expect(callPrimitive('unique_colour_object', objectsOf(g))).toBe(FAILURE);
+    expect(callPrimitive('unique_colour_object', objectsOf(G([[1, 0, 2, 0, 3, 0]])))).toBe(FAILURE);
+    expect(callPrimitive('unique_colour_object', [])).toBe(FAILURE);
+  });
+
+  it('touches_edge: only the middle object stays off the border', () => {
+    const board = G([
+      [0, 0, 0, 0, 4],
+      [0, 6, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+    const flags = objectsOf(board).map((o) => callPrimitive('touches_edge', o, board));
+    expect(flags).toEqual([true, false]);
+  });
+
+  it('hole_count counts separate gaps; a cup open at the top has none', () => {
+    const eight = G([
+      [0, 7, 7, 7, 0],
+      [0, 7, 0, 7, 0],
+      [0, 7, 7, 7, 0],
+      [0, 7, 0, 7, 0],
+      [0, 7, 7, 7, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+    expect(callPrimitive('hole_count', objectsOf(eight)[0])).toBe(2);
+    const cup = G([
+      [0, 7, 0, 7, 0],
+      [0, 7, 7, 7, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+    expect(callPrimitive('hole_count', objectsOf(cup)[0])).toBe(0);
+  });
+
+  it('predicates on a plus shape', () => {
+    const plus = objectsOf(G([[0, 2, 0, 0], [2, 2, 2, 0], [0, 2, 0, 0], [0, 0, 0, 0]]))[0]!;
+    expect(callPrimitive('is_symmetric_object', plus)).toBe(true);
+    expect(callPrimitive('is_solid_rectangle', plus)).toBe(false);
+    expect(callPrimitive('has_colour', plus, 2)).toBe(true);
+    expect(callPrimitive('has_colour', plus, 0)).toBe(false);
+    expect(callPrimitive('object_colour', plus)).toBe(2);
+    const corner = objectsOf(G([[3, 3, 0], [3, 0, 0], [0, 0, 0]]))[0]!;
+    expect(callPrimitive('is_symmetric_object', corner)).toBe(false);
+  });
+
+  it('a failing key or test makes the whole selection fail', () => {
+    const failing = () => FAILURE;
+    const objects = objectsOf(g);
+    expect(callPrimitive('keep_objects', objects, failing)).toBe(FAILURE);
+    expect(callPrimitive('sort_objects', objects, failing)).toBe(FAILURE);
+    expect(callPrimitive('object_with_most', objects, failing)).toBe(FAILURE);
+  });
+});
