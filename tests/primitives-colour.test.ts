@@ -1,0 +1,198 @@
+/** Recolouring primitives: hand-worked cases and fast-check laws. */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { EMPTY, Grid } from '../src/grid/grid.ts';
+import { FAILURE } from '../src/language/failure.ts';
+import type { GridObject } from '../src/language/grid-object.ts';
+import { Palette } from '../src/language/palette.ts';
+import { Point } from '../src/language/point.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { callPrimitive } from './support/run-primitive.ts';
+
+const G = Grid.fromRows;
+const colour = fc.integer({ min: 0, max: 9 });
+const rows = (value: unknown): unknown => (value instanceof Grid ? value.toRows() : value);
+
+function gridOf(name: string, ...args: unknown[]): Grid {
+  const value = callPrimitive(name, ...args);
+  if (!(value instanceof Grid)) throw new Error(`tests/primitives-colour.test.ts: ${name} gave ${String(value)}, expected a grid`);
+  return value;
+}
+function mostFrequent(g: Grid): number {
+  const counts = new Array<number>(10).fill(0);
+  for (const v of g.cells) counts[v]!++;
+  const top = Math.max(...counts);
+  return counts[0] === top ? 0 : counts.indexOf(top);
+}
+function countsOf(g: Grid): number[] {
+  const counts = new Array<number>(10).fill(0);
+  for (const v of g.cells) counts[v]!++;
+  return counts;
+}
+
+describe('colour laws', () => {
+  it('recolour keeps the shape and changes exactly the cells of the source colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, colour, (g, from, to) => {
+        const r = gridOf('recolour', g, from, to);
+        expect([r.height, r.width]).toEqual([g.height, g.width]);
+        for (let i = 0; i < g.cells.length; i++) expect(r.cells[i]).toBe(g.cells[i] === from ? to : g.cells[i]);
+      }),
+    );
+  });
+
+  it('swap_colours twice is the identity', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, colour, (g, a, b) => {
+        const once = gridOf('swap_colours', g, a, b);
+        expect(gridOf('swap_colours', once, a, b).equals(g)).toBe(true);
+        for (let i = 0; i < g.cells.length; i++) {
+          const v = g.cells[i]!;
+          expect(once.cells[i]).toBe(v === a ? b : v === b ? a : v);
+        }
+      }),
+    );
+  });
+
+  it('apply_palette with the identity palette is the identity; otherwise it maps each cell once', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.array(fc.tuple(colour, colour), { maxLength: 5 }), (g, pairs) => {
+        expect(gridOf('apply_palette', g, Palette.fromPairs([])).equals(g)).toBe(true);
+        const palette = Palette.fromPairs(pairs);
+        const r = gridOf('apply_palette', g, palette);
+        for (let i = 0; i < g.cells.length; i++) expect(r.cells[i]).toBe(palette.target[g.cells[i]!]);
+      }),
+    );
+  });
+
+  it('keep_colour and remove_colour split the grid: each cell kept by exactly one of them', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        const background = mostFrequent(g);
+        const kept = gridOf('keep_colour', g, c);
+        const removed = gridOf('remove_colour', g, c);
+        for (let i = 0; i < g.cells.length; i++) {
+          const v = g.cells[i]!;
+          expect(kept.cells[i]).toBe(v === c ? c : background);
+          expect(removed.cells[i]).toBe(v === c ? background : v);
+        }
+      }),
+    );
+  });
+
+  it('recolour_all paints every non-background cell and leaves the background', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        const background = mostFrequent(g);
+        const r = gridOf('recolour_all', g, c);
+        for (let i = 0; i < g.cells.length; i++) expect(r.cells[i]).toBe(g.cells[i] === background ? background : c);
+      }),
+    );
+  });
+
+  it('most_common_colour has the most cells among non-background colours; least_common_colour the fewest among present ones', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const counts = countsOf(g);
+        const background = mostFrequent(g);
+        const most = callPrimitive('most_common_colour', g);
+        const others = counts.map((n, c) => (c === background ? 0 : n));
+        if (Math.max(...others) === 0) expect(most).toBe(FAILURE);
+        else {
+          expect(most).not.toBe(background);
+          expect(counts[most as number]).toBe(Math.max(...others));
+          expect(others.indexOf(Math.max(...others))).toBe(most);
+        }
+        const least = callPrimitive('least_common_colour', g) as number;
+        const present = counts.filter((n) => n > 0);
+        expect(counts[least]).toBe(Math.min(...present));
+      }),
+    );
+  });
+
+  it('recolour_object keeps position and shape and uses only the new colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        for (const o of callPrimitive('objects_multicolour', g) as GridObject[]) {
+          const r = callPrimitive('recolour_object', o, c) as GridObject;
+          expect([r.top, r.left, r.height, r.width, r.size]).toEqual([o.top, o.left, o.height, o.width, o.size]);
+          for (let i = 0; i < o.shape.cells.length; i++) expect(r.shape.cells[i]).toBe(o.shape.cells[i] === EMPTY ? EMPTY : c);
+        }
+      }),
+    );
+  });
+
+  it('recolour_objects_by_size changes only cells of the largest and smallest objects', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, colour, (g, large, small) => {
+        const objects = callPrimitive('objects_by_colour', g) as GridObject[];
+        const result = callPrimitive('recolour_objects_by_size', g, large, small);
+        if (objects.length < 2) {
+          expect(result).toBe(FAILURE);
+          return;
+        }
+        const r = result as Grid;
+        const sizes = objects.map((o) => o.size);
+        const big = objects[sizes.indexOf(Math.max(...sizes))]!;
+        const little = objects[sizes.indexOf(Math.min(...sizes))]!;
+        if (big === little) return;
+        const expected = g.toRows();
+        for (const [o, c] of [[big, large], [little, small]] as const) {
+          for (let y = 0; y < o.height; y++) for (let x = 0; x < o.width; x++) if (o.shape.get(y, x) !== EMPTY) expected[o.top + y]![o.left + x] = c;
+        }
+        expect(r.toRows()).toEqual(expected);
+      }),
+    );
+  });
+});
+
+describe('colour, hand-worked cases', () => {
+  const g = G([
+    [0, 1, 1],
+    [2, 0, 1],
+    [0, 0, 3],
+  ]);
+
+  it('recolour, swap, palette', () => {
+    expect(rows(callPrimitive('recolour', g, 1, 5))).toEqual([[0, 5, 5], [2, 0, 5], [0, 0, 3]]);
+    expect(rows(callPrimitive('swap_colours', g, 0, 1))).toEqual([[1, 0, 0], [2, 1, 0], [1, 1, 3]]);
+    expect(rows(callPrimitive('apply_palette', g, Palette.fromPairs([[1, 2], [2, 3], [3, 1]])))).toEqual([[0, 2, 2], [3, 0, 2], [0, 0, 1]]);
+  });
+
+  it('keep_colour and remove_colour on a grey background', () => {
+    const grey = G([[5, 5, 1], [2, 5, 5]]);
+    expect(rows(callPrimitive('keep_colour', grey, 1))).toEqual([[5, 5, 1], [5, 5, 5]]);
+    expect(rows(callPrimitive('remove_colour', grey, 1))).toEqual([[5, 5, 5], [2, 5, 5]]);
+  });
+
+  it('colour ranks', () => {
+    expect(callPrimitive('most_common_colour', g)).toBe(1);
+    expect(callPrimitive('least_common_colour', g)).toBe(2);
+    expect(callPrimitive('most_common_colour', Grid.filled(2, 2, 4))).toBe(FAILURE);
+    expect(callPrimitive('least_common_colour', Grid.filled(2, 2, 4))).toBe(4);
+  });
+
+  it('recolour_objects_by_size: the ring gets 8, the dot 9, the middle-sized bar stays', () => {
+    const scene = G([
+      [4, 4, 4, 0, 0, 0],
+      [4, 0, 4, 0, 6, 0],
+      [4, 4, 4, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [2, 2, 0, 0, 0, 0],
+    ]);
+    expect(rows(callPrimitive('recolour_objects_by_size', scene, 8, 9))).toEqual([
+      [8, 8, 8, 0, 0, 0],
+      [8, 0, 8, 0, 9, 0],
+      [8, 8, 8, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [2, 2, 0, 0, 0, 0],
+    ]);
+    expect(callPrimitive('recolour_objects_by_size', G([[0, 7], [0, 0]]), 8, 9)).toBe(FAILURE);
+  });
+
+  it('colour_of_cell reads one cell and fails outside', () => {
+    expect(callPrimitive('colour_of_cell', g, new Point(1, 0))).toBe(2);
+    expect(callPrimitive('colour_of_cell', g, new Point(3, 0))).toBe(FAILURE);
+    expect(callPrimitive('colour_of_cell', g, new Point(0, -1))).toBe(FAILURE);
+  });
+});
