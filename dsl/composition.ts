@@ -1,4 +1,287 @@
-/** Composition primitives. */
-import type { Primitive } from '../src/library/primitive.ts';
+/**
+ * Composition primitives: painting and erasing objects, moving and mirroring objects,
+ * layering grids over each other, and cell-wise masks of two grids.
+ */
+import { backgroundColour } from '../src/grid/components.ts';
+import { Grid, getSizeCap } from '../src/grid/grid.ts';
+import { paintObjectInto } from '../src/grid/paint-object.ts';
+import { FAILURE, type Failure } from '../src/language/failure.ts';
+import { GridObject } from '../src/language/grid-object.ts';
+import type { Point } from '../src/language/point.ts';
+import { primitive } from '../src/library/primitive.ts';
+import { flipLeftRight, flipUpDown } from './symmetry.ts';
 
-export const compositionPrimitives: Primitive[] = [];
+export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
+  const out = g.cells.slice();
+  for (const o of objects) paintObjectInto(out, g.height, g.width, o);
+  return new Grid(g.height, g.width, out);
+}
+
+export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
+  const background = backgroundColour(g);
+  const out = g.cells.slice();
+  for (const o of objects) paintObjectInto(out, g.height, g.width, o, background);
+  return new Grid(g.height, g.width, out);
+}
+
+/** The grid with every cell outside the object turned to background. */
+export function keepOnlyObject(g: Grid, object: GridObject): Grid {
+  const out = new Uint8Array(g.cells.length).fill(backgroundColour(g));
+  paintObjectInto(out, g.height, g.width, object);
+  return new Grid(g.height, g.width, out);
+}
+
+export function overlay(bottom: Grid, top: Grid, transparent: number): Grid | Failure {
+  if (bottom.height !== top.height || bottom.width !== top.width) return FAILURE;
+  const out = bottom.cells.slice();
+  const cells = top.cells;
+  for (let i = 0; i < out.length; i++) if (cells[i] !== transparent) out[i] = cells[i]!;
+  return new Grid(bottom.height, bottom.width, out);
+}
+
+/** Stacks the grids in order; later cells that are not the shared background win. */
+export function overlayAll(grids: readonly Grid[]): Grid | Failure {
+  if (grids.length === 0) return FAILURE;
+  const { height, width } = grids[0]!;
+  const counts = new Uint32Array(10);
+  for (const g of grids) {
+    if (g.height !== height || g.width !== width) return FAILURE;
+    for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
+  }
+  let background = 0;
+  for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
+  const out = grids[0]!.cells.slice();
+  for (let k = 1; k < grids.length; k++) {
+    const cells = grids[k]!.cells;
+    for (let i = 0; i < out.length; i++) if (cells[i] !== background) out[i] = cells[i]!;
+  }
+  return new Grid(height, width, out);
+}
+
+/** Which pairs (first filled, second filled) give the colour, as bits: both, first only, second only, neither. */
+const MASK_RULES = {
+  both: 0b1000,
+  either: 0b1110,
+  exactlyOne: 0b0110,
+  neither: 0b0001,
+} as const;
+
+/**
+ * Cell-wise mask of two same-sized grids: a cell is "filled" when it is not 0; the result
+ * has the colour where the rule holds and 0 elsewhere.
+ */
+export function mask(a: Grid, b: Grid, colour: number, rule: number): Grid | Failure {
+  if (a.height !== b.height || a.width !== b.width) return FAILURE;
+  const out = new Uint8Array(a.cells.length);
+  const x = a.cells;
+  const y = b.cells;
+  for (let i = 0; i < out.length; i++) {
+    const first = x[i] !== 0;
+    const second = y[i] !== 0;
+    const bit = first ? (second ? 0b1000 : 0b0100) : second ? 0b0010 : 0b0001;
+    if (rule & bit) out[i] = colour;
+  }
+  return new Grid(a.height, a.width, out);
+}
+
+export function mapObjects(g: Grid, objects: readonly GridObject[], transform: (o: GridObject) => GridObject | Failure): Grid | Failure {
+  const background = backgroundColour(g);
+  const out = g.cells.slice();
+  const moved: GridObject[] = [];
+  for (const o of objects) {
+    paintObjectInto(out, g.height, g.width, o, background);
+    const t = transform(o);
+    if (t === FAILURE) return FAILURE;
+    moved.push(t);
+  }
+  for (const o of moved) paintObjectInto(out, g.height, g.width, o);
+  return new Grid(g.height, g.width, out);
+}
+
+export function moveObject(o: GridObject, offset: Point): GridObject | Failure {
+  const far = 2 * getSizeCap();
+  const top = o.top + offset.row;
+  const left = o.left + offset.column;
+  if (Math.abs(top) > far || Math.abs(left) > far) return FAILURE;
+  return new GridObject(top, left, o.shape);
+}
+
+const MASKS = [
+  ['mask_both', MASK_RULES.both, 'both grids are filled', [[3, 0, 0, 0]]],
+  ['mask_either', MASK_RULES.either, 'at least one grid is filled', [[3, 3, 3, 0]]],
+  ['mask_exactly_one', MASK_RULES.exactlyOne, 'exactly one grid is filled', [[0, 3, 3, 0]]],
+  ['mask_neither', MASK_RULES.neither, 'neither grid is filled', [[0, 0, 0, 3]]],
+] as const;
+
+export const compositionPrimitives = [
+  primitive({
+    name: 'paint_object',
+    category: 'composition',
+    parameters: ['Grid', 'Object'],
+    result: 'Grid',
+    bits: 5,
+    doc: "Draws the object's cells onto the grid at the object's position; cells falling outside are dropped.",
+    example: {
+      input: [[0, 0, 0], [0, 4, 4]],
+      expression: 'paint_object(blank_like(grid, #1), first_object(objects_by_colour(grid)))',
+      output: [[1, 1, 1], [1, 4, 4]],
+    },
+    run: (g, o) => paintObjects(g, [o]),
+  }),
+  primitive({
+    name: 'paint_objects',
+    category: 'composition',
+    parameters: ['Grid', 'Objects'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Draws every object onto the grid in order; later objects cover earlier ones.',
+    example: {
+      input: [[2, 0, 3]],
+      expression: 'paint_objects(blank_like(grid, #5), objects_by_colour(grid))',
+      output: [[2, 5, 3]],
+    },
+    run: paintObjects,
+  }),
+  primitive({
+    name: 'erase_object',
+    category: 'composition',
+    parameters: ['Grid', 'Object'],
+    result: 'Grid',
+    bits: 5,
+    doc: "Turns the cells under the object to the grid's background colour.",
+    example: {
+      input: [[1, 0, 2, 2, 0, 0]],
+      expression: 'erase_object(grid, largest_object(objects_by_colour(grid)))',
+      output: [[1, 0, 0, 0, 0, 0]],
+    },
+    run: (g, o) => eraseObjects(g, [o]),
+  }),
+  primitive({
+    name: 'erase_objects',
+    category: 'composition',
+    parameters: ['Grid', 'Objects'],
+    result: 'Grid',
+    bits: 5,
+    doc: "Turns the cells under every object to the grid's background colour.",
+    example: {
+      input: [[1, 0, 2, 2], [0, 0, 0, 3]],
+      expression: 'erase_objects(grid, drop_objects(objects_by_colour(grid), has_colour(_, #2)))',
+      output: [[0, 0, 2, 2], [0, 0, 0, 0]],
+    },
+    run: eraseObjects,
+  }),
+  primitive({
+    name: 'keep_only_object',
+    category: 'composition',
+    parameters: ['Grid', 'Object'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Keeps the object where it is and turns every other cell to background.',
+    example: {
+      input: [[1, 0, 2, 2], [0, 0, 0, 0], [3, 0, 0, 0]],
+      expression: 'keep_only_object(grid, largest_object(objects_by_colour(grid)))',
+      output: [[0, 0, 2, 2], [0, 0, 0, 0], [0, 0, 0, 0]],
+    },
+    run: keepOnlyObject,
+  }),
+  primitive({
+    name: 'overlay',
+    category: 'composition',
+    parameters: ['Grid', 'Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: "Lays the second grid over the first (same size); the second grid's cells of the colour are see-through.",
+    example: {
+      input: [[1, 0], [0, 0]],
+      expression: 'overlay(grid, rotate_half(grid), #0)',
+      output: [[1, 0], [0, 1]],
+    },
+    run: overlay,
+  }),
+  primitive({
+    name: 'overlay_all',
+    category: 'composition',
+    parameters: ['Grids'],
+    result: 'Grid',
+    bits: 6,
+    doc: "Stacks same-sized grids in order; each later grid's non-background cells cover what is below.",
+    example: {
+      input: [[1, 0, 5, 0, 0, 5, 0, 2]],
+      expression: 'overlay_all(split_across(grid, 3))',
+      output: [[1, 2]],
+    },
+    run: overlayAll,
+  }),
+  ...MASKS.map(([name, rule, when, output]) =>
+    primitive({
+      name,
+      category: 'composition',
+      parameters: ['Grid', 'Grid', 'Colour'],
+      result: 'Grid',
+      bits: 6,
+      doc: `Compares two same-sized grids cell by cell (0 is empty): the colour where ${when}, 0 elsewhere.`,
+      example: {
+        input: [[1, 1, 0, 0, 9, 2, 0, 2, 0]],
+        expression: `${name}(part(split_across(grid, 2), 0), part(split_across(grid, 2), 1), #3)`,
+        output,
+      },
+      run: (a, b, colour) => mask(a, b, colour, rule),
+    }),
+  ),
+  primitive({
+    name: 'map_objects',
+    category: 'composition',
+    parameters: ['Grid', 'Objects', 'Object -> Object'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Erases every object from the grid, then paints each one as the transform changes it.',
+    example: {
+      input: [[1, 0, 0], [0, 0, 2]],
+      expression: 'map_objects(grid, objects_by_colour(grid), move_object(_, (1, 0)))',
+      output: [[0, 0, 0], [1, 0, 0]],
+    },
+    run: mapObjects,
+  }),
+  primitive({
+    name: 'move_object',
+    category: 'composition',
+    parameters: ['Object', 'Point'],
+    result: 'Object',
+    bits: 5,
+    doc: 'The object shifted by (rows, columns).',
+    example: {
+      input: [[3, 0, 0], [0, 0, 0]],
+      expression: 'map_objects(grid, objects_by_colour(grid), move_object(_, (1, 2)))',
+      output: [[0, 0, 0], [0, 0, 3]],
+    },
+    run: moveObject,
+  }),
+  primitive({
+    name: 'reflect_object_horizontally',
+    category: 'composition',
+    parameters: ['Object'],
+    result: 'Object',
+    bits: 6,
+    doc: 'The object mirrored left to right in place (within its own bounding box).',
+    example: {
+      input: [[0, 0, 0, 0], [0, 1, 2, 0], [0, 1, 0, 0]],
+      expression: 'map_objects(grid, objects_multicolour(grid), reflect_object_horizontally(_))',
+      output: [[0, 0, 0, 0], [0, 2, 1, 0], [0, 0, 1, 0]],
+    },
+    run: (o) => new GridObject(o.top, o.left, flipLeftRight(o.shape)),
+  }),
+  primitive({
+    name: 'reflect_object_vertically',
+    category: 'composition',
+    parameters: ['Object'],
+    result: 'Object',
+    bits: 6,
+    doc: 'The object mirrored top to bottom in place (within its own bounding box).',
+    example: {
+      input: [[0, 0, 0, 0], [0, 1, 2, 0], [0, 1, 0, 0]],
+      expression: 'map_objects(grid, objects_multicolour(grid), reflect_object_vertically(_))',
+      output: [[0, 0, 0, 0], [0, 1, 0, 0], [0, 1, 2, 0]],
+    },
+    run: (o) => new GridObject(o.top, o.left, flipUpDown(o.shape)),
+  }),
+];
