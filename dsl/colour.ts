@@ -210,6 +210,33 @@ export const colourPrimitives = [
     run: recolourBySize,
   }),
   primitive({
+    name: 'replace_background',
+    category: 'colour',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Background cells get the colour.',
+    example: { input: [[0, 1], [0, 0]], expression: 'replace_background(grid, #5)', output: [[5, 1], [5, 5]] },
+    run: (g, colour) => recolour(g, backgroundColour(g), colour),
+  }),
+  primitive({
+    name: 'most_common_object_colour',
+    category: 'colour',
+    parameters: ['Objects'],
+    result: 'Colour',
+    bits: 6,
+    doc: 'The main colour shared by the most objects (the lowest on ties); fails on an empty list.',
+    example: { input: [[1, 0, 2, 0, 2], [0, 0, 0, 0, 0]], expression: 'most_common_object_colour(objects_by_colour(grid))', output: 2 },
+    run: (objects) => {
+      if (objects.length === 0) return FAILURE;
+      const counts = new Uint32Array(10);
+      for (const o of objects) counts[o.mainColour]!++;
+      let best = 0;
+      for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
+      return best;
+    },
+  }),
+  primitive({
     name: 'colour_of_cell',
     category: 'colour',
     parameters: ['Grid', 'Point'],

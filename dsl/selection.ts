@@ -128,6 +128,15 @@ export function isMirrorSymmetric(o: GridObject): boolean {
   return true;
 }
 
+/** Whether two objects occupy the same cells of their boxes, colours aside. */
+export function sameShape(a: GridObject, b: GridObject): boolean {
+  if (a.height !== b.height || a.width !== b.width || a.size !== b.size) return false;
+  const x = a.shape.cells;
+  const y = b.shape.cells;
+  for (let i = 0; i < x.length; i++) if ((x[i] === EMPTY) !== (y[i] === EMPTY)) return false;
+  return true;
+}
+
 export function colourCount(o: GridObject): number {
   let seen = 0;
   const cells = o.shape.cells;
@@ -327,6 +336,30 @@ export const selectionPrimitives = [
     doc: 'Whether every cell of the object has the same colour.',
     example: { input: [[1, 2, 0], [0, 0, 0]], expression: 'is_single_colour(first_object(objects_multicolour(grid)))', output: false },
     run: (o) => colourCount(o) === 1,
+  }),
+  primitive({
+    name: 'is_line',
+    category: 'selection',
+    parameters: ['Object'],
+    result: 'Bool',
+    bits: 7,
+    doc: 'Whether the object is a straight line one cell thick: a single row or a single column.',
+    example: { input: [[0, 0, 0], [3, 3, 3], [0, 0, 0]], expression: 'is_line(first_object(objects_by_colour(grid)))', output: true },
+    run: (o) => (o.height === 1 || o.width === 1) && o.size === o.height * o.width,
+  }),
+  primitive({
+    name: 'has_same_shape',
+    category: 'selection',
+    parameters: ['Object', 'Object'],
+    result: 'Bool',
+    bits: 7,
+    doc: 'Whether the two objects cover the same pattern of cells, whatever their colours and positions.',
+    example: {
+      input: [[1, 0, 2], [1, 0, 2], [0, 0, 0]],
+      expression: 'has_same_shape(first_object(objects_by_colour(grid)), last_object(objects_by_colour(grid)))',
+      output: true,
+    },
+    run: sameShape,
   }),
   primitive({
     name: 'object_size',

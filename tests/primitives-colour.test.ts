@@ -190,6 +190,14 @@ describe('colour, hand-worked cases', () => {
     expect(callPrimitive('recolour_objects_by_size', G([[0, 7], [0, 0]]), 8, 9)).toBe(FAILURE);
   });
 
+  it('replace_background and most_common_object_colour', () => {
+    expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 0]]), 3))).toEqual([[3, 1, 3], [3, 3, 0]]);
+    const objects = callPrimitive('objects_by_colour', G([[6, 0, 1, 0, 6], [0, 0, 1, 0, 0], [1, 0, 0, 0, 6]]));
+    // objects: 6, the 1 pair, 6, 1, 6 -> colour 6 three times
+    expect(callPrimitive('most_common_object_colour', objects)).toBe(6);
+    expect(callPrimitive('most_common_object_colour', [])).toBe(FAILURE);
+  });
+
   it('colour_of_cell reads one cell and fails outside', () => {
     expect(callPrimitive('colour_of_cell', g, new Point(1, 0))).toBe(2);
     expect(callPrimitive('colour_of_cell', g, new Point(3, 0))).toBe(FAILURE);

@@ -234,6 +234,22 @@ describe('selection, hand-worked cases', () => {
     expect(callPrimitive('is_symmetric_object', corner)).toBe(false);
   });
 
+  it('is_line and has_same_shape', () => {
+    const scene = G([
+      [2, 2, 2, 0, 0],
+      [0, 0, 0, 0, 5],
+      [3, 3, 3, 0, 5],
+      [0, 0, 0, 0, 0],
+      [4, 4, 0, 0, 0],
+      [4, 0, 0, 0, 0],
+    ]);
+    const [top, column, middle, corner] = objectsOf(scene);
+    expect([top, column, middle, corner].map((o) => callPrimitive('is_line', o))).toEqual([true, true, true, false]);
+    expect(callPrimitive('has_same_shape', top, middle)).toBe(true);
+    expect(callPrimitive('has_same_shape', top, column)).toBe(false);
+    expect(callPrimitive('has_same_shape', corner, corner)).toBe(true);
+  });
+
   it('a failing key or test makes the whole selection fail', () => {
     const failing = () => FAILURE;
     const objects = objectsOf(g);
