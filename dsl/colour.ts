@@ -32,9 +32,12 @@ function identityMap(): Uint8Array {
 }
 
 function recolour(g: Grid, from: number, to: number): Grid {
-  const target = identityMap();
-  target[from] = to;
-  return mapColours(g, target);
+  const source = g.cells;
+  const first = from === to ? -1 : source.indexOf(from);
+  if (first < 0) return g;
+  const cells = source.slice();
+  for (let i = first; i < cells.length; i++) if (cells[i] === from) cells[i] = to;
+  return new Grid(g.height, g.width, cells);
 }
 
 /** Cells of the colour keep it; every other cell becomes the background. */
