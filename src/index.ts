@@ -1,0 +1,24 @@
+/**
+ * pithy's public API: grids, programs (text, checking, running), the primitive library and
+ * task files. Everything else is internal and may change.
+ */
+export { Grid, EMPTY, getSizeCap, setSizeCap, shapeAllowed } from './grid/grid.ts';
+export { GridObject } from './language/grid-object.ts';
+export { Point } from './language/point.ts';
+export { Palette } from './language/palette.ts';
+export { FAILURE, isFailure, type Failure } from './language/failure.ts';
+export type { BaseType, FunctionType, Type, Value } from './language/types.ts';
+
+export type { Expression, LiteralValue, Program, Step } from './language/ast.ts';
+export { parseProgram, parseExpression, ProgramSyntaxError } from './language/parser.ts';
+export { printProgram, printExpression } from './language/printer.ts';
+export { checkProgram, ProgramTypeError, type TypeProblem } from './language/checker.ts';
+export { runProgram, type RunResult, type TraceEntry } from './language/interpreter.ts';
+
+export { Library } from './library/library.ts';
+export { defaultLibrary } from './library/default-library.ts';
+export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, type WorkedExample } from './library/primitive.ts';
+
+export { parseTask, readTaskFile, readTasks, TaskFileError, type TaskOrError } from './tasks/read-task.ts';
+export type { Pair, Puzzle, Task, TestCase } from './tasks/task.ts';
+export { runOnTask, firstDifference, type Difference, type PairResult } from './tasks/run-on-task.ts';
