@@ -1,4 +1,293 @@
-/** Filling primitives. */
-import type { Primitive } from '../src/library/primitive.ts';
+/**
+ * Filling primitives: enclosed areas, lines, connections between same-coloured cells,
+ * outlines, hollowing, bounding boxes, frames and rays.
+ */
+import { backgroundColour, components } from '../src/grid/components.ts';
+import { Grid } from '../src/grid/grid.ts';
+import { enclosedCells } from '../src/grid/holes.ts';
+import { FAILURE, type Failure } from '../src/language/failure.ts';
+import type { Point } from '../src/language/point.ts';
+import { primitive } from '../src/library/primitive.ts';
 
-export const fillingPrimitives: Primitive[] = [];
+export function fillEnclosed(g: Grid, colour: number): Grid {
+  const background = backgroundColour(g);
+  if (colour === background) return g;
+  const enclosed = enclosedCells(g, background);
+  const out = g.cells.slice();
+  for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
+  return new Grid(g.height, g.width, out);
+}
+
+/** A straight (row, column) or diagonal line between two cells of the grid, both ends included. */
+export function drawLine(g: Grid, from: Point, to: Point, colour: number): Grid | Failure {
+  const { height, width } = g;
+  const inside = (p: Point) => p.row >= 0 && p.row < height && p.column >= 0 && p.column < width;
+  if (!inside(from) || !inside(to)) return FAILURE;
+  const dr = to.row - from.row;
+  const dc = to.column - from.column;
+  if (dr !== 0 && dc !== 0 && Math.abs(dr) !== Math.abs(dc)) return FAILURE;
+  const steps = Math.max(Math.abs(dr), Math.abs(dc));
+  const sr = Math.sign(dr);
+  const sc = Math.sign(dc);
+  const out = g.cells.slice();
+  for (let k = 0; k <= steps; k++) out[(from.row + k * sr) * width + from.column + k * sc] = colour;
+  return new Grid(height, width, out);
+}
+
+/**
+ * Along every row, then every column: background cells between two consecutive
+ * non-background cells of the same colour take that colour (cells the rows filled stay).
+ */
+export function connectSameColour(g: Grid): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  const connect = (start: number, step: number, length: number) => {
+    let last = -1;
+    for (let k = 0; k < length; k++) {
+      const i = start + k * step;
+      const v = cells[i]!;
+      if (v === background) continue;
+      if (last >= 0 && cells[start + last * step] === v) {
+        for (let m = last + 1; m < k; m++) {
+          const j = start + m * step;
+          if (out[j] === background) out[j] = v;
+        }
+      }
+      last = k;
+    }
+  };
+  for (let r = 0; r < height; r++) connect(r * width, 1, width);
+  for (let c = 0; c < width; c++) connect(c, width, height);
+  return new Grid(height, width, out);
+}
+
+/** Background cells with a non-background cell among their 8 neighbours take the colour. */
+export function surround(g: Grid, colour: number): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      if (cells[r * width + c] !== background) continue;
+      let near = false;
+      for (let nr = Math.max(0, r - 1); nr <= Math.min(height - 1, r + 1) && !near; nr++) {
+        for (let nc = Math.max(0, c - 1); nc <= Math.min(width - 1, c + 1); nc++) {
+          if (cells[nr * width + nc] !== background) {
+            near = true;
+            break;
+          }
+        }
+      }
+      if (near) out[r * width + c] = colour;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/** Non-background cells whose four edge neighbours are all inside the grid and non-background become background. */
+export function hollow(g: Grid): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 1; r < height - 1; r++) {
+    for (let c = 1; c < width - 1; c++) {
+      const i = r * width + c;
+      if (cells[i] === background) continue;
+      if (cells[i - 1] !== background && cells[i + 1] !== background && cells[i - width] !== background && cells[i + width] !== background) {
+        out[i] = background;
+      }
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/**
+ * For every object (non-background cells joined through edges and corners, any colours),
+ * paints background cells inside its bounding box (`ring` 0) or on the ring one cell outside
+ * it (`ring` 1) with the colour.
+ */
+function boxes(g: Grid, colour: number, ring: boolean): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (const o of components(g, { diagonal: true, multicolour: true, background })) {
+    const top = ring ? o.top - 1 : o.top;
+    const left = ring ? o.left - 1 : o.left;
+    const bottom = ring ? o.top + o.height : o.top + o.height - 1;
+    const right = ring ? o.left + o.width : o.left + o.width - 1;
+    for (let r = Math.max(0, top); r <= Math.min(height - 1, bottom); r++) {
+      for (let c = Math.max(0, left); c <= Math.min(width - 1, right); c++) {
+        if (ring && r !== top && r !== bottom && c !== left && c !== right) continue;
+        const i = r * width + c;
+        if (cells[i] === background) out[i] = colour;
+      }
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/**
+ * Rays along every column (or row) in one direction: each background cell takes the colour
+ * of the nearest non-background cell behind it, if there is one.
+ */
+export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  const lines = alongColumns ? width : height;
+  const length = alongColumns ? height : width;
+  const step = alongColumns ? width : 1;
+  for (let line = 0; line < lines; line++) {
+    const start = alongColumns ? line : line * width;
+    let paint = background;
+    for (let k = 0; k < length; k++) {
+      const i = start + (forwards ? k : length - 1 - k) * step;
+      const v = cells[i]!;
+      if (v !== background) paint = v;
+      else out[i] = paint;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+export const fillingPrimitives = [
+  primitive({
+    name: 'fill_enclosed',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 5,
+    doc: 'Background cells that cannot reach the border through background cells (edge steps) take the colour.',
+    example: {
+      input: [[0, 0, 0, 0, 0], [0, 1, 1, 1, 0], [0, 1, 0, 1, 0], [0, 1, 1, 1, 0], [0, 0, 0, 0, 0]],
+      expression: 'fill_enclosed(grid, #4)',
+      output: [[0, 0, 0, 0, 0], [0, 1, 1, 1, 0], [0, 1, 4, 1, 0], [0, 1, 1, 1, 0], [0, 0, 0, 0, 0]],
+    },
+    run: fillEnclosed,
+  }),
+  primitive({
+    name: 'draw_line',
+    category: 'filling',
+    parameters: ['Grid', 'Point', 'Point', 'Colour'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Paints the straight or diagonal line between two cells of the grid, both ends included.',
+    example: {
+      input: [[0, 0, 0], [0, 0, 0], [0, 0, 0]],
+      expression: 'draw_line(grid, (0, 2), (2, 0), #6)',
+      output: [[0, 0, 6], [0, 6, 0], [6, 0, 0]],
+    },
+    run: drawLine,
+  }),
+  primitive({
+    name: 'connect_same_colour',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'In each row, then each column, the background gap between two neighbouring cells of the same colour takes that colour.',
+    example: {
+      input: [[2, 0, 0, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
+      expression: 'connect_same_colour(grid)',
+      output: [[2, 2, 2, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
+    },
+    run: connectSameColour,
+  }),
+  primitive({
+    name: 'surround',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Background cells touching a non-background cell (edges or corners) take the colour.',
+    example: {
+      input: [[0, 0, 0, 0], [0, 5, 0, 0], [0, 0, 0, 0], [0, 0, 0, 0]],
+      expression: 'surround(grid, #2)',
+      output: [[2, 2, 2, 0], [2, 5, 2, 0], [2, 2, 2, 0], [0, 0, 0, 0]],
+    },
+    run: surround,
+  }),
+  primitive({
+    name: 'hollow',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Non-background cells whose four edge neighbours are all non-background become background, leaving outlines.',
+    example: {
+      input: [[0, 0, 0, 0, 0], [0, 3, 3, 3, 0], [0, 3, 3, 3, 0], [0, 3, 3, 3, 0], [0, 0, 0, 0, 0]],
+      expression: 'hollow(grid)',
+      output: [[0, 0, 0, 0, 0], [0, 3, 3, 3, 0], [0, 3, 0, 3, 0], [0, 3, 3, 3, 0], [0, 0, 0, 0, 0]],
+    },
+    run: hollow,
+  }),
+  primitive({
+    name: 'fill_bounding_boxes',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Background cells inside the bounding box of each object (cells joined through edges or corners) take the colour.',
+    example: {
+      input: [[1, 0, 0, 0], [0, 1, 1, 0], [0, 0, 0, 0]],
+      expression: 'fill_bounding_boxes(grid, #8)',
+      output: [[1, 8, 8, 0], [8, 1, 1, 0], [0, 0, 0, 0]],
+    },
+    run: (g, colour) => boxes(g, colour, false),
+  }),
+  primitive({
+    name: 'frame_objects',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Draws a rectangle one cell outside the bounding box of each object (cells joined through edges or corners), over background cells only.',
+    example: {
+      input: [[0, 0, 0, 0], [0, 0, 0, 0], [0, 0, 7, 0], [0, 0, 0, 0]],
+      expression: 'frame_objects(grid, #1)',
+      output: [[0, 0, 0, 0], [0, 1, 1, 1], [0, 1, 7, 1], [0, 1, 1, 1]],
+    },
+    run: (g, colour) => boxes(g, colour, true),
+  }),
+  primitive({
+    name: 'shoot_rays_down',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every non-background cell paints the background cells below it, down to the next non-background cell or the edge.',
+    example: { input: [[1, 0], [0, 2], [0, 0]], expression: 'shoot_rays_down(grid)', output: [[1, 0], [1, 2], [1, 2]] },
+    run: (g) => shootRays(g, true, true),
+  }),
+  primitive({
+    name: 'shoot_rays_up',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every non-background cell paints the background cells above it, up to the next non-background cell or the edge.',
+    example: { input: [[0, 0], [0, 2], [1, 0]], expression: 'shoot_rays_up(grid)', output: [[1, 2], [1, 2], [1, 0]] },
+    run: (g) => shootRays(g, true, false),
+  }),
+  primitive({
+    name: 'shoot_rays_left',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every non-background cell paints the background cells to its left, up to the next non-background cell or the edge.',
+    example: { input: [[0, 0, 3], [0, 4, 0]], expression: 'shoot_rays_left(grid)', output: [[3, 3, 3], [4, 4, 0]] },
+    run: (g) => shootRays(g, false, false),
+  }),
+  primitive({
+    name: 'shoot_rays_right',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every non-background cell paints the background cells to its right, up to the next non-background cell or the edge.',
+    example: { input: [[3, 0, 0], [0, 4, 0]], expression: 'shoot_rays_right(grid)', output: [[3, 3, 3], [0, 4, 4]] },
+    run: (g) => shootRays(g, false, true),
+  }),
+];
