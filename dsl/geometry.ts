@@ -158,6 +158,28 @@ export function splitDown(g: Grid, n: number): Grid[] | Failure {
   return parts;
 }
 
+/** Runs of equal neighbouring rows become one row, then the same for columns. */
+export function mergeRepeatedLines(g: Grid): Grid {
+  const { height, width, cells } = g;
+  const keptRows: number[] = [0];
+  for (let r = 1; r < height; r++) {
+    let same = true;
+    for (let c = 0; c < width && same; c++) if (cells[r * width + c] !== cells[(r - 1) * width + c]) same = false;
+    if (!same) keptRows.push(r);
+  }
+  const keptColumns: number[] = [0];
+  for (let c = 1; c < width; c++) {
+    let same = true;
+    for (let r = 0; r < height && same; r++) if (cells[r * width + c] !== cells[r * width + c - 1]) same = false;
+    if (!same) keptColumns.push(c);
+  }
+  if (keptRows.length === height && keptColumns.length === width) return g;
+  const out = new Uint8Array(keptRows.length * keptColumns.length);
+  let i = 0;
+  for (const r of keptRows) for (const c of keptColumns) out[i++] = cells[r * width + c]!;
+  return new Grid(keptRows.length, keptColumns.length, out);
+}
+
 /**
  * Gravity on single cells: along every column (or row) the non-background cells slide to
  * the end (towardsEnd) or the start, in their order.
@@ -346,6 +368,20 @@ export const geometryPrimitives = [
     doc: 'A grid of the same size filled with the colour.',
     example: { input: [[1, 2, 3]], expression: 'blank_like(grid, #4)', output: [[4, 4, 4]] },
     run: (g, colour) => Grid.filled(g.height, g.width, colour),
+  }),
+  primitive({
+    name: 'merge_repeated_lines',
+    category: 'geometry',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Each run of identical neighbouring rows becomes one row, then each run of identical neighbouring columns one column.',
+    example: {
+      input: [[1, 1, 2], [1, 1, 2], [3, 3, 3]],
+      expression: 'merge_repeated_lines(grid)',
+      output: [[1, 2], [3, 3]],
+    },
+    run: mergeRepeatedLines,
   }),
   primitive({
     name: 'fall_down',

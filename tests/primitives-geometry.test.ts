@@ -157,6 +157,16 @@ describe('geometry laws', () => {
     );
   });
 
+  it('merge_repeated_lines undoes scale_up, and a second merge changes nothing', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 6, maxWidth: 6 }), fc.integer({ min: 1, max: 4 }), (g, k) => {
+        const merged = grid('merge_repeated_lines', g);
+        expect(grid('merge_repeated_lines', merged).equals(merged)).toBe(true);
+        expect(grid('merge_repeated_lines', grid('scale_up', merged, k)).equals(merged)).toBe(true);
+      }),
+    );
+  });
+
   it('blank_like keeps the size', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
@@ -245,6 +255,15 @@ describe('geometry hand-worked cases', () => {
     expect(rows(apply('part', parts, 1))).toEqual([[2]]);
     expect(apply('part', parts, 2)).toBe(FAILURE);
     expect(apply('part', parts, -1)).toBe(FAILURE);
+  });
+
+  it('merge_repeated_lines keeps repeats that are not neighbours', () => {
+    expect(rows(apply('merge_repeated_lines', G([[1, 2, 2, 1], [1, 2, 2, 1], [4, 4, 4, 4], [1, 2, 2, 1]])))).toEqual([
+      [1, 2, 1],
+      [4, 4, 4],
+      [1, 2, 1],
+    ]);
+    expect(rows(apply('merge_repeated_lines', G([[5, 5], [5, 5]])))).toEqual([[5]]);
   });
 
   it('falls keep order on a non-black background', () => {
