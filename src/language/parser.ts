@@ -169,7 +169,8 @@ export function parseProgram(text: string, source?: string): Program {
     const r = new LineReader(body, i + 1, indent, source);
     if (body === '') continue;
     if (body.startsWith('--')) {
-      const rest = body.slice(2);
+      // Keep a comment's trailing spaces so printing and parsing give back the same text.
+      const rest = raw.trimStart().replace(/\r$/, '').slice(2);
       pending.push(rest.startsWith(' ') ? rest.slice(1) : rest);
       continue;
     }

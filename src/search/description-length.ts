@@ -1,0 +1,58 @@
+/**
+ * The description length of a program in bits, as the search measures it:
+ *
+ *   bits(program) = Σ over primitive uses of the primitive's prior bits
+ *                 + Σ over constants of the constant's bits in this task's constant table
+ *                 + 1 bit per use of the input grid
+ *
+ * counted over the program with every step written out where it is used (the search builds
+ * trees, so a step used twice is paid for twice). A constant the task's table does not offer
+ * costs what a plain encoding of it would (see `fallbackBits`), which is never cheaper.
+ */
+import type { Expression, LiteralValue, Program } from '../language/ast.ts';
+import type { Library } from '../library/library.ts';
+import { printLiteral } from '../language/printer.ts';
+import type { Constant } from './constants.ts';
+
+/** Bits for a constant the task's table does not list. */
+export function fallbackBits(l: LiteralValue): number {
+  switch (l.type) {
+    case 'Colour':
+      return 4;
+    case 'Bool':
+      return 2;
+    case 'Int':
+      return 4 + 2 * Math.ceil(Math.log2(Math.abs(l.value) + 2));
+    case 'Point':
+      return 6 + 2 * Math.ceil(Math.log2(Math.abs(l.row) + 2)) + 2 * Math.ceil(Math.log2(Math.abs(l.column) + 2));
+    case 'Palette':
+      return 4 + 8 * l.pairs.length;
+  }
+}
+
+export function programBits(program: Program, library: Library, constants: readonly Constant[]): number {
+  const table = new Map<string, number>();
+  for (const c of constants) {
+    const key = printLiteral(c.literal);
+    table.set(key, Math.min(table.get(key) ?? Infinity, c.bits));
+  }
+  const steps = new Map(program.steps.map((s) => [s.name, s.expression]));
+  const cost = (e: Expression): number => {
+    switch (e.kind) {
+      case 'hole':
+        return 0;
+      case 'literal':
+        return table.get(printLiteral(e.literal)) ?? fallbackBits(e.literal);
+      case 'variable': {
+        const step = steps.get(e.name);
+        return step ? cost(step) : 1;
+      }
+      case 'call': {
+        const p = library.get(e.primitive);
+        if (!p) throw new Error(`unknown primitive '${e.primitive}'`);
+        return e.arguments.reduce((sum, a) => sum + cost(a), p.bits);
+      }
+    }
+  };
+  return cost(program.answer);
+}
