@@ -33,8 +33,8 @@ export interface RandomProgramOptions {
 const LITERAL_TYPES: ReadonlySet<Type> = new Set<Type>(['Colour', 'Int', 'Bool', 'Point', 'Palette']);
 const NAME_WORDS = ['boats', 'crane', 'tide', 'quay', 'hull', 'mast', 'cargo', 'buoy', 'pier', 'net', 'sail', 'dock'];
 const INPUT_NAMES = ['grid', 'harbour', 'deck', 'chart', 'berth'];
-/** Characters for comments. Comments never end in whitespace: the parser trims each line. */
-const COMMENT_CHARACTERS = 'abcdefghijklmnopqrstuvwxyz ABCXYZ0123456789.,;:!?()[]{}#_-=>+*/\'"é→';
+/** Characters for comments (any text without a line break; spaces and tabs anywhere). */
+const COMMENT_CHARACTERS = 'abcdefghijklmnopqrstuvwxyz ABCXYZ0123456789.,;:!?()[]{}#_-=>+*/\'"é→\t  ';
 
 interface Scope {
   readonly names: readonly { name: string; type: Type }[];
@@ -140,7 +140,7 @@ class ProgramBuilder {
     const length = this.choose(24);
     let text = '';
     for (let i = 0; i < length; i++) text += COMMENT_CHARACTERS[this.choose(COMMENT_CHARACTERS.length)];
-    return text.trimEnd();
+    return text;
   }
 
   comments(enabled: boolean): string[] {
