@@ -29,6 +29,11 @@ export function buildProgram(): Command {
 }
 
 export async function main(argv: readonly string[]): Promise<void> {
+  // A reader that stops early (`pithy primitives | head`) is not an error.
+  process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw error;
+  });
   await buildProgram().parseAsync([...argv]);
 }
 
