@@ -57,6 +57,7 @@ export function registerRunCommand(program: Command): void {
       }
       const entries = readTasks([taskPath]);
       let allPassed = true;
+      let tasksPassed = 0;
       const tasks: unknown[] = [];
       const errors: ReturnType<typeof taskErrorData>[] = [];
       for (const entry of entries) {
@@ -69,6 +70,7 @@ export function registerRunCommand(program: Command): void {
         const results = runOnTask(loaded.program, entry.task, defaultLibrary, { trace: options.trace });
         const passed = results.every((r) => r.passed);
         if (!passed) allPassed = false;
+        else tasksPassed++;
         if (options.json) {
           tasks.push({ task: entry.task.name, file: entry.task.path, passed, pairs: results.map(pairData) });
           continue;
@@ -81,6 +83,10 @@ export function registerRunCommand(program: Command): void {
         ]);
       }
       if (options.json) writeJson({ program: programFile, ok: true, passed: allPassed, tasks, errors });
+      else if (entries.length > 1) {
+        const bad = entries.filter((e) => !e.ok).length;
+        writeLines([`${entries.length - bad} tasks run, ${tasksPassed} passed every pair${bad > 0 ? `; ${bad} bad task file${bad === 1 ? '' : 's'}` : ''}`]);
+      }
       if (!allPassed) process.exitCode = 1;
     });
 }
