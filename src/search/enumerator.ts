@@ -7,6 +7,8 @@
 import { Grid, shapeAllowed } from '../grid/grid.ts';
 import { FAILURE } from '../language/failure.ts';
 import { literalValue } from '../language/interpreter.ts';
+import type { Expression } from '../language/ast.ts';
+import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { ValueStore, type Candidate } from './value-store.ts';
@@ -67,18 +69,20 @@ export function enumerate(
   const trainCount = outputs.length;
   let firstSolutionCost = Infinity;
 
-  const offer = (candidate: Candidate): void => {
-    const hash = ValueStore.hashValues(candidate.type, candidate.values);
-    if (store.has(candidate.type, hash, candidate.values)) {
+  /** Keeps a candidate unless an equal one is kept; `values` may be a scratch array (copied when kept). */
+  const offer = (type: Type, cost: number, values: readonly unknown[], production: Production | undefined, parts: readonly Candidate[], leaf: Expression | undefined): void => {
+    const hash = ValueStore.hashValues(type, values);
+    if (store.has(type, hash, values)) {
       stats.pruned++;
       return;
     }
+    const candidate: Candidate = { type, cost, values: values.slice(), production, arguments: parts.slice(), leaf };
     store.add(candidate, hash);
     stats.kept++;
-    if (candidate.type === 'Grid') {
-      for (let i = 0; i < trainCount; i++) if (!(candidate.values[i] as Grid).equals(outputs[i]!)) return;
+    if (type === 'Grid') {
+      for (let i = 0; i < trainCount; i++) if (!(values[i] as Grid).equals(outputs[i]!)) return;
       solutions.push(candidate);
-      if (solutions.length === 1) firstSolutionCost = candidate.cost;
+      if (solutions.length === 1) firstSolutionCost = cost;
       if (solutions.length >= limits.attempts) throw new Stop('solved');
     }
   };
@@ -99,13 +103,14 @@ export function enumerate(
   }
 
   const args: Candidate[] = [];
+  const scratch = new Array<unknown>(examples);
   let reason: StopReason = 'exhausted';
 
   const evaluate = (production: Production, cost: number): void => {
     stats.candidates++;
     if ((stats.candidates & 1023) === 0) checkBudget();
     const run = production.primitive.run as (...a: unknown[]) => unknown;
-    const values = new Array<unknown>(examples);
+    const values = scratch;
     const arity = args.length;
     if (production.section) {
       for (let i = 0; i < examples; i++) {
@@ -141,7 +146,7 @@ export function enumerate(
         values[i] = v;
       }
     }
-    offer({ type: production.result, cost, values, production, arguments: args.slice(), leaf: undefined });
+    offer(production.result, cost, values, production, args, undefined);
   };
 
   const fill = (production: Production, position: number, remaining: number, cost: number): void => {
@@ -177,7 +182,10 @@ export function enumerate(
     let nextLeaf = 0;
     for (let cost = 1; cost <= limits.maxCost; cost++) {
       if (solutions.length > 0 && cost > firstSolutionCost + limits.extraBits) break;
-      while (nextLeaf < byCost.length && byCost[nextLeaf]!.cost === cost) offer(byCost[nextLeaf++]!);
+      while (nextLeaf < byCost.length && byCost[nextLeaf]!.cost === cost) {
+        const leaf = byCost[nextLeaf++]!;
+        offer(leaf.type, leaf.cost, leaf.values, undefined, [], leaf.leaf);
+      }
       refreshMinimums();
       for (const production of productions) {
         const remaining = cost - production.bits;
