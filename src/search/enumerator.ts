@@ -68,6 +68,8 @@ export function enumerate(
   const examples = inputs.length;
   const trainCount = outputs.length;
   let firstSolutionCost = Infinity;
+  const started = performance.now();
+  let deadline = limits.deadline;
 
   /** Keeps a candidate unless an equal one is kept; `values` may be a scratch array (copied when kept). */
   const offer = (type: Type, cost: number, values: readonly unknown[], production: Production | undefined, parts: readonly Candidate[], leaf: Expression | undefined): void => {
@@ -82,13 +84,18 @@ export function enumerate(
     if (type === 'Grid') {
       for (let i = 0; i < trainCount; i++) if (!(values[i] as Grid).equals(outputs[i]!)) return;
       solutions.push(candidate);
-      if (solutions.length === 1) firstSolutionCost = cost;
+      if (solutions.length === 1) {
+        firstSolutionCost = cost;
+        // Further attempts get as long again as the first took (at least a second), within the limit.
+        const now = performance.now();
+        deadline = Math.min(deadline, now + Math.max(1000, now - started));
+      }
       if (solutions.length >= limits.attempts) throw new Stop('solved');
     }
   };
 
   const checkBudget = (): void => {
-    if (performance.now() > limits.deadline) throw new Stop('time');
+    if (performance.now() > deadline) throw new Stop('time');
     if (stats.candidates >= limits.maxCandidates) throw new Stop('candidates');
     if (store.bytes >= limits.maxStoreBytes) throw new Stop('memory');
   };
