@@ -22,3 +22,10 @@ export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, 
 export { parseTask, readTaskFile, readTasks, TaskFileError, type TaskOrError } from './tasks/read-task.ts';
 export type { Pair, Puzzle, Task, TestCase } from './tasks/task.ts';
 export { runOnTask, firstDifference, type Difference, type PairResult } from './tasks/run-on-task.ts';
+
+export { solvePuzzle, type Solution, type SolveOptions, type SolveResult } from './search/solve.ts';
+export { programBits } from './search/description-length.ts';
+export { taskConstants, type Constant } from './search/constants.ts';
+export type { EnumerationStatistics, StopReason } from './search/enumerator.ts';
+export { solveFiles, type BatchOptions } from './batch/solve-files.ts';
+export type { TaskReport, ReportedSolution } from './batch/task-report.ts';
