@@ -189,6 +189,16 @@ export const colourPrimitives = [
     run: (g) => rankColour(g, -1, false),
   }),
   primitive({
+    name: 'majority_colour',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Colour',
+    bits: 6,
+    doc: 'The colour with the most cells, background included (the lowest on ties).',
+    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'majority_colour(grid)', output: 0 },
+    run: (g) => rankColour(g, 1, false),
+  }),
+  primitive({
     name: 'recolour_object',
     category: 'colour',
     parameters: ['Object', 'Colour'],

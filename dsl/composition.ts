@@ -39,7 +39,10 @@ export function overlay(bottom: Grid, top: Grid, transparent: number): Grid | Fa
   return new Grid(bottom.height, bottom.width, out);
 }
 
-/** Stacks the grids in order; later cells that are not the shared background win. */
+/**
+ * Stacks the grids in order; later cells that are not the shared background win. The shared
+ * background is black when any grid holds black, else the most frequent colour over all grids.
+ */
 export function overlayAll(grids: readonly Grid[]): Grid | Failure {
   if (grids.length === 0) return FAILURE;
   const { height, width } = grids[0]!;
@@ -48,8 +51,9 @@ export function overlayAll(grids: readonly Grid[]): Grid | Failure {
     if (g.height !== height || g.width !== width) return FAILURE;
     for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
   }
+  // The shared background, by the same rule as backgroundColour: black when any cell is black.
   let background = 0;
-  for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
+  if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
   const out = grids[0]!.cells.slice();
   for (let k = 1; k < grids.length; k++) {
     const cells = grids[k]!.cells;

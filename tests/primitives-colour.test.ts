@@ -18,11 +18,12 @@ function gridOf(name: string, ...args: unknown[]): Grid {
   if (!(value instanceof Grid)) throw new Error(`tests/primitives-colour.test.ts: ${name} gave ${String(value)}, expected a grid`);
   return value;
 }
-function mostFrequent(g: Grid): number {
+/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
+function backgroundOf(g: Grid): number {
+  if (g.cells.includes(0)) return 0;
   const counts = new Array<number>(10).fill(0);
   for (const v of g.cells) counts[v]!++;
-  const top = Math.max(...counts);
-  return counts[0] === top ? 0 : counts.indexOf(top);
+  return counts.indexOf(Math.max(...counts));
 }
 function countsOf(g: Grid): number[] {
   const counts = new Array<number>(10).fill(0);
@@ -68,7 +69,7 @@ describe('colour laws', () => {
   it('keep_colour and remove_colour split the grid: each cell kept by exactly one of them', () => {
     fc.assert(
       fc.property(arbitraryGrid(), colour, (g, c) => {
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         const kept = gridOf('keep_colour', g, c);
         const removed = gridOf('remove_colour', g, c);
         for (let i = 0; i < g.cells.length; i++) {
@@ -83,7 +84,7 @@ describe('colour laws', () => {
   it('recolour_all paints every non-background cell and leaves the background', () => {
     fc.assert(
       fc.property(arbitraryGrid(), colour, (g, c) => {
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         const r = gridOf('recolour_all', g, c);
         for (let i = 0; i < g.cells.length; i++) expect(r.cells[i]).toBe(g.cells[i] === background ? background : c);
       }),
@@ -94,7 +95,7 @@ describe('colour laws', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const counts = countsOf(g);
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         const most = callPrimitive('most_common_colour', g);
         const others = counts.map((n, c) => (c === background ? 0 : n));
         if (Math.max(...others) === 0) expect(most).toBe(FAILURE);
@@ -108,6 +109,19 @@ describe('colour laws', () => {
         expect(counts[least]).toBe(Math.min(...present));
       }),
     );
+  });
+
+  it('majority_colour is the lowest colour with the most cells, background included', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const counts = countsOf(g);
+        expect(callPrimitive('majority_colour', g)).toBe(counts.indexOf(Math.max(...counts)));
+      }),
+    );
+    // Worked by hand: black 3 cells beats 4 (2 cells) and 3 (1 cell), though black is the background.
+    expect(callPrimitive('majority_colour', G([[0, 3, 0], [4, 4, 0]]))).toBe(0);
+    // 6 and 2 tie with two cells each: the lower, 2.
+    expect(callPrimitive('majority_colour', G([[6, 2], [2, 6], [1, 0]]))).toBe(2);
   });
 
   it('recolour_object keeps position and shape and uses only the new colour', () => {
@@ -191,7 +205,10 @@ describe('colour, hand-worked cases', () => {
   });
 
   it('replace_background and most_common_object_colour', () => {
-    expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 0]]), 3))).toEqual([[3, 1, 3], [3, 3, 0]]);
+    // No black: 5 (four cells) is the background.
+    expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 2]]), 3))).toEqual([[3, 1, 3], [3, 3, 2]]);
+    // One black cell: black is the background although 5 has more cells.
+    expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 0]]), 3))).toEqual([[5, 1, 5], [5, 5, 3]]);
     const objects = callPrimitive('objects_by_colour', G([[6, 0, 1, 0, 6], [0, 0, 1, 0, 0], [1, 0, 0, 0, 6]]));
     // objects: 6, the 1 pair, 6, 1, 6 -> colour 6 three times
     expect(callPrimitive('most_common_object_colour', objects)).toBe(6);

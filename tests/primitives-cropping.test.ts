@@ -11,11 +11,12 @@ import { callPrimitive } from './support/run-primitive.ts';
 const G = Grid.fromRows;
 const rows = (value: unknown): unknown => (value instanceof Grid ? value.toRows() : value);
 
-function mostFrequent(g: Grid): number {
+/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
+function backgroundOf(g: Grid): number {
+  if (g.cells.includes(0)) return 0;
   const counts = new Array<number>(10).fill(0);
   for (const v of g.cells) counts[v]!++;
-  const top = Math.max(...counts);
-  return counts[0] === top ? 0 : counts.indexOf(top);
+  return counts.indexOf(Math.max(...counts));
 }
 const countNot = (g: Grid, colour: number) => g.cells.reduce((n, v) => n + (v === colour ? 0 : 1), 0);
 const sub = (g: Grid, top: number, left: number, h: number, w: number) =>
@@ -25,7 +26,7 @@ describe('cropping laws', () => {
   it('crop_to_content fits in the input, keeps every non-background cell and is tight', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         const result = callPrimitive('crop_to_content', g);
         if (countNot(g, background) === 0) {
           expect(result).toBe(FAILURE);
@@ -142,7 +143,15 @@ describe('cropping, hand-worked cases', () => {
   });
 
   it('crop_to_content on a non-black background crops to the other colours', () => {
-    expect(rows(callPrimitive('crop_to_content', G([[7, 7, 7], [7, 0, 7], [7, 7, 7]])))).toEqual([[0]]);
+    // No black: 7 (eight cells) is the background, so only the 2 is content.
+    expect(rows(callPrimitive('crop_to_content', G([[7, 7, 7], [7, 2, 7], [7, 7, 7]])))).toEqual([[2]]);
+    // One black cell makes black the background although 7 has more cells: the sevens are the
+    // content and their bounding box is the whole grid.
+    expect(rows(callPrimitive('crop_to_content', G([[7, 7, 7], [7, 0, 7], [7, 7, 7]])))).toEqual([
+      [7, 7, 7],
+      [7, 0, 7],
+      [7, 7, 7],
+    ]);
   });
 
   it('crop_to_object takes the neighbours inside the box too; object_picture does not', () => {

@@ -54,8 +54,9 @@ describe('filling laws', () => {
   });
 
   it('fill_enclosed is idempotent whenever the fill does not change which colour is the background', () => {
-    // When the filled colour overtakes the background and a third colour becomes the most
-    // frequent, a second fill works on a different background; that case is left out.
+    // When the fill covers every black cell (or, with no black, the filled colour overtakes the
+    // background) and a third colour becomes the background, a second fill works on a different
+    // background; that case is left out.
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
         const once = grid('fill_enclosed', g, colour);

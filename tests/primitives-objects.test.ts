@@ -9,12 +9,12 @@ import { callPrimitive } from './support/run-primitive.ts';
 
 const G = Grid.fromRows;
 
-/** The most frequent colour, 0 winning ties, then the lowest: computed independently here. */
-function mostFrequent(g: Grid): number {
+/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
+function backgroundOf(g: Grid): number {
+  if (g.cells.includes(0)) return 0;
   const counts = new Array<number>(10).fill(0);
   for (const v of g.cells) counts[v]!++;
-  const top = Math.max(...counts);
-  return counts[0] === top ? 0 : counts.indexOf(top);
+  return counts.indexOf(Math.max(...counts));
 }
 
 function objectsOf(name: string, ...args: unknown[]): GridObject[] {
@@ -84,7 +84,7 @@ describe('object extraction laws', () => {
     it(`${name} partitions the non-background cells`, () => {
       fc.assert(
         fc.property(arbitraryGrid(), (g) => {
-          const background = mostFrequent(g);
+          const background = backgroundOf(g);
           const count = coverage(objectsOf(name, g), g);
           for (let i = 0; i < count.length; i++) expect(count[i]).toBe(g.cells[i] === background ? 0 : 1);
         }),
@@ -96,7 +96,7 @@ describe('object extraction laws', () => {
     it(`${e.name} gives connected, maximal regions${e.multicolour ? '' : ' of one colour'} in reading order`, () => {
       fc.assert(
         fc.property(arbitraryGrid(), (g) => {
-          const background = mostFrequent(g);
+          const background = backgroundOf(g);
           const objects = objectsOf(e.name, g);
           const owner = new Array<number>(g.cells.length).fill(-1);
           let previousFirst = -1;
@@ -136,7 +136,7 @@ describe('object extraction laws', () => {
   it('colour_groups gives one object per non-background colour, in colour order', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         const present = [...new Set(g.cells)].filter((c) => c !== background).sort((a, b) => a - b);
         const colours = objectsOf('colour_groups', g).map((o) => o.mainColour);
         expect(colours).toEqual(present);
@@ -175,7 +175,7 @@ describe('object extraction laws', () => {
   it('enclosed_regions covers exactly the background cells that cannot reach the border', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        const background = mostFrequent(g);
+        const background = backgroundOf(g);
         // independent reachability: grow from the border until nothing changes
         const reach = new Array<boolean>(g.cells.length).fill(false);
         let grew = true;
@@ -203,10 +203,10 @@ describe('object extraction laws', () => {
     );
   });
 
-  it('background is a colour with the most cells, 0 when it ties', () => {
+  it('background is black when the grid holds black, else a colour with the most cells', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        expect(callPrimitive('background', g)).toBe(mostFrequent(g));
+        expect(callPrimitive('background', g)).toBe(backgroundOf(g));
       }),
     );
   });
@@ -293,9 +293,13 @@ describe('object extraction, hand-worked cases', () => {
     ]);
   });
 
-  it('background prefers 0 on a tie and otherwise takes the most frequent colour', () => {
-    expect(callPrimitive('background', G([[3, 0], [0, 3]]))).toBe(0);
-    expect(callPrimitive('background', G([[3, 3], [0, 3]]))).toBe(3);
+  it('background is black whenever black is present, otherwise the most frequent colour (lowest on ties)', () => {
+    // Three 3s and one 0: black is present, so black is the background.
+    expect(callPrimitive('background', G([[3, 3], [0, 3]]))).toBe(0);
+    // No black: three 3s beat one 5.
+    expect(callPrimitive('background', G([[3, 3], [5, 3]]))).toBe(3);
+    // No black, two 7s and two 4s tie: the lower colour, 4.
+    expect(callPrimitive('background', G([[7, 4], [4, 7]]))).toBe(4);
   });
 
   it('extraction from a grid of only background gives no objects', () => {

@@ -80,11 +80,13 @@ export function colourCounts(grid: Grid): Uint32Array {
 }
 
 /**
- * The background colour: the most frequent colour, preferring black (0) when it ties for
- * first place; other ties go to the lowest colour.
+ * The background colour: black (0) whenever the grid holds any black cell (puzzles draw on
+ * black far more often than not, and a dense small picture can have more drawn cells than
+ * empty ones); otherwise the most frequent colour, the lowest on ties.
  */
 export function backgroundColour(grid: Grid): number {
   const counts = colourCounts(grid);
+  if (counts[0]! > 0) return 0;
   let best = 0;
   for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
   return best;
