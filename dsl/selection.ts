@@ -441,4 +441,29 @@ export const selectionPrimitives = [
     example: { input: [[3, 3, 3, 0], [3, 0, 3, 0], [3, 3, 3, 0], [0, 0, 0, 0]], expression: 'hole_count(first_object(objects_by_colour(grid)))', output: 1 },
     run: (o) => countEnclosedRegions(o.shape, EMPTY),
   }),
+  primitive({
+    name: 'has_hole',
+    category: 'selection',
+    parameters: ['Object'],
+    result: 'Bool',
+    bits: 6,
+    doc: 'Whether the object closes in at least one gap (see hole_count): a ring, a frame, a loop.',
+    example: { input: [[3, 3, 3, 0], [3, 0, 3, 0], [3, 3, 3, 0], [0, 0, 0, 0]], expression: 'has_hole(first_object(objects_by_colour(grid)))', output: true },
+    run: (o) => countEnclosedRegions(o.shape, EMPTY) > 0,
+  }),
+  primitive({
+    name: 'count_colour_in_object',
+    category: 'selection',
+    parameters: ['Object', 'Colour'],
+    result: 'Int',
+    bits: 6,
+    doc: 'How many cells of the object have the colour (a key: for example the shape with the most red spots).',
+    example: { input: [[1, 2, 1], [2, 1, 1]], expression: 'count_colour_in_object(first_object(objects_multicolour(grid)), #2)', output: 2 },
+    run: (o, colour) => {
+      const cells = o.shape.cells;
+      let n = 0;
+      for (let i = 0; i < cells.length; i++) if (cells[i] === colour) n++;
+      return n;
+    },
+  }),
 ];

@@ -250,6 +250,56 @@ describe('selection, hand-worked cases', () => {
     expect(callPrimitive('has_same_shape', corner, corner)).toBe(true);
   });
 
+  it('has_hole: a ring and a frame with a spot inside have holes; a cup and a bar do not', () => {
+    const scene = G([
+      [4, 4, 4, 0, 6, 0, 6, 0, 0, 0],
+      [4, 0, 4, 0, 6, 0, 6, 0, 0, 0],
+      [4, 4, 4, 0, 6, 6, 6, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+      [5, 5, 5, 5, 0, 7, 7, 7, 7, 0],
+      [5, 0, 2, 5, 0, 0, 0, 0, 0, 0],
+      [5, 5, 5, 5, 0, 0, 0, 0, 0, 0],
+    ]);
+    // objects_by_colour in reading order: the 4 ring, the 6 cup, the 5 frame, the 7 bar, the 2 spot.
+    const [ring, cup, frame, bar, spot] = objectsOf(scene);
+    expect([ring, cup, frame, bar, spot].map((o) => o!.mainColour)).toEqual([4, 6, 5, 7, 2]);
+    // The frame's inside holds a background cell and a 2: both are not part of the 5 object.
+    expect([ring, cup, frame, bar, spot].map((o) => callPrimitive('has_hole', o))).toEqual([true, false, true, false, false]);
+  });
+
+  it('has_hole agrees with hole_count', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, ({ objects }) => {
+        for (const o of objects) expect(callPrimitive('has_hole', o)).toBe((callPrimitive('hole_count', o) as number) > 0);
+      }),
+    );
+  });
+
+  it('count_colour_in_object counts one colour of a multicolour object; summed over colours it is the size', () => {
+    const scene = G([
+      [1, 2, 1, 0, 0],
+      [1, 1, 2, 0, 3],
+      [0, 0, 0, 0, 3],
+    ]);
+    const [left, right] = callPrimitive('objects_multicolour', scene) as GridObject[];
+    // Left object: 1,2,1 / 1,1,2 -> four 1s and two 2s; right object: two 3s.
+    expect(callPrimitive('count_colour_in_object', left, 1)).toBe(4);
+    expect(callPrimitive('count_colour_in_object', left, 2)).toBe(2);
+    expect(callPrimitive('count_colour_in_object', left, 3)).toBe(0);
+    expect(callPrimitive('count_colour_in_object', right, 3)).toBe(2);
+    // As a key: the object with the most 2s.
+    expect(callPrimitive('object_with_most', [right, left], (o: GridObject) => callPrimitive('count_colour_in_object', o, 2))).toBe(left);
+    fc.assert(
+      fc.property(arbitraryObjects, ({ objects }) => {
+        for (const o of objects) {
+          let total = 0;
+          for (let c = 0; c < 10; c++) total += callPrimitive('count_colour_in_object', o, c) as number;
+          expect(total).toBe(o.size);
+        }
+      }),
+    );
+  });
+
   it('a failing key or test makes the whole selection fail', () => {
     const failing = () => FAILURE;
     const objects = objectsOf(g);
