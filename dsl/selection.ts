@@ -458,7 +458,7 @@ export const selectionPrimitives = [
     result: 'Int',
     bits: 6,
     doc: 'How many cells of the object have the colour (a key: for example the shape with the most red spots).',
-    example: { input: [[1, 2, 1], [2, 1, 1]], expression: 'count_colour_in_object(first_object(objects_multicolour(grid)), #2)', output: 2 },
+    example: { input: [[1, 2, 1], [2, 1, 0]], expression: 'count_colour_in_object(first_object(objects_multicolour(grid)), #2)', output: 2 },
     run: (o, colour) => {
       const cells = o.shape.cells;
       let n = 0;
