@@ -23,7 +23,7 @@ export function colourGroups(grid: Grid): GridObject[] {
 }
 
 /** Regions of background cells (edge neighbours) that cannot reach the border, reading order. */
-export function enclosedRegions(grid: Grid): GridObject[] {
+export function enclosedRegions(grid: Grid): readonly GridObject[] {
   const background = backgroundColour(grid);
   const enclosed = enclosedCells(grid, background);
   const cells = new Uint8Array(enclosed.length);

@@ -14,11 +14,38 @@ export interface ComponentOptions {
   readonly background: number;
 }
 
-/** Objects in reading order of their first cell (top row first, then left). */
-export function components(grid: Grid, options: ComponentOptions): GridObject[] {
+/**
+ * Results already computed, per grid instance and options. Grids never change, so a result
+ * stays valid for the grid's lifetime; the search asks for the same grid's objects many times
+ * (each extractor, and primitives that work object by object).
+ */
+const cache = new WeakMap<Grid, Map<number, readonly GridObject[]>>();
+
+/** Objects in reading order of their first cell (top row first, then left). Callers must not change the list. */
+export function components(grid: Grid, options: ComponentOptions): readonly GridObject[] {
+  const key = (options.diagonal ? 1 : 0) | (options.multicolour ? 2 : 0) | ((options.background + 2) << 2);
+  let forGrid = cache.get(grid);
+  const known = forGrid?.get(key);
+  if (known) return known;
+  const found = computeComponents(grid, options);
+  if (!forGrid) cache.set(grid, (forGrid = new Map()));
+  forGrid.set(key, found);
+  return found;
+}
+
+/** Work buffers shared by every call (the search calls this very often; allocation shows). */
+let seenBuffer = new Uint8Array(0);
+let queueBuffer = new Int32Array(0);
+
+function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] {
   const { height, width, cells } = grid;
-  const seen = new Uint8Array(height * width);
-  const queue = new Int32Array(height * width);
+  if (seenBuffer.length < cells.length) {
+    seenBuffer = new Uint8Array(cells.length);
+    queueBuffer = new Int32Array(cells.length);
+  }
+  const seen = seenBuffer;
+  const queue = queueBuffer;
+  seen.fill(0, 0, cells.length);
   const objects: GridObject[] = [];
   for (let start = 0; start < cells.length; start++) {
     if (seen[start] || cells[start] === options.background) continue;
