@@ -65,6 +65,84 @@ export function scaleDown(g: Grid, k: number): Grid | Failure {
   return new Grid(h, w, out);
 }
 
+/** Every k×k block becomes its most frequent colour (the lowest on ties). */
+export function majorityScaleDown(g: Grid, k: number): Grid | Failure {
+  if (!isCount(k, MOST_COPIES)) return FAILURE;
+  const { height, width, cells } = g;
+  if (height % k !== 0 || width % k !== 0) return FAILURE;
+  const h = height / k;
+  const w = width / k;
+  const out = new Uint8Array(h * w);
+  const counts = new Uint32Array(256);
+  for (let r = 0; r < h; r++) {
+    for (let c = 0; c < w; c++) {
+      counts.fill(0);
+      for (let i = 0; i < k; i++) {
+        const base = (r * k + i) * width + c * k;
+        for (let j = 0; j < k; j++) counts[cells[base + j]!]!++;
+      }
+      let best = 0;
+      for (let v = 1; v < 10; v++) if (counts[v]! > counts[best]!) best = v;
+      out[r * w + c] = best;
+    }
+  }
+  return new Grid(h, w, out);
+}
+
+/**
+ * Square parts along the longer side, each as big as the shorter side, side by side or
+ * stacked, with or without one-cell separator lines between them.
+ */
+export function splitIntoSquares(g: Grid): Grid[] | Failure {
+  const { height, width } = g;
+  if (height === width) return [g];
+  const across = width > height;
+  const long = across ? width : height;
+  const short = across ? height : width;
+  let n: number;
+  if (long % short === 0) n = long / short;
+  else if ((long + 1) % (short + 1) === 0) n = (long + 1) / (short + 1);
+  else return FAILURE;
+  return across ? splitAcross(g, n) : splitDown(g, n);
+}
+
+/** For each part, how many parts (itself included) have the same key. */
+function tally(parts: readonly Grid[], key: (g: Grid) => Grid): number[] {
+  const keys = parts.map(key);
+  return keys.map((k) => keys.reduce((n, other) => n + (k.equals(other) ? 1 : 0), 0));
+}
+
+/** The part's filled pattern: 1 where a cell is not the part's background, 0 elsewhere. */
+function filledPattern(g: Grid): Grid {
+  const background = backgroundColour(g);
+  const out = new Uint8Array(g.cells.length);
+  for (let i = 0; i < out.length; i++) out[i] = g.cells[i] === background ? 0 : 1;
+  return new Grid(g.height, g.width, out);
+}
+
+/**
+ * The one part unlike the others: first by exact cells, then, when every part differs (say
+ * each is drawn in its own colour), by the pattern of filled cells. Needs three parts or more,
+ * exactly one unique and every other part with a twin.
+ */
+export function oddOneOutPart(parts: readonly Grid[]): Grid | Failure {
+  if (parts.length < 3) return FAILURE;
+  for (const key of [(g: Grid) => g, filledPattern]) {
+    const counts = tally(parts, key);
+    const unique = counts.filter((n) => n === 1).length;
+    if (unique === 1) return parts[counts.indexOf(1)]!;
+    if (unique < parts.length) return FAILURE;
+  }
+  return FAILURE;
+}
+
+/** The part that occurs most often (exact cells; the first on ties). */
+export function mostCommonPart(parts: readonly Grid[]): Grid | Failure {
+  if (parts.length === 0) return FAILURE;
+  const counts = tally(parts, (g) => g);
+  return parts[counts.indexOf(Math.max(...counts))]!;
+}
+
 /** The grid repeated to fill `height` × `width`, starting at the top-left corner. */
 export function repeatToSize(g: Grid, height: number, width: number): Grid | Failure {
   const cap = getSizeCap();
@@ -242,6 +320,16 @@ export const geometryPrimitives = [
     run: scaleDown,
   }),
   primitive({
+    name: 'majority_scale_down',
+    category: 'geometry',
+    parameters: ['Grid', 'Int'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Shrinks the grid: every k×k block becomes one cell of its most frequent colour (the lowest on ties), so stray specks vanish.',
+    example: { input: [[3, 3, 0, 0], [3, 5, 0, 4]], expression: 'majority_scale_down(grid, 2)', output: [[3, 0]] },
+    run: majorityScaleDown,
+  }),
+  primitive({
     name: 'tile',
     category: 'geometry',
     parameters: ['Grid', 'Int', 'Int'],
@@ -338,6 +426,36 @@ export const geometryPrimitives = [
     doc: 'The part at the position (counting from 0).',
     example: { input: [[1, 2]], expression: 'part(split_across(grid, 2), 0)', output: [[1]] },
     run: (parts, index) => (Number.isInteger(index) && index >= 0 && index < parts.length ? parts[index]! : FAILURE),
+  }),
+  primitive({
+    name: 'split_into_squares',
+    category: 'geometry',
+    parameters: ['Grid'],
+    result: 'Grids',
+    bits: 6,
+    doc: 'Cuts a long grid into squares as big as its short side, in order (one-cell separators allowed); a square grid is its own one part.',
+    example: { input: [[1, 0, 2, 2], [1, 1, 2, 0]], expression: 'part(split_into_squares(grid), 1)', output: [[2, 2], [2, 0]] },
+    run: splitIntoSquares,
+  }),
+  primitive({
+    name: 'odd_one_out_part',
+    category: 'geometry',
+    parameters: ['Grids'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The one part unlike the others (by cells, else by the pattern of filled cells); fails unless exactly one is unique and the rest have twins.',
+    example: { input: [[1, 0, 2, 0, 3, 3]], expression: 'odd_one_out_part(split_across(grid, 3))', output: [[3, 3]] },
+    run: oddOneOutPart,
+  }),
+  primitive({
+    name: 'most_common_part',
+    category: 'geometry',
+    parameters: ['Grids'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The part that occurs most often, cell for cell (the first on ties); fails on no parts.',
+    example: { input: [[1, 2, 1, 1]], expression: 'most_common_part(split_across(grid, 4))', output: [[1]] },
+    run: mostCommonPart,
   }),
   primitive({
     name: 'height_of',

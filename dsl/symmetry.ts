@@ -85,6 +85,26 @@ function placeQuadrants(g: Grid, rowsTwice: boolean, columnsTwice: boolean): Gri
   return new Grid(outHeight, outWidth, out);
 }
 
+/**
+ * A square grid and its quarter turns in a 2×2 layout, turning clockwise around the centre:
+ * the grid top-left, its clockwise quarter turn top-right, its half turn bottom-right and its
+ * counterclockwise quarter turn bottom-left. The result looks the same after a quarter turn.
+ */
+export function fourRotationsSquare(g: Grid): Grid | Failure {
+  const n = g.height;
+  if (g.width !== n || !shapeAllowed(2 * n, 2 * n)) return FAILURE;
+  const quadrants = [g, rotateClockwise(g), rotateCounterclockwise(g), rotateHalf(g)];
+  const size = 2 * n;
+  const out = new Uint8Array(size * size);
+  for (let q = 0; q < 4; q++) {
+    const cells = quadrants[q]!.cells;
+    const top = q >= 2 ? n : 0;
+    const left = q % 2 === 1 ? n : 0;
+    for (let r = 0; r < n; r++) out.set(cells.subarray(r * n, (r + 1) * n), (top + r) * size + left);
+  }
+  return new Grid(size, size, out);
+}
+
 export function isSymmetricLeftRight(g: Grid): boolean {
   const { height, width, cells } = g;
   for (let r = 0; r < height; r++) {
@@ -312,6 +332,20 @@ export const symmetryPrimitives = [
       output: [[1, 2, 2, 1], [3, 0, 0, 3], [3, 0, 0, 3], [1, 2, 2, 1]],
     },
     run: (g) => (shapeAllowed(g.height * 2, g.width * 2) ? placeQuadrants(g, true, true) : FAILURE),
+  }),
+  primitive({
+    name: 'four_rotations_square',
+    category: 'symmetry',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'A square grid with its quarter turns around it: the grid top-left, clockwise turn top-right, half turn bottom-right, counterclockwise turn bottom-left.',
+    example: {
+      input: [[1, 2], [3, 0]],
+      expression: 'four_rotations_square(grid)',
+      output: [[1, 2, 3, 1], [3, 0, 0, 2], [2, 0, 0, 3], [1, 3, 2, 1]],
+    },
+    run: fourRotationsSquare,
   }),
   primitive({
     name: 'is_symmetric_left_right',

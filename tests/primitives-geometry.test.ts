@@ -179,6 +179,110 @@ describe('geometry laws', () => {
   });
 });
 
+describe('majority_scale_down and parts', () => {
+  const count = (parts: readonly Grid[], g: Grid) => parts.filter((p) => p.equals(g)).length;
+
+  it('majority_scale_down undoes scale_up and agrees with scale_down wherever that applies', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 3 }), (g, k) => {
+        const big = apply('scale_up', g, k);
+        if (big === FAILURE) return;
+        expect(grid('majority_scale_down', big, k).equals(g)).toBe(true);
+        const strict = apply('scale_down', g, k);
+        if (strict !== FAILURE) expect(grid('majority_scale_down', g, k).equals(strict as Grid)).toBe(true);
+      }),
+    );
+  });
+
+  it('majority_scale_down: each block takes its commonest colour, the lowest on ties; bad factors fail', () => {
+    const g = G([
+      [1, 1, 2, 0, 0, 0],
+      [1, 2, 2, 0, 7, 0],
+    ]);
+    // Blocks: 1,1,1,2 -> 1; 2,0,2,0 -> tie of 0 and 2 -> 0; 0,0,7,0 -> 0.
+    expect(rows(apply('majority_scale_down', g, 2))).toEqual([[1, 0, 0]]);
+    expect(apply('majority_scale_down', g, 0)).toBe(FAILURE);
+    expect(apply('majority_scale_down', g, 11)).toBe(FAILURE);
+    expect(apply('majority_scale_down', g, 4)).toBe(FAILURE);
+  });
+
+  it('split_into_squares cuts the long side into squares of the short side, separators allowed', () => {
+    expect(grids('split_into_squares', G([[1, 0, 2, 2], [1, 1, 2, 0]])).map((p) => p.toRows())).toEqual([
+      [[1, 0], [1, 1]],
+      [[2, 2], [2, 0]],
+    ]);
+    // Stacked: a 4×2 grid is two 2×2 squares.
+    expect(grids('split_into_squares', G([[1, 2], [3, 4], [5, 6], [7, 8]])).map((p) => p.toRows())).toEqual([
+      [[1, 2], [3, 4]],
+      [[5, 6], [7, 8]],
+    ]);
+    // A 2×5 grid with a separator column in the middle: two 2×2 squares.
+    expect(grids('split_into_squares', G([[1, 2, 5, 3, 4], [1, 2, 5, 3, 4]])).map((p) => p.toRows())).toEqual([
+      [[1, 2], [1, 2]],
+      [[3, 4], [3, 4]],
+    ]);
+    const square = G([[1, 2], [3, 4]]);
+    expect(grids('split_into_squares', square)).toEqual([square]);
+    // 2×3: neither 3 / 2 nor (3 + 1) / (2 + 1) is whole.
+    expect(apply('split_into_squares', G([[1, 2, 3], [4, 5, 6]]))).toBe(FAILURE);
+  });
+
+  it('split_into_squares gives squares as big as the short side', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const parts = apply('split_into_squares', g);
+        if (parts === FAILURE) return;
+        const side = Math.min(g.height, g.width);
+        for (const p of parts as Grid[]) expect([p.height, p.width]).toEqual([side, side]);
+      }),
+    );
+  });
+
+  it('odd_one_out_part: by cells first, then by filled pattern; fails when it is not exactly one', () => {
+    const a = G([[1, 0], [0, 1]]);
+    const b = G([[1, 1], [0, 1]]);
+    expect(apply('odd_one_out_part', [a, b, a])).toBe(b);
+    // Each part its own colour: cells all differ, so the filled patterns decide; the 4 part is
+    // the only one filled on the top-right.
+    const twos = G([[2, 0], [0, 2]]);
+    const threes = G([[3, 0], [0, 3]]);
+    const fours = G([[4, 4], [0, 4]]);
+    const sixes = G([[6, 0], [0, 6]]);
+    expect(apply('odd_one_out_part', [twos, threes, fours, sixes])).toBe(fours);
+    // Two unique parts next to a pair: no single odd one.
+    expect(apply('odd_one_out_part', [a, a, b, G([[5, 5], [5, 0]])])).toBe(FAILURE);
+    // All the same, or fewer than three parts.
+    expect(apply('odd_one_out_part', [a, a, a])).toBe(FAILURE);
+    expect(apply('odd_one_out_part', [a, b])).toBe(FAILURE);
+  });
+
+  it('odd_one_out_part, when it succeeds, picks a part that has no twin while every other part has one', () => {
+    const part = fc.constantFrom(G([[1, 0]]), G([[0, 1]]), G([[2, 0]]), G([[3, 3]]));
+    fc.assert(
+      fc.property(fc.array(part, { minLength: 0, maxLength: 6 }), (parts) => {
+        const odd = apply('odd_one_out_part', parts);
+        if (odd === FAILURE) return;
+        expect(parts).toContain(odd);
+        expect(parts.length).toBeGreaterThanOrEqual(3);
+      }),
+    );
+  });
+
+  it('most_common_part picks the part with the most copies, the first on ties', () => {
+    const one = G([[1]]);
+    const two = G([[2]]);
+    expect(rows(apply('most_common_part', [one, two, G([[2]]), G([[1]]), G([[2]])]))).toEqual([[2]]);
+    expect(apply('most_common_part', [two, one])).toBe(two);
+    expect(apply('most_common_part', [])).toBe(FAILURE);
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(one, two, G([[3]])), { minLength: 1, maxLength: 8 }), (parts) => {
+        const best = apply('most_common_part', parts) as Grid;
+        for (const p of parts) expect(count(parts, best)).toBeGreaterThanOrEqual(count(parts, p));
+      }),
+    );
+  });
+});
+
 describe('geometry hand-worked cases', () => {
   it('translate clips and fills with the background', () => {
     const g = G([[5, 5, 5], [5, 1, 2], [5, 5, 5]]); // background 5

@@ -161,6 +161,38 @@ describe('symmetry laws', () => {
   });
 });
 
+describe('four_rotations_square', () => {
+  const square = fc
+    .integer({ min: 1, max: 6 })
+    .chain((n) => fc.array(fc.integer({ min: 0, max: 9 }), { minLength: n * n, maxLength: n * n }).map((cells) => new Grid(n, n, Uint8Array.from(cells))));
+
+  it('is twice the size, holds the grid top-left and looks the same after a quarter turn', () => {
+    fc.assert(
+      fc.property(square, (g) => {
+        const out = grid('four_rotations_square', g);
+        expect([out.height, out.width]).toEqual([2 * g.height, 2 * g.width]);
+        for (let r = 0; r < g.height; r++) for (let c = 0; c < g.width; c++) expect(out.get(r, c)).toBe(g.get(r, c));
+        expect(grid('rotate_clockwise', out).equals(out)).toBe(true);
+      }),
+    );
+  });
+
+  it('fails on a grid that is not square', () => {
+    expect(apply('four_rotations_square', G([[1, 2, 3], [4, 5, 6]]))).toBe(FAILURE);
+  });
+
+  it('lays out a 3×3 grid with its turns (worked by hand)', () => {
+    expect(rows(apply('four_rotations_square', G([[1, 2, 3], [4, 5, 6], [7, 8, 9]])))).toEqual([
+      [1, 2, 3, 7, 4, 1],
+      [4, 5, 6, 8, 5, 2],
+      [7, 8, 9, 9, 6, 3],
+      [3, 6, 9, 9, 8, 7],
+      [2, 5, 8, 6, 5, 4],
+      [1, 4, 7, 3, 2, 1],
+    ]);
+  });
+});
+
 describe('symmetry hand-worked cases', () => {
   it('rotations and reflections of a 2×3 grid', () => {
     const g = G([[1, 2, 3], [4, 5, 6]]);
