@@ -36,9 +36,10 @@ export function drawLine(g: Grid, from: Point, to: Point, colour: number): Grid 
 
 /**
  * Along every row, then every column: background cells between two consecutive
- * non-background cells of the same colour take that colour (cells the rows filled stay).
+ * non-background cells of the same colour take that colour, or `paint` when given (cells
+ * the rows filled stay).
  */
-export function connectSameColour(g: Grid): Grid {
+export function connectSameColour(g: Grid, paint?: number): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   const out = cells.slice();
@@ -51,7 +52,7 @@ export function connectSameColour(g: Grid): Grid {
       if (last >= 0 && cells[start + last * step] === v) {
         for (let m = last + 1; m < k; m++) {
           const j = start + m * step;
-          if (out[j] === background) out[j] = v;
+          if (out[j] === background) out[j] = paint ?? v;
         }
       }
       last = k;
@@ -62,8 +63,11 @@ export function connectSameColour(g: Grid): Grid {
   return new Grid(height, width, out);
 }
 
-/** Background cells with a non-background cell among their 8 neighbours take the colour. */
-export function surround(g: Grid, colour: number): Grid {
+/**
+ * Background cells with a non-background cell among their 8 neighbours take the colour;
+ * with `source` given, only neighbours of that colour count.
+ */
+export function surround(g: Grid, colour: number, source?: number): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   const out = cells.slice();
@@ -73,7 +77,8 @@ export function surround(g: Grid, colour: number): Grid {
       let near = false;
       for (let nr = Math.max(0, r - 1); nr <= Math.min(height - 1, r + 1) && !near; nr++) {
         for (let nc = Math.max(0, c - 1); nc <= Math.min(width - 1, c + 1); nc++) {
-          if (cells[nr * width + nc] !== background) {
+          const v = cells[nr * width + nc]!;
+          if (source === undefined ? v !== background : v === source) {
             near = true;
             break;
           }
@@ -151,6 +156,79 @@ export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Gr
   return new Grid(height, width, out);
 }
 
+/**
+ * Diagonal rays going down: each background cell takes the colour of the nearest
+ * non-background cell up its diagonal (up-left when `towardsRight`, else up-right).
+ */
+export function shootDiagonalRaysDown(g: Grid, towardsRight: boolean): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  const dc = towardsRight ? -1 : 1;
+  for (let r = 1; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const i = r * width + c;
+      const sc = c + dc;
+      if (cells[i] === background && sc >= 0 && sc < width) out[i] = out[(r - 1) * width + sc]!;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/** The outermost ring of cells takes the colour. */
+export function drawBorder(g: Grid, colour: number): Grid {
+  const { height, width } = g;
+  const out = g.cells.slice();
+  for (let c = 0; c < width; c++) {
+    out[c] = colour;
+    out[(height - 1) * width + c] = colour;
+  }
+  for (let r = 0; r < height; r++) {
+    out[r * width] = colour;
+    out[r * width + width - 1] = colour;
+  }
+  return new Grid(height, width, out);
+}
+
+/** Rows and columns made only of background cells take the colour. */
+export function fillEmptyLines(g: Grid, colour: number): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 0; r < height; r++) {
+    let empty = true;
+    for (let c = 0; c < width && empty; c++) if (cells[r * width + c] !== background) empty = false;
+    if (empty) out.fill(colour, r * width, (r + 1) * width);
+  }
+  for (let c = 0; c < width; c++) {
+    let empty = true;
+    for (let r = 0; r < height && empty; r++) if (cells[r * width + c] !== background) empty = false;
+    if (empty) for (let r = 0; r < height; r++) out[r * width + c] = colour;
+  }
+  return new Grid(height, width, out);
+}
+
+/** Non-background cells with fewer than two edge neighbours of their own colour become background. */
+export function removeLonelyCells(g: Grid): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const i = r * width + c;
+      const v = cells[i]!;
+      if (v === background) continue;
+      let same = 0;
+      if (r > 0 && cells[i - width] === v) same++;
+      if (r < height - 1 && cells[i + width] === v) same++;
+      if (c > 0 && cells[i - 1] === v) same++;
+      if (c < width - 1 && cells[i + 1] === v) same++;
+      if (same < 2) out[i] = background;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
 export const fillingPrimitives = [
   primitive({
     name: 'fill_enclosed',
@@ -207,6 +285,76 @@ export const fillingPrimitives = [
       output: [[2, 2, 2, 0], [2, 5, 2, 0], [2, 2, 2, 0], [0, 0, 0, 0]],
     },
     run: surround,
+  }),
+  primitive({
+    name: 'connect_same_colour_with',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'In each row, then each column, the background gap between two neighbouring cells of the same colour takes the given colour.',
+    example: {
+      input: [[2, 0, 0, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
+      expression: 'connect_same_colour_with(grid, #8)',
+      output: [[2, 8, 8, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
+    },
+    run: (g, colour) => connectSameColour(g, colour),
+  }),
+  primitive({
+    name: 'surround_colour',
+    category: 'filling',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Background cells touching a cell of the first colour (edges or corners) take the second colour.',
+    example: {
+      input: [[0, 0, 0, 0], [0, 5, 0, 0], [0, 0, 0, 3]],
+      expression: 'surround_colour(grid, #5, #2)',
+      output: [[2, 2, 2, 0], [2, 5, 2, 0], [2, 2, 2, 3]],
+    },
+    run: (g, source, colour) => surround(g, colour, source),
+  }),
+  primitive({
+    name: 'draw_border',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The outermost ring of cells takes the colour.',
+    example: {
+      input: [[0, 0, 0], [0, 1, 0], [0, 0, 0], [0, 0, 0]],
+      expression: 'draw_border(grid, #8)',
+      output: [[8, 8, 8], [8, 1, 8], [8, 0, 8], [8, 8, 8]],
+    },
+    run: drawBorder,
+  }),
+  primitive({
+    name: 'fill_empty_lines',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every row and every column made only of background cells takes the colour.',
+    example: {
+      input: [[1, 0, 1], [0, 0, 0], [1, 0, 0]],
+      expression: 'fill_empty_lines(grid, #2)',
+      output: [[1, 2, 1], [2, 2, 2], [1, 2, 0]],
+    },
+    run: fillEmptyLines,
+  }),
+  primitive({
+    name: 'remove_lonely_cells',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Non-background cells with fewer than two edge neighbours of their own colour become background: specks and loose ends vanish, blocks stay.',
+    example: {
+      input: [[4, 4, 0, 0], [4, 4, 0, 4], [0, 0, 0, 0], [0, 4, 0, 0]],
+      expression: 'remove_lonely_cells(grid)',
+      output: [[4, 4, 0, 0], [4, 4, 0, 0], [0, 0, 0, 0], [0, 0, 0, 0]],
+    },
+    run: removeLonelyCells,
   }),
   primitive({
     name: 'hollow',
@@ -289,5 +437,25 @@ export const fillingPrimitives = [
     doc: 'Every non-background cell paints the background cells to its right, up to the next non-background cell or the edge.',
     example: { input: [[3, 0, 0], [0, 4, 0]], expression: 'shoot_rays_right(grid)', output: [[3, 3, 3], [0, 4, 4]] },
     run: (g) => shootRays(g, false, true),
+  }),
+  primitive({
+    name: 'shoot_rays_down_right',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Every non-background cell paints the background cells diagonally down and to the right, up to the next non-background cell or the edge.',
+    example: { input: [[3, 0, 0], [0, 0, 0], [0, 4, 0]], expression: 'shoot_rays_down_right(grid)', output: [[3, 0, 0], [0, 3, 0], [0, 4, 3]] },
+    run: (g) => shootDiagonalRaysDown(g, true),
+  }),
+  primitive({
+    name: 'shoot_rays_down_left',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Every non-background cell paints the background cells diagonally down and to the left, up to the next non-background cell or the edge.',
+    example: { input: [[0, 0, 3], [0, 0, 0], [0, 0, 0]], expression: 'shoot_rays_down_left(grid)', output: [[0, 0, 3], [0, 3, 0], [3, 0, 0]] },
+    run: (g) => shootDiagonalRaysDown(g, false),
   }),
 ];

@@ -38,6 +38,10 @@ const ONLY_PAINT_BACKGROUND: readonly [string, boolean][] = [
   ['shoot_rays_up', false],
   ['shoot_rays_left', false],
   ['shoot_rays_right', false],
+  ['connect_same_colour_with', true],
+  ['fill_empty_lines', true],
+  ['shoot_rays_down_right', false],
+  ['shoot_rays_down_left', false],
 ];
 
 describe('filling laws', () => {
@@ -153,6 +157,152 @@ describe('filling laws', () => {
         }
       }),
     );
+  });
+});
+
+describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal rays', () => {
+  const colour = fc.integer({ min: 0, max: 9 });
+  const changed = (a: Grid, b: Grid) => a.cells.reduce<number[]>((list, v, i) => (v === b.cells[i] ? list : [...list, i]), []);
+
+  it('connect_same_colour_with paints exactly the gaps connect_same_colour fills, in the given colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        if (c === backgroundColour(g)) return;
+        const plain = grid('connect_same_colour', g);
+        const painted = grid('connect_same_colour_with', g, c);
+        expect(changed(g, painted)).toEqual(changed(g, plain));
+        for (const i of changed(g, painted)) expect(painted.cells[i]).toBe(c);
+      }),
+    );
+  });
+
+  it('surround_colour changes only cells that surround changes, and exactly those next to the first colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, colour, (g, source, c) => {
+        const background = backgroundColour(g);
+        if (c === background || source === background) return;
+        const out = grid('surround_colour', g, source, c);
+        const all = grid('surround', g, c);
+        for (let r = 0; r < g.height; r++) {
+          for (let col = 0; col < g.width; col++) {
+            let near = false;
+            for (let dr = -1; dr <= 1; dr++) {
+              for (let dc = -1; dc <= 1; dc++) {
+                const nr = r + dr;
+                const nc = col + dc;
+                if (nr >= 0 && nc >= 0 && nr < g.height && nc < g.width && g.get(nr, nc) === source) near = true;
+              }
+            }
+            const expected = g.get(r, col) === background && near ? c : g.get(r, col);
+            expect(out.get(r, col)).toBe(expected);
+            if (out.get(r, col) !== g.get(r, col)) expect(all.get(r, col)).toBe(c);
+          }
+        }
+      }),
+    );
+  });
+
+  it('draw_border colours the ring and keeps the inside', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        const out = grid('draw_border', g, c);
+        for (let r = 0; r < g.height; r++) {
+          for (let col = 0; col < g.width; col++) {
+            const ring = r === 0 || col === 0 || r === g.height - 1 || col === g.width - 1;
+            expect(out.get(r, col)).toBe(ring ? c : g.get(r, col));
+          }
+        }
+      }),
+    );
+  });
+
+  it('fill_empty_lines fills exactly the rows and columns that are all background', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), colour, (g, c) => {
+        const background = backgroundColour(g);
+        const out = grid('fill_empty_lines', g, c);
+        const emptyRow = (r: number) => g.toRows()[r]!.every((v) => v === background);
+        const emptyColumn = (col: number) => g.toRows().every((row) => row[col] === background);
+        for (let r = 0; r < g.height; r++) {
+          for (let col = 0; col < g.width; col++) expect(out.get(r, col)).toBe(emptyRow(r) || emptyColumn(col) ? c : g.get(r, col));
+        }
+      }),
+    );
+  });
+
+  it('remove_lonely_cells keeps a cell exactly when two or more edge neighbours share its colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const background = backgroundColour(g);
+        const out = grid('remove_lonely_cells', g);
+        for (let r = 0; r < g.height; r++) {
+          for (let col = 0; col < g.width; col++) {
+            const v = g.get(r, col);
+            const neighbours = [
+              [r - 1, col],
+              [r + 1, col],
+              [r, col - 1],
+              [r, col + 1],
+            ].filter(([nr, nc]) => nr! >= 0 && nc! >= 0 && nr! < g.height && nc! < g.width && g.get(nr!, nc!) === v).length;
+            expect(out.get(r, col)).toBe(v === background || neighbours >= 2 ? v : background);
+          }
+        }
+      }),
+    );
+  });
+
+  it('shoot_rays_down_left is shoot_rays_down_right seen in a left-right mirror', () => {
+    const mirror = (g: Grid) => G(g.toRows().map((row) => [...row].reverse()));
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        expect(grid('shoot_rays_down_left', g).equals(mirror(grid('shoot_rays_down_right', mirror(g))))).toBe(true);
+      }),
+    );
+  });
+
+  it('hand-worked: connecting pairs, a ring round one colour, a border, empty lines, lonely cells, diagonal rays', () => {
+    // Pairs of 1s in row 0 and column 0 get joined by 8; the 1 and 2 in row 3 do not.
+    expect(
+      rows(
+        apply(
+          'connect_same_colour_with',
+          G([
+            [1, 0, 0, 1],
+            [0, 0, 0, 0],
+            [1, 0, 0, 0],
+            [0, 1, 0, 2],
+          ]),
+          8,
+        ),
+      ),
+    ).toEqual([
+      [1, 8, 8, 1],
+      [8, 0, 0, 0],
+      [1, 0, 0, 0],
+      [0, 1, 0, 2],
+    ]);
+    // Only the 2 gets a ring of 1s; the 6 does not.
+    expect(rows(apply('surround_colour', G([[2, 0, 0, 0], [0, 0, 0, 6], [0, 0, 0, 0]]), 2, 1))).toEqual([
+      [2, 1, 0, 0],
+      [1, 1, 0, 6],
+      [0, 0, 0, 0],
+    ]);
+    expect(rows(apply('draw_border', G([[5]]), 3))).toEqual([[3]]);
+    expect(rows(apply('draw_border', G([[0, 0], [0, 0]]), 8))).toEqual([[8, 8], [8, 8]]);
+    // Black present, so black is the background: row 1 and column 2 are empty.
+    expect(rows(apply('fill_empty_lines', G([[3, 3, 0, 3], [0, 0, 0, 0], [3, 0, 0, 3]]), 2))).toEqual([
+      [3, 3, 2, 3],
+      [2, 2, 2, 2],
+      [3, 0, 2, 3],
+    ]);
+    // The L of three 5s: its corner has two 5 neighbours and stays; both ends have one and go.
+    expect(rows(apply('remove_lonely_cells', G([[5, 5], [5, 0]])))).toEqual([[5, 0], [0, 0]]);
+    // Rays down-right in a 3×3 grid: the 6 runs along the main diagonal, the 1 stops at the edge.
+    expect(rows(apply('shoot_rays_down_right', G([[6, 1, 0], [0, 0, 0], [0, 0, 0]])))).toEqual([
+      [6, 1, 0],
+      [0, 6, 1],
+      [0, 0, 6],
+    ]);
   });
 });
 
