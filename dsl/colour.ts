@@ -93,6 +93,32 @@ function recolourBySize(g: Grid, large: number, small: number): Grid | Failure {
   return new Grid(g.height, g.width, cells);
 }
 
+/**
+ * One-colour objects (edge neighbours) recoloured by the rank of their size: every object of
+ * the largest size gets colour 1, of the next size down colour 2, and so on; fails with no
+ * objects or more than nine different sizes.
+ */
+function recolourBySizeRank(g: Grid): Grid | Failure {
+  const objects = components(g, { diagonal: false, multicolour: false, background: backgroundColour(g) });
+  if (objects.length === 0) return FAILURE;
+  const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
+  if (sizes.length > 9) return FAILURE;
+  const cells = g.cells.slice();
+  for (const o of objects) paintCellsOf(cells, g.width, o, sizes.indexOf(o.size) + 1);
+  return new Grid(g.height, g.width, cells);
+}
+
+/** A one-column grid of the non-background colours, most cells first (lower colour first on ties). */
+function coloursByFrequency(g: Grid): Grid | Failure {
+  const counts = colourCounts(g);
+  const background = backgroundColour(g);
+  const colours: number[] = [];
+  for (let c = 0; c < 10; c++) if (c !== background && counts[c]! > 0) colours.push(c);
+  if (colours.length === 0) return FAILURE;
+  colours.sort((a, b) => counts[b]! - counts[a]! || a - b);
+  return new Grid(colours.length, 1, Uint8Array.from(colours));
+}
+
 export const colourPrimitives = [
   primitive({
     name: 'recolour',
@@ -221,6 +247,30 @@ export const colourPrimitives = [
       output: [[2, 2, 0, 3], [0, 0, 0, 0], [1, 0, 1, 1]],
     },
     run: recolourBySize,
+  }),
+  primitive({
+    name: 'recolour_objects_by_size_rank',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'One-colour objects (edge neighbours) take the rank of their size as colour: the largest size 1, the next size down 2, and so on; equal sizes share a colour.',
+    example: {
+      input: [[5, 0, 5, 0], [5, 0, 5, 0], [5, 0, 0, 5]],
+      expression: 'recolour_objects_by_size_rank(grid)',
+      output: [[1, 0, 2, 0], [1, 0, 2, 0], [1, 0, 0, 3]],
+    },
+    run: recolourBySizeRank,
+  }),
+  primitive({
+    name: 'colours_by_frequency',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'A one-column grid of the non-background colours, the colour with the most cells first (the lower colour first on ties).',
+    example: { input: [[0, 4, 4], [2, 4, 7], [7, 0, 0]], expression: 'colours_by_frequency(grid)', output: [[4], [7], [2]] },
+    run: coloursByFrequency,
   }),
   primitive({
     name: 'replace_background',

@@ -30,6 +30,21 @@ export function objectPicture(o: GridObject): Grid {
   return new Grid(o.height, o.width, cells);
 }
 
+/**
+ * Only the middle column (or row) of an odd width (height) keeps its cells; every other cell
+ * becomes background. The grid keeps its size.
+ */
+function keepMiddleLine(g: Grid, column: boolean): Grid | Failure {
+  const { height, width, cells } = g;
+  const length = column ? width : height;
+  if (length % 2 === 0) return FAILURE;
+  const middle = (length - 1) / 2;
+  const out = new Uint8Array(cells.length).fill(backgroundColour(g));
+  if (column) for (let r = 0; r < height; r++) out[r * width + middle] = cells[r * width + middle]!;
+  else out.set(cells.subarray(middle * width, (middle + 1) * width), middle * width);
+  return new Grid(height, width, out);
+}
+
 export const croppingPrimitives = [
   primitive({
     name: 'crop_to_content',
@@ -146,5 +161,25 @@ export const croppingPrimitives = [
       const w = g.width >> 1;
       return w < 1 ? FAILURE : cropGrid(g, 0, g.width - w, g.height, w);
     },
+  }),
+  primitive({
+    name: 'keep_middle_column',
+    category: 'cropping',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Keeps the middle column of an odd-width grid where it is and turns every other cell to background; fails on an even width.',
+    example: { input: [[6, 4, 0], [0, 3, 9], [1, 0, 0]], expression: 'keep_middle_column(grid)', output: [[0, 4, 0], [0, 3, 0], [0, 0, 0]] },
+    run: (g) => keepMiddleLine(g, true),
+  }),
+  primitive({
+    name: 'keep_middle_row',
+    category: 'cropping',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Keeps the middle row of an odd-height grid where it is and turns every other cell to background; fails on an even height.',
+    example: { input: [[6, 4, 0], [0, 3, 9], [1, 0, 0]], expression: 'keep_middle_row(grid)', output: [[0, 0, 0], [0, 3, 9], [0, 0, 0]] },
+    run: (g) => keepMiddleLine(g, false),
   }),
 ];

@@ -221,3 +221,74 @@ describe('colour, hand-worked cases', () => {
     expect(callPrimitive('colour_of_cell', g, new Point(0, -1))).toBe(FAILURE);
   });
 });
+
+describe('recolour_objects_by_size_rank and colours_by_frequency', () => {
+  it('recolour_objects_by_size_rank: every object takes the rank of its size among the distinct sizes', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const objects = callPrimitive('objects_by_colour', g) as GridObject[];
+        const result = callPrimitive('recolour_objects_by_size_rank', g);
+        const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
+        if (objects.length === 0 || sizes.length > 9) {
+          expect(result).toBe(FAILURE);
+          return;
+        }
+        const out = result as Grid;
+        const background = backgroundOf(g);
+        for (const o of objects) {
+          for (let r = 0; r < o.height; r++) {
+            for (let c = 0; c < o.width; c++) if (o.shape.get(r, c) !== EMPTY) expect(out.get(o.top + r, o.left + c)).toBe(sizes.indexOf(o.size) + 1);
+          }
+        }
+        for (let i = 0; i < g.cells.length; i++) if (g.cells[i] === background) expect(out.cells[i]).toBe(background);
+      }),
+    );
+  });
+
+  it('recolour_objects_by_size_rank, worked by hand: equal sizes share a colour', () => {
+    const g = G([
+      [5, 5, 0, 5, 0],
+      [5, 5, 0, 5, 0],
+      [0, 0, 0, 0, 0],
+      [5, 0, 7, 7, 7],
+      [0, 0, 0, 0, 7],
+    ]);
+    // Sizes: the 2x2 block 4, the 7 hook 4, the 5 bar 2, the single 5 1 -> ranks 1, 1, 2, 3.
+    expect(rows(callPrimitive('recolour_objects_by_size_rank', g))).toEqual([
+      [1, 1, 0, 2, 0],
+      [1, 1, 0, 2, 0],
+      [0, 0, 0, 0, 0],
+      [3, 0, 1, 1, 1],
+      [0, 0, 0, 0, 1],
+    ]);
+    expect(callPrimitive('recolour_objects_by_size_rank', G([[0, 0]]))).toBe(FAILURE);
+  });
+
+  it('colours_by_frequency lists each non-background colour once, counts never rising down the column', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const counts = countsOf(g);
+        const background = backgroundOf(g);
+        const present = counts.map((n, c) => (n > 0 && c !== background ? c : -1)).filter((c) => c >= 0);
+        const result = callPrimitive('colours_by_frequency', g);
+        if (present.length === 0) {
+          expect(result).toBe(FAILURE);
+          return;
+        }
+        const column = (result as Grid).toRows().map((row) => row[0]!);
+        expect((result as Grid).width).toBe(1);
+        expect([...column].sort((a, b) => a - b)).toEqual(present);
+        for (let i = 1; i < column.length; i++) {
+          const [a, b] = [column[i - 1]!, column[i]!];
+          expect(counts[a]! > counts[b]! || (counts[a] === counts[b] && a < b)).toBe(true);
+        }
+      }),
+    );
+  });
+
+  it('colours_by_frequency, worked by hand', () => {
+    // Black is the background; 3 has three cells, 1 and 6 two each (1 first), 9 one.
+    expect(rows(callPrimitive('colours_by_frequency', G([[3, 6, 1, 0], [3, 6, 1, 9], [3, 0, 0, 0]])))).toEqual([[3], [1], [6], [9]]);
+    expect(callPrimitive('colours_by_frequency', G([[4, 4]]))).toBe(FAILURE);
+  });
+});

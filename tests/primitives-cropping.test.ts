@@ -200,3 +200,44 @@ describe('cropping, hand-worked cases', () => {
     expect(callPrimitive('left_half', G([[1], [2]]))).toBe(FAILURE);
   });
 });
+
+describe('keep_middle_column and keep_middle_row', () => {
+  const transpose = (g: Grid) => G(g.toRows()[0]!.map((_, c) => g.toRows().map((row) => row[c]!)));
+
+  it('keep the middle line in place, background elsewhere; the row one is the column one through the transpose', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const kept = callPrimitive('keep_middle_column', g);
+        if (g.width % 2 === 0) {
+          expect(kept).toBe(FAILURE);
+          return;
+        }
+        const background = backgroundOf(g);
+        const middle = (g.width - 1) / 2;
+        const out = kept as Grid;
+        for (let r = 0; r < g.height; r++) for (let c = 0; c < g.width; c++) expect(out.get(r, c)).toBe(c === middle ? g.get(r, c) : background);
+        expect((callPrimitive('keep_middle_row', transpose(g)) as Grid).equals(transpose(out))).toBe(true);
+      }),
+    );
+  });
+
+  it('hand-worked: a 3×5 grid keeps column 2 or row 1; even sizes fail', () => {
+    const g = G([
+      [3, 0, 4, 0, 0],
+      [0, 8, 5, 6, 0],
+      [3, 0, 0, 0, 9],
+    ]);
+    expect(rows(callPrimitive('keep_middle_column', g))).toEqual([
+      [0, 0, 4, 0, 0],
+      [0, 0, 5, 0, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+    expect(rows(callPrimitive('keep_middle_row', g))).toEqual([
+      [0, 0, 0, 0, 0],
+      [0, 8, 5, 6, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+    expect(callPrimitive('keep_middle_column', G([[1, 2]]))).toBe(FAILURE);
+    expect(callPrimitive('keep_middle_row', G([[1], [2]]))).toBe(FAILURE);
+  });
+});
