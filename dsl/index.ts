@@ -7,6 +7,7 @@ import { croppingPrimitives } from './cropping.ts';
 import { fillingPrimitives } from './filling.ts';
 import { geometryPrimitives } from './geometry.ts';
 import { objectPrimitives } from './objects.ts';
+import { objectRulePrimitives } from './object-rules.ts';
 import { selectionPrimitives } from './selection.ts';
 import { symmetryPrimitives } from './symmetry.ts';
 
@@ -18,6 +19,7 @@ export const PRIMITIVES: readonly Primitive[] = [
   ...symmetryPrimitives,
   ...geometryPrimitives,
   ...compositionPrimitives,
+  ...objectRulePrimitives,
   ...fillingPrimitives,
   ...countingPrimitives,
 ];

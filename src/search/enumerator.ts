@@ -197,6 +197,7 @@ export function enumerate(
       for (const production of productions) {
         const remaining = cost - production.bits;
         if (remaining < 0) continue;
+        args.length = 0;
         if (production.argumentTypes.length === 0) {
           if (remaining === 0) evaluate(production, cost);
           continue;
@@ -204,7 +205,6 @@ export function enumerate(
         let minimum = 0;
         for (const t of production.argumentTypes) minimum += minimumCost.get(t) ?? Infinity;
         if (minimum > remaining) continue;
-        args.length = 0;
         fill(production, 0, remaining, cost);
       }
       stats.costReached = cost;
