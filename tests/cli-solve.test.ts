@@ -90,3 +90,17 @@ describe('pithy eval', () => {
     expect(existsSync(results)).toBe(true);
   });
 });
+
+describe('pithy --size-cap', () => {
+  it('rejects grids over a lowered cap, naming the file, the place and the cap', () => {
+    const run = pithy('--size-cap', '2', 'solve', join(demo, 'lagoon-fill.json'));
+    expect(run.status).toBe(1);
+    expect(run.stderr + run.stdout).toMatch(/lagoon-fill\.json.*\$\.train\[0\]\.input.*size cap of 2/);
+  });
+
+  it('refuses a cap outside 1 to 1000', () => {
+    const run = pithy('--size-cap', '5000', 'primitives');
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain('from 1 to 1000');
+  });
+});

@@ -2,6 +2,9 @@
 import { parentPort } from 'node:worker_threads';
 import type { SolveOptions } from '../search/solve.ts';
 import { errorReport, solveFile } from './solve-file.ts';
+import { applyWorkerSettings } from './solve-worker-settings.ts';
+
+applyWorkerSettings();
 
 export interface WorkerRequest {
   readonly id: number;

@@ -6,6 +6,9 @@ import { realpathSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
+import { setSizeCap } from '../grid/grid.ts';
+import { SIZE_CAP_VARIABLE } from '../batch/solve-worker-settings.ts';
+import { positiveNumber } from './solve-options.ts';
 import { registerCheckCommand } from './check-command.ts';
 import { registerEvalCommand } from './eval-command.ts';
 import { registerSolveCommand } from './solve-command.ts';
@@ -18,7 +21,19 @@ export function buildProgram(): Command {
   program
     .name('pithy')
     .description('finds the shortest program in a typed grid language that maps every demonstration input of a grid puzzle to its output')
-    .showHelpAfterError();
+    .showHelpAfterError()
+    .option('--size-cap <n>', 'largest grid height and width accepted and built (default 30)', positiveNumber('--size-cap', true))
+    .hook('preAction', (command) => {
+      const cap = command.opts<{ sizeCap?: number }>().sizeCap;
+      if (cap === undefined) return;
+      try {
+        setSizeCap(cap);
+      } catch (error) {
+        program.error(`error: option '--size-cap': ${(error as Error).message}`, { exitCode: 2 });
+      }
+      // Worker threads read it from the environment they inherit.
+      process.env[SIZE_CAP_VARIABLE] = String(cap);
+    });
   registerRunCommand(program);
   registerCheckCommand(program);
   registerShowCommand(program);
