@@ -1,6 +1,6 @@
 /** Recolouring: fixed changes, colour maps, swaps, keeping or removing a colour, colour ranks. */
 import { backgroundColour, colourCounts, components } from '../src/grid/components.ts';
-import { EMPTY, Grid } from '../src/grid/grid.ts';
+import { EMPTY, Grid, shapeAllowed } from '../src/grid/grid.ts';
 import { GridObject } from '../src/language/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
@@ -117,6 +117,21 @@ function coloursByFrequency(g: Grid): Grid | Failure {
   if (colours.length === 0) return FAILURE;
   colours.sort((a, b) => counts[b]! - counts[a]! || a - b);
   return new Grid(colours.length, 1, Uint8Array.from(colours));
+}
+
+/** Columns of the colours other than black, most frequent first, each as tall as the colour's count. */
+function colourHistogram(g: Grid): Grid | Failure {
+  const counts = colourCounts(g);
+  const colours: number[] = [];
+  for (let c = 1; c < 10; c++) if (counts[c]! > 0) colours.push(c);
+  if (colours.length === 0) return FAILURE;
+  colours.sort((a, b) => counts[b]! - counts[a]! || a - b);
+  const height = counts[colours[0]!]!;
+  const width = colours.length;
+  if (!shapeAllowed(height, width)) return FAILURE;
+  const out = new Uint8Array(height * width);
+  for (let j = 0; j < width; j++) for (let r = 0; r < counts[colours[j]!]!; r++) out[r * width + j] = colours[j]!;
+  return new Grid(height, width, out);
 }
 
 export const colourPrimitives = [
@@ -308,5 +323,15 @@ export const colourPrimitives = [
     doc: 'The colour of the cell at (row, column); fails outside the grid.',
     example: { input: [[1, 2], [3, 4]], expression: 'colour_of_cell(grid, (1, 0))', output: 3 },
     run: (g, p) => (p.row >= 0 && p.column >= 0 && p.row < g.height && p.column < g.width ? g.cells[p.row * g.width + p.column]! : FAILURE),
+  }),
+  primitive({
+    name: 'colour_histogram',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'A bar chart of the colours other than black: one column per colour, the most frequent first (lower colour on ties), each filled from the top with as many cells as the colour has, black below.',
+    example: { input: [[2, 2, 1], [2, 3, 1]], expression: 'colour_histogram(grid)', output: [[2, 1, 3], [2, 1, 0], [2, 0, 0]] },
+    run: colourHistogram,
   }),
 ];

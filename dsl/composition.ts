@@ -288,4 +288,18 @@ export const compositionPrimitives = [
     },
     run: (o) => new GridObject(o.top, o.left, flipUpDown(o.shape)),
   }),
+  primitive({
+    name: 'overlay_all_first_on_top',
+    category: 'composition',
+    parameters: ['Grids'],
+    result: 'Grid',
+    bits: 6,
+    doc: "Stacks same-sized grids with the first on top: each earlier grid's non-background cells cover the later ones.",
+    example: {
+      input: [[1, 0, 5, 2, 2, 5, 0, 3]],
+      expression: 'overlay_all_first_on_top(split_across(grid, 3))',
+      output: [[1, 2]],
+    },
+    run: (grids) => overlayAll([...grids].reverse()),
+  }),
 ];

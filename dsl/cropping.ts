@@ -182,4 +182,22 @@ export const croppingPrimitives = [
     example: { input: [[6, 4, 0], [0, 3, 9], [1, 0, 0]], expression: 'keep_middle_row(grid)', output: [[0, 0, 0], [0, 3, 9], [0, 0, 0]] },
     run: (g) => keepMiddleLine(g, false),
   }),
+  primitive({
+    name: 'crop_to_colour_in',
+    category: 'cropping',
+    parameters: ['Grid', 'Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: "The first grid's cells under the smallest rectangle holding every cell of the colour in the second grid (same sizes); fails when the colour is absent.",
+    example: {
+      input: [[1, 0, 3], [4, 0, 6]],
+      expression: 'crop_to_colour_in(recolour(grid, #0, #5), grid, #0)',
+      output: [[5], [5]],
+    },
+    run: (g, marks, colour) => {
+      if (g.height !== marks.height || g.width !== marks.width) return FAILURE;
+      const b = cellBounds(marks, colour, true);
+      return b ? cropGrid(g, b.top, b.left, b.bottom - b.top + 1, b.right - b.left + 1) : FAILURE;
+    },
+  }),
 ];

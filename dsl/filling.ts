@@ -5,6 +5,7 @@
 import { backgroundColour, components } from '../src/grid/components.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { enclosedCells } from '../src/grid/holes.ts';
+import { completeRepeatingPattern } from '../src/grid/repeating-pattern.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
@@ -224,6 +225,109 @@ export function removeLonelyCells(g: Grid): Grid {
       if (c > 0 && cells[i - 1] === v) same++;
       if (c < width - 1 && cells[i + 1] === v) same++;
       if (same < 2) out[i] = background;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/**
+ * Squares of k×k background cells take the colour; they are found by their top-left corner in
+ * reading order, and a square overlapping one already taken is skipped.
+ */
+export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | Failure {
+  const { height, width, cells } = g;
+  if (!Number.isInteger(k) || k < 1 || k > height || k > width) return FAILURE;
+  const background = backgroundColour(g);
+  // filled[(r + 1) * (width + 1) + c + 1]: non-background cells above and left of (r, c), inclusive.
+  const stride = width + 1;
+  const filled = new Uint16Array((height + 1) * stride);
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const own = cells[r * width + c] !== background ? 1 : 0;
+      filled[(r + 1) * stride + c + 1] = own + filled[r * stride + c + 1]! + filled[(r + 1) * stride + c]! - filled[r * stride + c]!;
+    }
+  }
+  const taken = new Uint8Array(height * width);
+  let out: Uint8Array | undefined;
+  for (let r = 0; r + k <= height; r++) {
+    for (let c = 0; c + k <= width; c++) {
+      const inside = filled[(r + k) * stride + c + k]! - filled[r * stride + c + k]! - filled[(r + k) * stride + c]! + filled[r * stride + c]!;
+      if (inside !== 0) continue;
+      let free = true;
+      for (let dr = 0; dr < k && free; dr++) for (let dc = 0; dc < k; dc++) if (taken[(r + dr) * width + c + dc]) (free = false), (dc = k);
+      if (!free) continue;
+      out ??= cells.slice();
+      for (let dr = 0; dr < k; dr++) {
+        const base = (r + dr) * width + c;
+        taken.fill(1, base, base + k);
+        out.fill(colour, base, base + k);
+      }
+    }
+  }
+  return out ? new Grid(height, width, out) : g;
+}
+
+/** Every non-background cell paints the background cells along its four diagonals, up to the next non-background cell or the edge; the first ray to reach a cell (reading order) wins. */
+export function shootDiagonalRays(g: Grid): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const v = cells[r * width + c]!;
+      if (v === background) continue;
+      for (let d = 0; d < 4; d++) {
+        const dr = d < 2 ? -1 : 1;
+        const dc = d % 2 === 0 ? -1 : 1;
+        for (let nr = r + dr, nc = c + dc; nr >= 0 && nr < height && nc >= 0 && nc < width; nr += dr, nc += dc) {
+          const j = nr * width + nc;
+          if (cells[j] !== background) break;
+          if (out[j] === background) out[j] = v;
+        }
+      }
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/** Background cells that touch a non-background cell by a corner (a diagonal neighbour) take the colour. */
+export function surroundDiagonally(g: Grid, colour: number): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const out = cells.slice();
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const i = r * width + c;
+      if (cells[i] !== background) continue;
+      const filled = (nr: number, nc: number) => nr >= 0 && nr < height && nc >= 0 && nc < width && cells[nr * width + nc] !== background;
+      if (filled(r - 1, c - 1) || filled(r - 1, c + 1) || filled(r + 1, c - 1) || filled(r + 1, c + 1)) out[i] = colour;
+    }
+  }
+  return new Grid(height, width, out);
+}
+
+/**
+ * Every non-background cell not of the target colour that looks along its row or column, over
+ * background cells only, straight at a cell of the target colour paints the cells between in its
+ * own colour.
+ */
+export function extendTowardColour(g: Grid, target: number): Grid | Failure {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  if (target === background) return FAILURE;
+  const out = cells.slice();
+  const steps: [number, number][] = [[-1, 0], [1, 0], [0, -1], [0, 1]];
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const v = cells[r * width + c]!;
+      if (v === background || v === target) continue;
+      for (const [dr, dc] of steps) {
+        let nr = r + dr;
+        let nc = c + dc;
+        while (nr >= 0 && nr < height && nc >= 0 && nc < width && cells[nr * width + nc] === background) (nr += dr), (nc += dc);
+        if (nr < 0 || nr >= height || nc < 0 || nc >= width || cells[nr * width + nc] !== target) continue;
+        for (let pr = r + dr, pc = c + dc; pr !== nr || pc !== nc; pr += dr, pc += dc) out[pr * width + pc] = v;
+      }
     }
   }
   return new Grid(height, width, out);
@@ -457,5 +561,75 @@ export const fillingPrimitives = [
     doc: 'Every non-background cell paints the background cells diagonally down and to the left, up to the next non-background cell or the edge.',
     example: { input: [[0, 0, 3], [0, 0, 0], [0, 0, 0]], expression: 'shoot_rays_down_left(grid)', output: [[0, 0, 3], [0, 3, 0], [3, 0, 0]] },
     run: (g) => shootDiagonalRaysDown(g, false),
+  }),
+  primitive({
+    name: 'complete_repeating_pattern',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Cells of the colour are holes in a repeating pattern: fills them from the smallest tile (repeated at least twice, rows may shift diagonally) that agrees with every other cell; fails when none does.',
+    example: {
+      input: [[1, 2, 1, 2], [3, 4, 3, 4], [1, 0, 1, 2], [3, 4, 0, 4]],
+      expression: 'complete_repeating_pattern(grid, #0)',
+      output: [[1, 2, 1, 2], [3, 4, 3, 4], [1, 2, 1, 2], [3, 4, 3, 4]],
+    },
+    run: (g, hole) => completeRepeatingPattern(g, hole) ?? FAILURE,
+  }),
+  primitive({
+    name: 'fill_empty_squares',
+    category: 'filling',
+    parameters: ['Grid', 'Int', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Squares of k by k background cells take the colour, found by top-left corner in reading order, skipping any that overlaps one already taken.',
+    example: {
+      input: [[0, 0, 0, 5], [0, 0, 0, 0], [5, 0, 0, 0]],
+      expression: 'fill_empty_squares(grid, 2, #2)',
+      output: [[2, 2, 0, 5], [2, 2, 2, 2], [5, 0, 2, 2]],
+    },
+    run: fillEmptySquares,
+  }),
+  primitive({
+    name: 'shoot_diagonal_rays',
+    category: 'filling',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every non-background cell paints the background cells along its four diagonals, up to the next non-background cell or the edge.',
+    example: {
+      input: [[0, 0, 0, 0], [0, 3, 0, 0], [0, 0, 0, 0], [0, 0, 0, 0]],
+      expression: 'shoot_diagonal_rays(grid)',
+      output: [[3, 0, 3, 0], [0, 3, 0, 0], [3, 0, 3, 0], [0, 0, 0, 3]],
+    },
+    run: shootDiagonalRays,
+  }),
+  primitive({
+    name: 'surround_diagonally',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Background cells touching a non-background cell by a corner take the colour.',
+    example: {
+      input: [[0, 0, 0], [0, 4, 0], [0, 0, 0]],
+      expression: 'surround_diagonally(grid, #8)',
+      output: [[8, 0, 8], [0, 4, 0], [8, 0, 8]],
+    },
+    run: surroundDiagonally,
+  }),
+  primitive({
+    name: 'extend_toward_colour',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Each cell that sees a cell of the colour straight along its row or column, across background only, draws a line of its own colour up to it.',
+    example: {
+      input: [[0, 0, 0, 0], [3, 0, 0, 2], [0, 0, 0, 0], [0, 2, 0, 0]],
+      expression: 'extend_toward_colour(grid, #3)',
+      output: [[0, 0, 0, 0], [3, 2, 2, 2], [0, 0, 0, 0], [0, 2, 0, 0]],
+    },
+    run: extendTowardColour,
   }),
 ];

@@ -4,7 +4,7 @@
  */
 import { backgroundColour } from '../src/grid/components.ts';
 import { Grid, getSizeCap, shapeAllowed } from '../src/grid/grid.ts';
-import { splitAtSeparatorLines } from '../src/grid/separator-lines.ts';
+import { findSeparatorLines, gaps, splitAtSeparatorLines } from '../src/grid/separator-lines.ts';
 import { settleObjects } from '../src/grid/settle-objects.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import type { Point } from '../src/language/point.ts';
@@ -286,6 +286,28 @@ export function fall(g: Grid, alongColumns: boolean, towardsEnd: boolean): Grid 
     }
   }
   return new Grid(height, width, out);
+}
+
+/** The majority colour of each pane between separator lines, as a grid of panes. */
+function paneColours(g: Grid): Grid | Failure {
+  const lines = findSeparatorLines(g);
+  if (!lines) return FAILURE;
+  const rowRuns = gaps(lines.rows);
+  const columnRuns = gaps(lines.columns);
+  const out = new Uint8Array(rowRuns.length * columnRuns.length);
+  const counts = new Uint32Array(10);
+  const { width, cells } = g;
+  let k = 0;
+  for (const [top, bottom] of rowRuns) {
+    for (const [left, right] of columnRuns) {
+      counts.fill(0);
+      for (let r = top; r < bottom; r++) for (let c = left; c < right; c++) counts[cells[r * width + c]!]!++;
+      let best = 0;
+      for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
+      out[k++] = best;
+    }
+  }
+  return new Grid(rowRuns.length, columnRuns.length, out);
 }
 
 export const geometryPrimitives = [
@@ -588,5 +610,19 @@ export const geometryPrimitives = [
     doc: 'Whole objects slide right without changing shape until they meet the right edge or another object; rightmost first.',
     example: { input: [[3, 0, 4, 4, 0, 0]], expression: 'settle_objects_right(grid)', output: [[0, 0, 0, 3, 4, 4]] },
     run: (g) => settleObjects(g, 0, 1),
+  }),
+  primitive({
+    name: 'pane_colours',
+    category: 'geometry',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'One cell per pane between the separator lines (see split_at_lines), laid out as the panes are, holding the colour most of the pane has (the lowest on ties).',
+    example: {
+      input: [[1, 1, 5, 2], [1, 0, 5, 2], [5, 5, 5, 5], [3, 3, 5, 0]],
+      expression: 'pane_colours(grid)',
+      output: [[1, 2], [3, 0]],
+    },
+    run: paneColours,
   }),
 ];

@@ -61,6 +61,20 @@ export function sortObjects(objects: Objects, key: Key): Objects | Failure {
   return order.map((i) => objects[i]!);
 }
 
+/** The object whose shape-and-colours pattern occurs most often (the first on ties); fails unless some pattern repeats. */
+export function mostCommonObject(objects: Objects): GridObject | Failure {
+  const n = objects.length;
+  let best = -1;
+  let bestCount = 1;
+  for (let i = 0; i < n; i++) {
+    const shape = objects[i]!.shape;
+    let count = 0;
+    for (let j = 0; j < n; j++) if (shape.equals(objects[j]!.shape)) count++;
+    if (count > bestCount) (best = i), (bestCount = count);
+  }
+  return best < 0 ? FAILURE : objects[best]!;
+}
+
 /** The only object whose shape-and-colours pattern occurs once, when every other pattern repeats. */
 export function oddOneOut(objects: Objects): GridObject | Failure {
   const n = objects.length;
@@ -465,5 +479,40 @@ export const selectionPrimitives = [
       for (let i = 0; i < cells.length; i++) if (cells[i] === colour) n++;
       return n;
     },
+  }),
+  primitive({
+    name: 'first_object_where',
+    category: 'selection',
+    parameters: ['Objects', 'Object -> Bool'],
+    result: 'Object',
+    bits: 5,
+    doc: 'The first object for which the test holds; fails when none passes.',
+    example: {
+      input: [[2, 0, 3, 3], [0, 0, 3, 0]],
+      expression: 'object_picture(first_object_where(objects_by_colour(grid), is_bigger_than(_, 1)))',
+      output: [[3, 3], [3, 0]],
+    },
+    run: (objects, test) => {
+      for (const o of objects) {
+        const verdict = test(o);
+        if (verdict === FAILURE) return FAILURE;
+        if (verdict) return o;
+      }
+      return FAILURE;
+    },
+  }),
+  primitive({
+    name: 'most_common_object',
+    category: 'selection',
+    parameters: ['Objects'],
+    result: 'Object',
+    bits: 6,
+    doc: 'The object whose shape and colours occur most often (the first on ties); fails when no pattern repeats.',
+    example: {
+      input: [[5, 0, 4, 4, 0, 5], [0, 0, 0, 0, 0, 0], [4, 0, 0, 0, 0, 0]],
+      expression: 'object_picture(most_common_object(objects_by_colour(grid)))',
+      output: [[5]],
+    },
+    run: mostCommonObject,
   }),
 ];

@@ -292,3 +292,31 @@ describe('recolour_objects_by_size_rank and colours_by_frequency', () => {
     expect(callPrimitive('colours_by_frequency', G([[4, 4]]))).toBe(FAILURE);
   });
 });
+
+describe('colour_histogram', () => {
+  it('keeps the count of every colour other than black, in columns from the most frequent', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const out = callPrimitive('colour_histogram', g);
+        const counts = countsOf(g);
+        if (counts.slice(1).every((n) => n === 0)) {
+          expect(out).toBe(FAILURE);
+          return;
+        }
+        const bars = out as Grid;
+        const outCounts = countsOf(bars);
+        for (let c = 1; c < 10; c++) expect(outCounts[c]).toBe(counts[c]);
+        for (let j = 1; j < bars.width; j++) expect(counts[bars.get(0, j)]!).toBeLessThanOrEqual(counts[bars.get(0, j - 1)]!);
+      }),
+    );
+  });
+
+  it('works a small case by hand: ties go to the lower colour', () => {
+    // 5 has three cells, 2 and 9 one each; black is left out.
+    expect(rows(callPrimitive('colour_histogram', G([[5, 9, 0], [5, 5, 2]])))).toEqual([
+      [5, 2, 9],
+      [5, 0, 0],
+      [5, 0, 0],
+    ]);
+  });
+});

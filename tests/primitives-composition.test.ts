@@ -217,3 +217,23 @@ describe('composition worked examples', () => {
     });
   }
 });
+
+describe('overlay_all_first_on_top', () => {
+  it('the first grid wins wherever it is filled; a single grid is itself', () => {
+    const a = G([[1, 0, 0]]);
+    const b = G([[2, 2, 0]]);
+    const c = G([[3, 3, 3]]);
+    expect(grid('overlay_all_first_on_top', [a, b, c]).toRows()).toEqual([[1, 2, 3]]);
+    expect(grid('overlay_all_first_on_top', [c, b, a]).toRows()).toEqual([[3, 3, 3]]);
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        expect(grid('overlay_all_first_on_top', [g]).equals(g)).toBe(true);
+      }),
+    );
+  });
+
+  it('fails on no grids and on grids of different sizes', () => {
+    expect(apply('overlay_all_first_on_top', [])).toBe(FAILURE);
+    expect(apply('overlay_all_first_on_top', [G([[1]]), G([[1, 2]])])).toBe(FAILURE);
+  });
+});

@@ -241,3 +241,27 @@ describe('keep_middle_column and keep_middle_row', () => {
     expect(callPrimitive('keep_middle_row', G([[1], [2]]))).toBe(FAILURE);
   });
 });
+
+describe('crop_to_colour_in', () => {
+  it('cropping a grid at its own colour is crop_to_colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        expect(rows(callPrimitive('crop_to_colour_in', g, g, colour))).toEqual(rows(callPrimitive('crop_to_colour', g, colour)));
+      }),
+    );
+  });
+
+  it('cuts the first grid where the second has the colour, and fails on different sizes', () => {
+    const picture = G([
+      [1, 2, 3],
+      [4, 5, 6],
+    ]);
+    const marks = G([
+      [0, 0, 9],
+      [0, 0, 9],
+    ]);
+    expect(rows(callPrimitive('crop_to_colour_in', picture, marks, 9))).toEqual([[3], [6]]);
+    expect(callPrimitive('crop_to_colour_in', picture, G([[9]]), 9)).toBe(FAILURE);
+    expect(callPrimitive('crop_to_colour_in', picture, marks, 4)).toBe(FAILURE);
+  });
+});

@@ -416,3 +416,113 @@ describe('filling worked examples', () => {
     });
   }
 });
+
+describe('repeating patterns, empty squares, diagonal rays and neighbours, extending toward a colour', () => {
+  it('complete_repeating_pattern keeps every known cell and leaves no hole behind', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ minHeight: 2, minWidth: 2 }), fc.integer({ min: 0, max: 9 }), (g, hole) => {
+        const out = apply('complete_repeating_pattern', g, hole);
+        if (out === FAILURE) return;
+        expect(out).toBeInstanceOf(Grid);
+        const cells = (out as Grid).cells;
+        for (let i = 0; i < g.cells.length; i++) {
+          if (g.cells[i] !== hole) expect(cells[i]).toBe(g.cells[i]);
+          else expect(cells[i]).not.toBe(hole);
+        }
+      }),
+    );
+  });
+
+  it('complete_repeating_pattern restores a punched two-by-two wallpaper and a diagonal one (worked by hand)', () => {
+    expect(rows(apply('complete_repeating_pattern', G([[1, 2, 1, 2, 1], [3, 4, 0, 4, 3], [1, 0, 1, 2, 1]]), 0))).toEqual([
+      [1, 2, 1, 2, 1],
+      [3, 4, 3, 4, 3],
+      [1, 2, 1, 2, 1],
+    ]);
+    // Each row is the one above moved one step left: colour by (row + column) mod 3.
+    expect(rows(apply('complete_repeating_pattern', G([[5, 6, 7, 5], [6, 0, 5, 6], [0, 5, 6, 0]]), 0))).toEqual([
+      [5, 6, 7, 5],
+      [6, 7, 5, 6],
+      [7, 5, 6, 7],
+    ]);
+  });
+
+  it('complete_repeating_pattern fails without holes, and when nothing repeats', () => {
+    expect(apply('complete_repeating_pattern', G([[1, 2], [3, 4]]), 0)).toBe(FAILURE);
+    expect(apply('complete_repeating_pattern', G([[1, 2, 3], [4, 0, 5]]), 0)).toBe(FAILURE);
+  });
+
+  it('fill_empty_squares with side 1 paints every background cell', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        const background = backgroundColour(g);
+        const out = grid('fill_empty_squares', g, 1, colour);
+        for (let i = 0; i < g.cells.length; i++) expect(out.cells[i]).toBe(g.cells[i] === background ? colour : g.cells[i]);
+      }),
+    );
+  });
+
+  it('fill_empty_squares skips squares overlapping one already taken, and fails on a side beyond the grid', () => {
+    // A 2x3 empty block holds one 2x2 square (the left one); the shifted square overlaps it.
+    expect(rows(apply('fill_empty_squares', G([[0, 0, 0, 5], [0, 0, 0, 5], [5, 5, 5, 5]]), 2, 4))).toEqual([
+      [4, 4, 0, 5],
+      [4, 4, 0, 5],
+      [5, 5, 5, 5],
+    ]);
+    expect(apply('fill_empty_squares', G([[0, 0]]), 2, 4)).toBe(FAILURE);
+  });
+
+  it('shoot_diagonal_rays and surround_diagonally only paint background cells', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        const background = backgroundColour(g);
+        for (const out of [grid('shoot_diagonal_rays', g), grid('surround_diagonally', g, colour)]) {
+          for (let i = 0; i < g.cells.length; i++) if (g.cells[i] !== background) expect(out.cells[i]).toBe(g.cells[i]);
+        }
+      }),
+    );
+  });
+
+  it('surround_diagonally paints exactly the background cells with a non-background corner neighbour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
+        const background = backgroundColour(g);
+        const out = grid('surround_diagonally', g, colour);
+        const filled = (r: number, c: number) => r >= 0 && c >= 0 && r < g.height && c < g.width && g.get(r, c) !== background;
+        for (let r = 0; r < g.height; r++) {
+          for (let c = 0; c < g.width; c++) {
+            if (g.get(r, c) !== background) continue;
+            const corner = filled(r - 1, c - 1) || filled(r - 1, c + 1) || filled(r + 1, c - 1) || filled(r + 1, c + 1);
+            expect(out.get(r, c)).toBe(corner ? colour : background);
+          }
+        }
+      }),
+    );
+  });
+
+  it('shoot_diagonal_rays stops at the next non-background cell', () => {
+    expect(rows(apply('shoot_diagonal_rays', G([[7, 0, 0, 0], [0, 0, 0, 0], [0, 0, 2, 0], [0, 0, 0, 0]])))).toEqual([
+      [7, 0, 0, 0],
+      [0, 7, 0, 2],
+      [0, 0, 2, 0],
+      [0, 2, 0, 2],
+    ]);
+  });
+
+  it('extend_toward_colour stops at other cells and fails when the target is the background', () => {
+    // The 4 on the left sees the 3 along its row; the 6 below it is blocked by the 1.
+    const g = G([
+      [4, 0, 0, 3],
+      [0, 0, 0, 1],
+      [0, 0, 0, 0],
+      [0, 0, 0, 6],
+    ]);
+    expect(rows(apply('extend_toward_colour', g, 3))).toEqual([
+      [4, 4, 4, 3],
+      [0, 0, 0, 1],
+      [0, 0, 0, 0],
+      [0, 0, 0, 6],
+    ]);
+    expect(apply('extend_toward_colour', g, 0)).toBe(FAILURE);
+  });
+});

@@ -404,3 +404,32 @@ describe('geometry worked examples', () => {
     });
   }
 });
+
+describe('pane_colours', () => {
+  it('gives one cell per pane, laid out as the panes, holding the colour most of the pane has', () => {
+    // Separator colour 8; panes of 2x2 cells. The top-right pane is mostly 3 with one 0.
+    const g = G([
+      [1, 1, 8, 3, 3, 8, 0, 0],
+      [1, 1, 8, 3, 0, 8, 0, 0],
+      [8, 8, 8, 8, 8, 8, 8, 8],
+      [4, 4, 8, 0, 6, 8, 2, 2],
+      [4, 0, 8, 6, 0, 8, 2, 2],
+    ]);
+    expect(grid('pane_colours', g).toRows()).toEqual([
+      [1, 3, 0],
+      [4, 0, 2],
+    ]);
+  });
+
+  it('has as many cells as split_at_lines has panes, and fails without separator lines', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const parts = apply('split_at_lines', g);
+        const panes = apply('pane_colours', g);
+        if (parts === FAILURE) expect(panes).toBe(FAILURE);
+        else expect((panes as Grid).cells.length).toBe((parts as readonly Grid[]).length);
+      }),
+    );
+    expect(apply('pane_colours', G([[1, 2], [3, 4]]))).toBe(FAILURE);
+  });
+});

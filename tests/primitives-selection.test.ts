@@ -308,3 +308,29 @@ describe('selection, hand-worked cases', () => {
     expect(callPrimitive('object_with_most', objects, failing)).toBe(FAILURE);
   });
 });
+
+describe('first_object_where and most_common_object', () => {
+  it('first_object_where is the first object that keep_objects keeps', () => {
+    fc.assert(
+      fc.property(arbitraryObjects, fc.integer({ min: 0, max: 4 }), ({ objects }, n) => {
+        const test = (o: GridObject) => size(o) > n;
+        const found = callPrimitive('first_object_where', objects, test);
+        const kept = objects.filter(test);
+        expect(found).toBe(kept.length > 0 ? kept[0] : FAILURE);
+      }),
+    );
+  });
+
+  it('most_common_object picks the repeated pattern and fails when every pattern is single', () => {
+    // Two lone 7s and one 7-7 bar: the lone cell repeats.
+    const g = G([
+      [7, 7, 0, 7],
+      [0, 0, 0, 0],
+      [7, 0, 0, 0],
+    ]);
+    const found = callPrimitive('most_common_object', objectsOf(g)) as GridObject;
+    expect([found.top, found.left, found.size]).toEqual([0, 3, 1]);
+    expect(callPrimitive('most_common_object', objectsOf(G([[1, 0, 2, 2]])))).toBe(FAILURE);
+    expect(callPrimitive('most_common_object', [])).toBe(FAILURE);
+  });
+});

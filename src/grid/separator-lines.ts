@@ -14,7 +14,7 @@ export interface SeparatorLines {
 }
 
 /** Runs of consecutive indices whose flag is 0, as [start, end) pairs. */
-function gaps(flags: Uint8Array): [number, number][] {
+export function gaps(flags: Uint8Array): [number, number][] {
   const runs: [number, number][] = [];
   let start = -1;
   for (let i = 0; i <= flags.length; i++) {
