@@ -5,14 +5,19 @@
  */
 import { Grid } from './grid.ts';
 
+/** How many known cells the search may compare in all, over every tile it tries. */
+const CHECK_BUDGET = 60_000;
+
 /**
  * The grid with every cell of `hole` replaced from the smallest repeating tile that agrees with
  * all other cells and covers every hole; undefined when there is no hole, no known cell, or no
  * such tile smaller than the grid.
  *
  * A tile has `ph` rows and `pw` columns; the cell (r, c) belongs to the tile cell
- * (r mod ph, (c - shift * floor(r / ph)) mod pw). Tiles are tried by area, then height, then
- * shift, so the answer is deterministic.
+ * (r mod ph, (c - shift * floor(r / ph)) mod pw), where the shift is 0 unless the tile is one
+ * row high. Tiles are tried by area, then height, then
+ * shift, so the answer is deterministic. The search gives up (undefined) after a fixed number
+ * of cell comparisons.
  */
 export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undefined {
   const { height, width, cells } = grid;
@@ -26,7 +31,28 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undef
     if (cells[i] === hole) unknown[u++] = i;
     else known[k++] = i;
   }
+  // Compare known cells in a fixed scattered order: two cells of one tile cell then meet early,
+  // so a wrong tile is usually rejected after a few comparisons.
+  let seed = 12345;
+  for (let k = known.length - 1; k > 0; k--) {
+    seed = (seed * 1103515245 + 12345) & 0x7fffffff;
+    const j = seed % (k + 1);
+    const swap = known[k]!;
+    known[k] = known[j]!;
+    known[j] = swap;
+  }
+  const knownRow = new Int32Array(known.length);
+  const knownColumn = new Int32Array(known.length);
+  for (let k = 0; k < known.length; k++) {
+    knownRow[k] = (known[k]! / width) | 0;
+    knownColumn[k] = known[k]! - knownRow[k]! * width;
+  }
   const tile = new Int8Array(size);
+  // stamp[t] === trial marks tile cell t as set during the current trial (no clearing between trials).
+  const stamp = new Int32Array(size);
+  let trial = 0;
+  // A fixed budget of cell checks keeps the worst case bounded on large, nearly repeating grids.
+  let budget = CHECK_BUDGET;
   const classOf = (i: number, ph: number, pw: number, shift: number): number => {
     const r = (i / width) | 0;
     const c = i - r * width;
@@ -41,20 +67,25 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undef
       if (area % ph !== 0) continue;
       const pw = area / ph;
       if (pw > width) continue;
-      const shifts = ph < height ? pw : 1;
+      // Shifted bands are tried only one row high: diagonal stripes, each row the one above moved.
+      const shifts = ph === 1 && height > 1 ? pw : 1;
       for (let shift = 0; shift < shifts; shift++) {
-        tile.fill(-1, 0, area);
+        trial++;
         let agrees = true;
         for (let k = 0; k < known.length && agrees; k++) {
-          const i = known[k]!;
-          const t = classOf(i, ph, pw, shift);
-          const v = cells[i]!;
-          if (tile[t] === -1) tile[t] = v;
+          if (--budget < 0) return undefined;
+          const r = knownRow[k]!;
+          const band = (r / ph) | 0;
+          let column = (knownColumn[k]! - shift * band) % pw;
+          if (column < 0) column += pw;
+          const t = (r - band * ph) * pw + column;
+          const v = cells[known[k]!]!;
+          if (stamp[t] !== trial) (stamp[t] = trial), (tile[t] = v);
           else if (tile[t] !== v) agrees = false;
         }
         if (!agrees) continue;
         let covered = true;
-        for (let u = 0; u < unknown.length && covered; u++) if (tile[classOf(unknown[u]!, ph, pw, shift)] === -1) covered = false;
+        for (let u = 0; u < unknown.length && covered; u++) if (stamp[classOf(unknown[u]!, ph, pw, shift)] !== trial) covered = false;
         if (!covered) continue;
         const out = cells.slice();
         for (let u = 0; u < unknown.length; u++) out[unknown[u]!] = tile[classOf(unknown[u]!, ph, pw, shift)]!;
