@@ -4,6 +4,7 @@ import { EMPTY, Grid, shapeAllowed } from '../src/grid/grid.ts';
 import { GridObject } from '../src/language/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
+import { majorityLines, restoreStripes } from '../src/grid/stripes.ts';
 
 /** The grid with every colour c replaced by `target[c]`; the same grid when nothing changes. */
 export function mapColours(g: Grid, target: Uint8Array): Grid {
@@ -333,5 +334,35 @@ export const colourPrimitives = [
     doc: 'A bar chart of the colours other than black: one column per colour, the most frequent first (lower colour on ties), each filled from the top with as many cells as the colour has, black below.',
     example: { input: [[2, 2, 1], [2, 3, 1]], expression: 'colour_histogram(grid)', output: [[2, 1, 3], [2, 1, 0], [2, 0, 0]] },
     run: colourHistogram,
+  }),
+  primitive({
+    name: 'majority_per_row',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every row becomes its most frequent colour (the lowest on ties).',
+    example: { input: [[1, 1, 2], [3, 4, 4]], expression: 'majority_per_row(grid)', output: [[1, 1, 1], [4, 4, 4]] },
+    run: (g) => majorityLines(g, true),
+  }),
+  primitive({
+    name: 'majority_per_column',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every column becomes its most frequent colour (the lowest on ties).',
+    example: { input: [[1, 2], [1, 3], [5, 3]], expression: 'majority_per_column(grid)', output: [[1, 3], [1, 3], [1, 3]] },
+    run: (g) => majorityLines(g, false),
+  }),
+  primitive({
+    name: 'restore_stripes',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Removes specks from stripes: majority_per_row or majority_per_column, whichever keeps more cells unchanged (rows on ties).',
+    example: { input: [[1, 2, 2], [1, 2, 3], [1, 4, 2]], expression: 'restore_stripes(grid)', output: [[1, 2, 2], [1, 2, 2], [1, 2, 2]] },
+    run: restoreStripes,
   }),
 ];

@@ -10,6 +10,7 @@ import { GridObject } from '../src/language/grid-object.ts';
 import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { flipLeftRight, flipUpDown } from './symmetry.ts';
+import { stampObjectOnColour } from '../src/grid/stamp-object.ts';
 
 export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
   const out = g.cells.slice();
@@ -301,5 +302,19 @@ export const compositionPrimitives = [
       output: [[1, 2]],
     },
     run: (grids) => overlayAll([...grids].reverse()),
+  }),
+  primitive({
+    name: 'stamp_object_on_colour',
+    category: 'composition',
+    parameters: ['Grid', 'Object', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every patch of the colour (cells joined through edges or corners) is cleared and the object is drawn centred on it (rounding toward the top left).',
+    example: {
+      input: [[1, 2, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 5, 0], [0, 0, 0, 0, 0]],
+      expression: 'stamp_object_on_colour(grid, largest_object(objects_multicolour(grid)), #5)',
+      output: [[1, 2, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 1, 2, 0], [0, 0, 0, 0, 0]],
+    },
+    run: stampObjectOnColour,
   }),
 ];

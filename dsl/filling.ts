@@ -9,6 +9,10 @@ import { completeRepeatingPattern } from '../src/grid/repeating-pattern.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
+import { markNeighbours } from '../src/grid/neighbour-marks.ts';
+import { linesThroughColour } from '../src/grid/lines-through-cells.ts';
+import { connectAlong } from '../src/grid/connect-along.ts';
+import { fillGapsBySize } from '../src/grid/gaps-by-size.ts';
 
 export function fillEnclosed(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
@@ -631,5 +635,131 @@ export const fillingPrimitives = [
       output: [[0, 0, 0, 0], [3, 2, 2, 2], [0, 0, 0, 0], [0, 2, 0, 0]],
     },
     run: extendTowardColour,
+  }),
+  primitive({
+    name: 'surround_colour_edges',
+    category: 'filling',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Background cells sharing an edge with a cell of the first colour take the second colour.',
+    example: {
+      input: [[0, 0, 0], [0, 2, 0], [0, 0, 3]],
+      expression: 'surround_colour_edges(grid, #2, #7)',
+      output: [[0, 7, 0], [7, 2, 7], [0, 7, 3]],
+    },
+    run: (g, source, colour) => markNeighbours(g, source, colour, false),
+  }),
+  primitive({
+    name: 'surround_colour_corners',
+    category: 'filling',
+    parameters: ['Grid', 'Colour', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Background cells touching a cell of the first colour only by a corner (diagonal neighbours) take the second colour.',
+    example: {
+      input: [[0, 0, 0], [0, 2, 0], [0, 0, 3]],
+      expression: 'surround_colour_corners(grid, #2, #4)',
+      output: [[4, 0, 4], [0, 2, 0], [4, 0, 3]],
+    },
+    run: (g, source, colour) => markNeighbours(g, source, colour, true),
+  }),
+  primitive({
+    name: 'draw_rows_through_colour',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every row holding a cell of the colour is painted in that colour from edge to edge.',
+    example: {
+      input: [[0, 0, 0], [0, 3, 0], [2, 0, 0]],
+      expression: 'draw_rows_through_colour(grid, #3)',
+      output: [[0, 0, 0], [3, 3, 3], [2, 0, 0]],
+    },
+    run: (g, colour) => linesThroughColour(g, colour, true, false),
+  }),
+  primitive({
+    name: 'draw_columns_through_colour',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every column holding a cell of the colour is painted in that colour from edge to edge.',
+    example: {
+      input: [[0, 0, 0], [0, 3, 0], [2, 0, 0]],
+      expression: 'draw_columns_through_colour(grid, #3)',
+      output: [[0, 3, 0], [0, 3, 0], [2, 3, 0]],
+    },
+    run: (g, colour) => linesThroughColour(g, colour, false, true),
+  }),
+  primitive({
+    name: 'draw_cross_through_colour',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Every row and every column holding a cell of the colour is painted in that colour from edge to edge.',
+    example: {
+      input: [[0, 0, 0], [0, 3, 0], [2, 0, 0]],
+      expression: 'draw_cross_through_colour(grid, #3)',
+      output: [[0, 3, 0], [3, 3, 3], [2, 3, 0]],
+    },
+    run: (g, colour) => linesThroughColour(g, colour, true, true),
+  }),
+  primitive({
+    name: 'connect_same_colour_across',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'In each row only, the background gap between two neighbouring cells of the same colour takes the given colour.',
+    example: {
+      input: [[1, 0, 1, 0], [0, 0, 0, 0], [1, 0, 0, 3]],
+      expression: 'connect_same_colour_across(grid, #2)',
+      output: [[1, 2, 1, 0], [0, 0, 0, 0], [1, 0, 0, 3]],
+    },
+    run: (g, colour) => connectAlong(g, colour, true),
+  }),
+  primitive({
+    name: 'connect_same_colour_down',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'In each column only, the background gap between two neighbouring cells of the same colour takes the given colour.',
+    example: {
+      input: [[1, 0, 1, 0], [0, 0, 0, 0], [1, 0, 0, 3]],
+      expression: 'connect_same_colour_down(grid, #2)',
+      output: [[1, 0, 1, 0], [2, 0, 0, 0], [1, 0, 0, 3]],
+    },
+    run: (g, colour) => connectAlong(g, colour, false),
+  }),
+  primitive({
+    name: 'fill_largest_gaps',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The largest regions of background cells (joined through edges; every one of that size) take the colour.',
+    example: {
+      input: [[0, 0, 5, 0], [0, 0, 5, 5], [5, 5, 5, 0]],
+      expression: 'fill_largest_gaps(grid, #4)',
+      output: [[4, 4, 5, 0], [4, 4, 5, 5], [5, 5, 5, 0]],
+    },
+    run: (g, colour) => fillGapsBySize(g, colour, true),
+  }),
+  primitive({
+    name: 'fill_smallest_gaps',
+    category: 'filling',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The smallest regions of background cells (joined through edges; every one of that size) take the colour.',
+    example: {
+      input: [[0, 0, 5, 0], [0, 0, 5, 5], [5, 5, 5, 0]],
+      expression: 'fill_smallest_gaps(grid, #8)',
+      output: [[0, 0, 5, 8], [0, 0, 5, 5], [5, 5, 5, 8]],
+    },
+    run: (g, colour) => fillGapsBySize(g, colour, false),
   }),
 ];

@@ -9,6 +9,8 @@ import { settleObjects } from '../src/grid/settle-objects.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
+import { slideTowardColour } from '../src/grid/slide-toward.ts';
+import { continuePatternRight, extendPatternToSize } from '../src/grid/extend-pattern.ts';
 
 /** Largest scale factor or number of copies a primitive accepts. */
 const MOST_COPIES = 10;
@@ -624,5 +626,47 @@ export const geometryPrimitives = [
       output: [[1, 2], [3, 0]],
     },
     run: paneColours,
+  }),
+  primitive({
+    name: 'slide_toward_colour',
+    category: 'geometry',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Each one-colour object (edges or corners) of another colour slides straight, across, down or diagonally, toward the cells of the colour and stops as it touches them.',
+    example: {
+      input: [[0, 0, 0, 0, 0], [0, 0, 0, 8, 8], [3, 0, 0, 8, 8], [0, 0, 0, 0, 0], [0, 6, 0, 0, 0]],
+      expression: 'slide_toward_colour(grid, #8)',
+      output: [[0, 0, 0, 0, 0], [0, 0, 0, 8, 8], [0, 0, 3, 8, 8], [0, 0, 6, 0, 0], [0, 0, 0, 0, 0]],
+    },
+    run: slideTowardColour,
+  }),
+  primitive({
+    name: 'extend_pattern_to_size',
+    category: 'geometry',
+    parameters: ['Grid', 'Int', 'Int'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Grows (or cuts) the grid to the given height and width, continuing the smallest repeat of its rows and of its columns.',
+    example: {
+      input: [[1, 2, 1], [0, 3, 0]],
+      expression: 'extend_pattern_to_size(grid, 3, 5)',
+      output: [[1, 2, 1, 2, 1], [0, 3, 0, 3, 0], [1, 2, 1, 2, 1]],
+    },
+    run: extendPatternToSize,
+  }),
+  primitive({
+    name: 'continue_pattern_right',
+    category: 'geometry',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The empty columns right of the last non-background cell continue the smallest repeat of the columns before them.',
+    example: {
+      input: [[1, 2, 1, 2, 0, 0, 0], [3, 0, 3, 0, 0, 0, 0]],
+      expression: 'continue_pattern_right(grid)',
+      output: [[1, 2, 1, 2, 1, 2, 1], [3, 0, 3, 0, 3, 0, 3]],
+    },
+    run: continuePatternRight,
   }),
 ];

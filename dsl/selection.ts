@@ -7,6 +7,7 @@ import { countEnclosedRegions } from '../src/grid/holes.ts';
 import type { GridObject } from '../src/language/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
+import { touchesColour } from '../src/grid/touches-colour.ts';
 
 type Objects = readonly GridObject[];
 type Key = (object: GridObject) => number | Failure;
@@ -514,5 +515,15 @@ export const selectionPrimitives = [
       output: [[5]],
     },
     run: mostCommonObject,
+  }),
+  primitive({
+    name: 'touches_colour',
+    category: 'selection',
+    parameters: ['Object', 'Grid', 'Colour'],
+    result: 'Bool',
+    bits: 6,
+    doc: 'Whether a cell of the grid of the colour, outside the object, touches one of its cells by an edge or a corner.',
+    example: { input: [[1, 1, 0], [0, 0, 5]], expression: 'touches_colour(first_object(objects_by_colour(grid)), grid, #5)', output: true },
+    run: touchesColour,
   }),
 ];

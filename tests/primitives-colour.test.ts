@@ -320,3 +320,29 @@ describe('colour_histogram', () => {
     ]);
   });
 });
+
+describe('stripes: the most frequent colour per row or column', () => {
+  it('majority_per_row and majority_per_column (worked by hand; ties go to the lowest colour)', () => {
+    const g = G([[1, 1, 2], [3, 4, 4], [5, 6, 7]]);
+    expect(gridOf('majority_per_row', g).toRows()).toEqual([[1, 1, 1], [4, 4, 4], [5, 5, 5]]);
+    expect(gridOf('majority_per_column', g).toRows()).toEqual([[1, 1, 2], [1, 1, 2], [1, 1, 2]]);
+  });
+
+  it('restore_stripes picks the direction that keeps more cells (worked by hand)', () => {
+    // Three horizontal stripes with two specks: rows keep 7 cells, columns keep 3.
+    const across = G([[3, 3, 3], [7, 1, 7], [2, 2, 5]]);
+    expect(gridOf('restore_stripes', across).toRows()).toEqual([[3, 3, 3], [7, 7, 7], [2, 2, 2]]);
+    // Vertical stripes with one speck.
+    const down = G([[4, 6, 6], [4, 6, 9], [4, 6, 6]]);
+    expect(gridOf('restore_stripes', down).toRows()).toEqual([[4, 6, 6], [4, 6, 6], [4, 6, 6]]);
+  });
+
+  it('majority per column is majority per row seen transposed', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const viaRows = gridOf('transpose', gridOf('majority_per_row', gridOf('transpose', g)));
+        expect(gridOf('majority_per_column', g).equals(viaRows)).toBe(true);
+      }),
+    );
+  });
+});

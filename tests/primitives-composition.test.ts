@@ -13,6 +13,7 @@ import { defaultLibrary } from '../src/library/default-library.ts';
 import { Library } from '../src/library/library.ts';
 import { applyPrimitive } from '../src/library/primitive.ts';
 import { arbitraryGrid, arbitraryGridPair } from './support/arbitrary-grid.ts';
+import { callPrimitive } from './support/run-primitive.ts';
 
 const library = new Library(compositionPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
@@ -235,5 +236,52 @@ describe('overlay_all_first_on_top', () => {
   it('fails on no grids and on grids of different sizes', () => {
     expect(apply('overlay_all_first_on_top', [])).toBe(FAILURE);
     expect(apply('overlay_all_first_on_top', [G([[1]]), G([[1, 2]])])).toBe(FAILURE);
+  });
+});
+
+describe('stamp_object_on_colour', () => {
+  it('centres the template on single marker cells, clipping at the border (worked by hand)', () => {
+    const g = G([
+      [0, 2, 0, 0, 0, 0],
+      [2, 1, 3, 0, 0, 0],
+      [0, 4, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [0, 0, 0, 5, 0, 0],
+      [0, 0, 0, 0, 0, 5],
+    ]);
+    const template = (callPrimitive('objects_multicolour', g) as GridObject[])[0]!;
+    // Marker (4, 3): template box rows 3-5, columns 2-4. Marker (5, 5): box rows 4-6, columns
+    // 4-6, the part outside the grid dropped; its empty corner leaves the first copy's 3 alone.
+    expect(grid('stamp_object_on_colour', g, template, 5).toRows()).toEqual([
+      [0, 2, 0, 0, 0, 0],
+      [2, 1, 3, 0, 0, 0],
+      [0, 4, 0, 0, 0, 0],
+      [0, 0, 0, 2, 0, 0],
+      [0, 0, 2, 1, 3, 2],
+      [0, 0, 0, 4, 2, 1],
+    ]);
+  });
+
+  it('replaces a same-sized block of the colour with the template', () => {
+    const g = G([
+      [6, 8, 0, 5, 5],
+      [8, 8, 0, 5, 5],
+    ]);
+    const template = (callPrimitive('objects_multicolour', g) as GridObject[])[0]!;
+    expect(grid('stamp_object_on_colour', g, template, 5).toRows()).toEqual([
+      [6, 8, 0, 6, 8],
+      [8, 8, 0, 8, 8],
+    ]);
+  });
+
+  it('leaves a grid without the colour as it is', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
+        fc.pre(!g.cells.includes(colour));
+        const objects = callPrimitive('objects_multicolour', g) as GridObject[];
+        fc.pre(objects.length > 0);
+        expect(grid('stamp_object_on_colour', g, objects[0], colour).equals(g)).toBe(true);
+      }),
+    );
   });
 });

@@ -12,6 +12,7 @@ import { defaultLibrary } from '../src/library/default-library.ts';
 import { Library } from '../src/library/library.ts';
 import { applyPrimitive } from '../src/library/primitive.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { callPrimitive } from './support/run-primitive.ts';
 
 const library = new Library(fillingPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
@@ -524,5 +525,79 @@ describe('repeating patterns, empty squares, diagonal rays and neighbours, exten
       [0, 0, 0, 6],
     ]);
     expect(apply('extend_toward_colour', g, 0)).toBe(FAILURE);
+  });
+});
+
+describe('marks beside cells, lines through cells, one-way connections and gaps by size', () => {
+  const transposed = (g: Grid) => callPrimitive('transpose', g) as Grid;
+
+  it('surround_colour_edges and surround_colour_corners mark only around their source colour (worked by hand)', () => {
+    const g = G([[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 2, 0], [0, 0, 0, 0, 0]]);
+    const edges = grid('surround_colour_edges', g, 1, 7);
+    expect(edges.toRows()).toEqual([[0, 7, 0, 0, 0], [7, 1, 7, 0, 0], [0, 7, 0, 0, 0], [0, 0, 0, 2, 0], [0, 0, 0, 0, 0]]);
+    // (2, 2) is a corner neighbour of both the blue and the red cell.
+    expect(grid('surround_colour_corners', edges, 2, 4).toRows()).toEqual([
+      [0, 7, 0, 0, 0], [7, 1, 7, 0, 0], [0, 7, 4, 0, 4], [0, 0, 0, 2, 0], [0, 0, 4, 0, 4],
+    ]);
+  });
+
+  it('edge marks then corner marks make the whole ring of surround_colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), fc.integer({ min: 1, max: 9 }), (g, source, colour) => {
+        fc.pre(source !== colour && g.cells.includes(0));
+        const edges = grid('surround_colour_edges', g, source, colour);
+        fc.pre(backgroundColour(edges) === 0);
+        expect(grid('surround_colour_corners', edges, source, colour).equals(grid('surround_colour', g, source, colour))).toBe(true);
+      }),
+    );
+  });
+
+  it('rows, columns and crosses through a colour paint over everything (worked by hand)', () => {
+    const g = G([[0, 0, 0, 0], [0, 0, 2, 0], [3, 0, 0, 0]]);
+    expect(grid('draw_columns_through_colour', g, 2).toRows()).toEqual([[0, 0, 2, 0], [0, 0, 2, 0], [3, 0, 2, 0]]);
+    expect(grid('draw_rows_through_colour', g, 3).toRows()).toEqual([[0, 0, 0, 0], [0, 0, 2, 0], [3, 3, 3, 3]]);
+    expect(grid('draw_cross_through_colour', g, 2).toRows()).toEqual([[0, 0, 2, 0], [2, 2, 2, 2], [3, 0, 2, 0]]);
+    expect(grid('draw_rows_through_colour', g, 5).equals(g)).toBe(true);
+  });
+
+  it('rows through a colour are columns through it seen transposed', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        const viaColumns = transposed(grid('draw_columns_through_colour', transposed(g), colour));
+        expect(grid('draw_rows_through_colour', g, colour).equals(viaColumns)).toBe(true);
+      }),
+    );
+  });
+
+  it('connect_same_colour_across joins within rows only (worked by hand)', () => {
+    const g = G([[1, 0, 0, 1, 0], [0, 0, 0, 0, 0], [1, 0, 3, 0, 3]]);
+    expect(grid('connect_same_colour_across', g, 2).toRows()).toEqual([[1, 2, 2, 1, 0], [0, 0, 0, 0, 0], [1, 0, 3, 2, 3]]);
+    expect(grid('connect_same_colour_down', g, 2).toRows()).toEqual([[1, 0, 0, 1, 0], [2, 0, 0, 0, 0], [1, 0, 3, 0, 3]]);
+  });
+
+  it('connecting down is connecting across seen transposed', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        const viaAcross = transposed(grid('connect_same_colour_across', transposed(g), colour));
+        expect(grid('connect_same_colour_down', g, colour).equals(viaAcross)).toBe(true);
+      }),
+    );
+  });
+
+  it('fill_largest_gaps and fill_smallest_gaps fill every gap of the extreme size (worked by hand)', () => {
+    // Gaps: the 2x3 room (6 cells), three single cells, the 2-cell corridor at the bottom left.
+    const g = G([[0, 0, 0, 5, 0], [0, 0, 0, 5, 5], [5, 5, 5, 5, 0], [0, 0, 5, 0, 5]]);
+    expect(grid('fill_largest_gaps', g, 1).toRows()).toEqual([[1, 1, 1, 5, 0], [1, 1, 1, 5, 5], [5, 5, 5, 5, 0], [0, 0, 5, 0, 5]]);
+    expect(grid('fill_smallest_gaps', g, 8).toRows()).toEqual([[0, 0, 0, 5, 8], [0, 0, 0, 5, 5], [5, 5, 5, 5, 8], [0, 0, 5, 8, 5]]);
+  });
+
+  it('filling gaps changes only background cells', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), fc.boolean(), (g, colour, largest) => {
+        const background = backgroundColour(g);
+        const out = grid(largest ? 'fill_largest_gaps' : 'fill_smallest_gaps', g, colour);
+        for (let i = 0; i < g.cells.length; i++) if (g.cells[i] !== background) expect(out.cells[i]).toBe(g.cells[i]);
+      }),
+    );
   });
 });

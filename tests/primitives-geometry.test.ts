@@ -12,6 +12,7 @@ import { defaultLibrary } from '../src/library/default-library.ts';
 import { Library } from '../src/library/library.ts';
 import { applyPrimitive } from '../src/library/primitive.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { callPrimitive } from './support/run-primitive.ts';
 
 const library = new Library(geometryPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
@@ -431,5 +432,70 @@ describe('pane_colours', () => {
       }),
     );
     expect(apply('pane_colours', G([[1, 2], [3, 4]]))).toBe(FAILURE);
+  });
+});
+
+describe('sliding toward a colour and continuing patterns', () => {
+  it('slide_toward_colour moves straight or diagonally until touching, and leaves an object that would miss (worked by hand)', () => {
+    const g = G([
+      [2, 2, 0, 0, 3],
+      [0, 2, 0, 0, 4],
+      [0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+      [0, 8, 8, 0, 0],
+    ]);
+    // The red piece shares columns with the light-blue block, so it moves down until its lower
+    // cell rests on the block. The yellow dot shares neither rows nor columns, so it moves
+    // diagonally down-left: (2, 3), (3, 2), and (4, 1) would be on the block. The green dot's
+    // diagonal path (1, 3), (2, 2), (3, 1), (4, 0) leaves the grid without meeting the block.
+    expect(grid('slide_toward_colour', g, 8).toRows()).toEqual([
+      [0, 0, 0, 0, 3],
+      [0, 0, 0, 0, 0],
+      [2, 2, 0, 0, 0],
+      [0, 2, 4, 0, 0],
+      [0, 8, 8, 0, 0],
+    ]);
+  });
+
+  it('slide_toward_colour never changes the cells of the colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
+        const out = grid('slide_toward_colour', g, colour);
+        for (let i = 0; i < g.cells.length; i++) expect(out.cells[i] === colour).toBe(g.cells[i] === colour);
+      }),
+    );
+  });
+
+  it('extend_pattern_to_size continues the smallest repeat of the rows (worked by hand)', () => {
+    // Rows repeat every 4 (0-1-0 / 1-1-0 / 0-1-0 / 0-1-1), not every 2.
+    const g = G([[0, 1, 0], [1, 1, 0], [0, 1, 0], [0, 1, 1], [0, 1, 0], [1, 1, 0]]);
+    expect(grid('extend_pattern_to_size', g, 9, 3).toRows()).toEqual([
+      [0, 1, 0], [1, 1, 0], [0, 1, 0], [0, 1, 1], [0, 1, 0], [1, 1, 0], [0, 1, 0], [0, 1, 1], [0, 1, 0],
+    ]);
+    expect(apply('extend_pattern_to_size', g, 0, 3)).toBe(FAILURE);
+    expect(apply('extend_pattern_to_size', g, 9, 31)).toBe(FAILURE);
+  });
+
+  it('extend_pattern_to_size keeps the original in the top-left corner when growing', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 5 }), fc.integer({ min: 0, max: 5 }), (g, more, wider) => {
+        const out = grid('extend_pattern_to_size', g, g.height + more, g.width + wider);
+        for (let r = 0; r < g.height; r++) for (let c = 0; c < g.width; c++) expect(out.get(r, c)).toBe(g.get(r, c));
+      }),
+    );
+  });
+
+  it('continue_pattern_right fills the empty columns from the repeat (worked by hand)', () => {
+    const g = G([[0, 0, 0, 0, 0, 0, 0, 0], [2, 2, 0, 2, 2, 0, 0, 0], [1, 2, 2, 1, 2, 2, 0, 0]]);
+    expect(grid('continue_pattern_right', g).toRows()).toEqual([[0, 0, 0, 0, 0, 0, 0, 0], [2, 2, 0, 2, 2, 0, 2, 2], [1, 2, 2, 1, 2, 2, 1, 2]]);
+  });
+
+  it('continue_pattern_right is idempotent and keeps every column up to the last filled one', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const once = grid('continue_pattern_right', g);
+        expect(grid('continue_pattern_right', once).equals(once)).toBe(true);
+      }),
+    );
   });
 });

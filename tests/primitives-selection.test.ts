@@ -334,3 +334,46 @@ describe('first_object_where and most_common_object', () => {
     expect(callPrimitive('most_common_object', [])).toBe(FAILURE);
   });
 });
+
+describe('touches_colour', () => {
+  it('counts edge and corner contact with other cells of the colour, never the object itself (worked by hand)', () => {
+    const g = G([
+      [1, 1, 0, 0, 0],
+      [0, 0, 5, 0, 3],
+      [0, 0, 0, 0, 3],
+      [5, 0, 0, 0, 0],
+    ]);
+    const [blue, grey, green, lone] = objectsOf(g);
+    expect(blue?.mainColour).toBe(1);
+    expect(callPrimitive('touches_colour', blue, g, 5)).toBe(true); // (0, 1) and (1, 2) meet at a corner
+    expect(callPrimitive('touches_colour', blue, g, 3)).toBe(false);
+    expect(callPrimitive('touches_colour', green, g, 5)).toBe(false); // (1, 2) is two columns away
+    expect(callPrimitive('touches_colour', grey, g, 5)).toBe(false); // its own cell does not count
+    expect(callPrimitive('touches_colour', lone, g, 1)).toBe(false);
+  });
+
+  it('an object touches a colour exactly when the colour appears among the neighbours of its cells', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
+        for (const o of objectsOf(g)) {
+          let near = false;
+          for (let r = 0; r < g.height; r++) {
+            for (let c = 0; c < g.width; c++) {
+              if (g.get(r, c) !== colour) continue;
+              const inside = r >= o.top && r < o.top + o.height && c >= o.left && c < o.left + o.width && o.shape.get(r - o.top, c - o.left) !== EMPTY;
+              if (inside) continue;
+              for (let dr = -1; dr <= 1; dr++) {
+                for (let dc = -1; dc <= 1; dc++) {
+                  const sr = r + dr - o.top;
+                  const sc = c + dc - o.left;
+                  if (sr >= 0 && sr < o.height && sc >= 0 && sc < o.width && o.shape.get(sr, sc) !== EMPTY) near = true;
+                }
+              }
+            }
+          }
+          expect(callPrimitive('touches_colour', o, g, colour)).toBe(near);
+        }
+      }),
+    );
+  });
+});

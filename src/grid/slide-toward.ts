@@ -1,0 +1,100 @@
+/**
+ * Sliding objects toward the cells of a colour: each one-colour object (cells joined through
+ * edges or corners) of another colour moves in a straight line, across, down or diagonally,
+ * toward the cells of that colour and stops just before it would overlap them.
+ */
+import { backgroundColour, components } from './components.ts';
+import { EMPTY, Grid } from './grid.ts';
+
+/**
+ * The direction of travel: along the rows when the object's rows overlap the target's rows,
+ * along the columns when its columns overlap, otherwise diagonally toward the target; 0, 0
+ * when the object lies inside the target's bounding box.
+ */
+function direction(from: number, to: number, targetFrom: number, targetTo: number): number {
+  if (to < targetFrom) return 1;
+  if (from > targetTo) return -1;
+  return 0;
+}
+
+export function slideTowardColour(g: Grid, colour: number): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  if (colour === background) return g;
+  let top = height;
+  let bottom = -1;
+  let left = width;
+  let right = -1;
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      if (cells[r * width + c] !== colour) continue;
+      if (r < top) top = r;
+      if (r > bottom) bottom = r;
+      if (c < left) left = c;
+      if (c > right) right = c;
+    }
+  }
+  if (bottom < 0) return g;
+  const objects = components(g, { diagonal: true, multicolour: false, background });
+  const out = cells.slice();
+  const moves: number[] = [];
+  for (const o of objects) {
+    const shape = o.shape;
+    if (shape.cells[shape.cells.findIndex((v) => v !== EMPTY)] === colour) {
+      moves.push(0, 0);
+      continue;
+    }
+    const dr = direction(o.top, o.top + o.height - 1, top, bottom);
+    const dc = direction(o.left, o.left + o.width - 1, left, right);
+    let steps = 0;
+    if (dr !== 0 || dc !== 0) {
+      // Step until the next step would put a cell on the colour or the object leaves the grid.
+      const limit = Math.max(height, width);
+      let stopped = false;
+      for (let k = 1; k <= limit && !stopped; k++) {
+        for (let r = 0; r < shape.height && !stopped; r++) {
+          for (let c = 0; c < shape.width; c++) {
+            if (shape.cells[r * shape.width + c] === EMPTY) continue;
+            const nr = o.top + r + k * dr;
+            const nc = o.left + c + k * dc;
+            if (nr < 0 || nr >= height || nc < 0 || nc >= width) {
+              steps = -1;
+              stopped = true;
+              break;
+            }
+            if (cells[nr * width + nc] === colour) {
+              steps = k - 1;
+              stopped = true;
+              break;
+            }
+          }
+        }
+      }
+      if (!stopped || steps < 0) steps = 0;
+    }
+    moves.push(dr * steps, dc * steps);
+  }
+  // Lift every moving object first, then put each down at its new place.
+  for (let i = 0; i < objects.length; i++) {
+    if (moves[2 * i] === 0 && moves[2 * i + 1] === 0) continue;
+    const o = objects[i]!;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        if (o.shape.cells[r * o.width + c] !== EMPTY) out[(o.top + r) * width + o.left + c] = background;
+      }
+    }
+  }
+  for (let i = 0; i < objects.length; i++) {
+    const dr = moves[2 * i]!;
+    const dc = moves[2 * i + 1]!;
+    if (dr === 0 && dc === 0) continue;
+    const o = objects[i]!;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        const v = o.shape.cells[r * o.width + c]!;
+        if (v !== EMPTY) out[(o.top + r + dr) * width + o.left + c + dc] = v;
+      }
+    }
+  }
+  return new Grid(height, width, out);
+}
