@@ -5,6 +5,7 @@ import { GridObject } from '../src/language/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { majorityLines, restoreStripes } from '../src/grid/stripes.ts';
+import { colourBands } from '../src/grid/colour-bands.ts';
 
 /** The grid with every colour c replaced by `target[c]`; the same grid when nothing changes. */
 export function mapColours(g: Grid, target: Uint8Array): Grid {
@@ -364,5 +365,15 @@ export const colourPrimitives = [
     doc: 'Removes specks from stripes: majority_per_row or majority_per_column, whichever keeps more cells unchanged (rows on ties).',
     example: { input: [[1, 2, 2], [1, 2, 3], [1, 4, 2]], expression: 'restore_stripes(grid)', output: [[1, 2, 2], [1, 2, 2], [1, 2, 2]] },
     run: restoreStripes,
+  }),
+  primitive({
+    name: 'colour_bands',
+    category: 'colour',
+    parameters: ['Grid'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'The colours other than black in the order their bands run: one row by mean column when they spread more across, else one column by mean row.',
+    example: { input: [[4, 4, 2, 2, 8], [4, 2, 2, 8, 8]], expression: 'colour_bands(grid)', output: [[4, 2, 8]] },
+    run: colourBands,
   }),
 ];

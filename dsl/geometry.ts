@@ -669,4 +669,18 @@ export const geometryPrimitives = [
     },
     run: continuePatternRight,
   }),
+  primitive({
+    name: 'step_toward_colour',
+    category: 'geometry',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Each one-colour object (edges or corners) of another colour moves one cell, straight or diagonally, toward the cells of the colour, unless that would cover them.',
+    example: {
+      input: [[3, 0, 0, 0], [0, 0, 0, 0], [0, 0, 0, 4], [1, 0, 0, 4]],
+      expression: 'step_toward_colour(grid, #4)',
+      output: [[0, 0, 0, 0], [0, 3, 0, 0], [0, 0, 0, 4], [0, 1, 0, 4]],
+    },
+    run: (g, colour) => slideTowardColour(g, colour, 1),
+  }),
 ];

@@ -346,3 +346,11 @@ describe('stripes: the most frequent colour per row or column', () => {
     );
   });
 });
+
+describe('colour_bands', () => {
+  it('lists band colours across or down, whichever way they run (worked by hand)', () => {
+    expect(rows(callPrimitive('colour_bands', G([[3, 3, 5, 5, 1], [3, 5, 5, 1, 1]])))).toEqual([[3, 5, 1]]);
+    expect(rows(callPrimitive('colour_bands', G([[7, 7, 7], [7, 2, 7], [2, 2, 2], [9, 9, 2]])))).toEqual([[7], [2], [9]]);
+    expect(callPrimitive('colour_bands', G([[0, 0], [0, 0]]))).toBe(FAILURE);
+  });
+});

@@ -499,3 +499,41 @@ describe('sliding toward a colour and continuing patterns', () => {
     );
   });
 });
+
+describe('step_toward_colour', () => {
+  it('moves each object one cell toward the colour, and not onto it (worked by hand)', () => {
+    const g = G([
+      [0, 0, 0, 0, 0],
+      [6, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+      [0, 0, 0, 4, 3],
+      [0, 0, 0, 0, 0],
+    ]);
+    // The magenta dot shares no row or column with the yellow dot: one diagonal step down-right.
+    // The green dot already touches it and stays.
+    expect(grid('step_toward_colour', g, 4).toRows()).toEqual([
+      [0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+      [0, 6, 0, 0, 0],
+      [0, 0, 0, 4, 3],
+      [0, 0, 0, 0, 0],
+    ]);
+  });
+
+  it('a single step keeps every cell count when objects are single cells far apart', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 }), (r, c) => {
+        fc.pre(Math.abs(r - 3) > 1 || Math.abs(c - 3) > 1);
+        const cells = new Uint8Array(49);
+        cells[3 * 7 + 3] = 4;
+        cells[r * 7 + c] = 2;
+        const out = grid('step_toward_colour', new Grid(7, 7, cells), 4);
+        const r2 = r + Math.sign(3 - r);
+        const c2 = c + Math.sign(3 - c);
+        expect(out.get(r2, c2)).toBe(2);
+        expect(out.get(3, 3)).toBe(4);
+        expect(out.cells.filter((v) => v !== 0).length).toBe(2);
+      }),
+    );
+  });
+});

@@ -17,7 +17,11 @@ function direction(from: number, to: number, targetFrom: number, targetTo: numbe
   return 0;
 }
 
-export function slideTowardColour(g: Grid, colour: number): Grid {
+/**
+ * Slides each object toward the colour until it touches (an object whose path misses the colour
+ * stays); with `maxSteps` the object moves at most that many cells and need not reach it.
+ */
+export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   if (colour === background) return g;
@@ -52,6 +56,11 @@ export function slideTowardColour(g: Grid, colour: number): Grid {
       const limit = Math.max(height, width);
       let stopped = false;
       for (let k = 1; k <= limit && !stopped; k++) {
+        if (k > maxSteps) {
+          steps = maxSteps;
+          stopped = true;
+          break;
+        }
         for (let r = 0; r < shape.height && !stopped; r++) {
           for (let c = 0; c < shape.width; c++) {
             if (shape.cells[r * shape.width + c] === EMPTY) continue;
