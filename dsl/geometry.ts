@@ -11,6 +11,7 @@ import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { slideTowardColour } from '../src/grid/slide-toward.ts';
 import { continuePatternRight, extendPatternToSize } from '../src/grid/extend-pattern.ts';
+import { lineUpWithColour } from '../src/grid/line-up.ts';
 
 /** Largest scale factor or number of copies a primitive accepts. */
 const MOST_COPIES = 10;
@@ -682,5 +683,19 @@ export const geometryPrimitives = [
       output: [[0, 0, 0, 0], [0, 3, 0, 0], [0, 0, 0, 4], [0, 1, 0, 4]],
     },
     run: (g, colour) => slideTowardColour(g, colour, 1),
+  }),
+  primitive({
+    name: 'line_up_with_colour',
+    category: 'geometry',
+    parameters: ['Grid', 'Colour'],
+    result: 'Grid',
+    bits: 6,
+    doc: 'Each one-colour object beside the cells of the colour moves up or down to share their top row; one above or below them moves sideways to share their left column.',
+    example: {
+      input: [[0, 0, 0, 2], [1, 1, 0, 2], [0, 0, 0, 0], [0, 3, 0, 0]],
+      expression: 'line_up_with_colour(grid, #1)',
+      output: [[0, 0, 0, 0], [1, 1, 0, 2], [0, 0, 0, 2], [3, 0, 0, 0]],
+    },
+    run: lineUpWithColour,
   }),
 ];

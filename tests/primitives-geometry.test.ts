@@ -537,3 +537,35 @@ describe('step_toward_colour', () => {
     );
   });
 });
+
+describe('line_up_with_colour', () => {
+  it('moves objects beside the colour level with its top, and those above or below to its left column (worked by hand)', () => {
+    const g = G([
+      [0, 0, 0, 0, 4, 4],
+      [0, 0, 0, 0, 0, 0],
+      [0, 1, 1, 0, 0, 0],
+      [0, 1, 1, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [0, 0, 0, 6, 0, 0],
+    ]);
+    // Yellow shares no column with blue: it drops to row 2. Magenta shares no row or column:
+    // it moves up (no shared column comes first), to row 2.
+    expect(grid('line_up_with_colour', g, 1).toRows()).toEqual([
+      [0, 0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [0, 1, 1, 6, 4, 4],
+      [0, 1, 1, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0, 0],
+    ]);
+  });
+
+  it('never changes the cells of the colour', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
+        const out = grid('line_up_with_colour', g, colour);
+        for (let i = 0; i < g.cells.length; i++) expect(out.cells[i] === colour).toBe(g.cells[i] === colour);
+      }),
+    );
+  });
+});

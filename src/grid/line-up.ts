@@ -1,0 +1,64 @@
+/**
+ * Lining objects up with the cells of a colour: an object beside them (no shared column) moves
+ * up or down until its top row is theirs; an object above or below them (no shared row) moves
+ * sideways until its left column is theirs.
+ */
+import { backgroundColour, components } from './components.ts';
+import { EMPTY, Grid } from './grid.ts';
+
+export function lineUpWithColour(g: Grid, colour: number): Grid {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  if (colour === background) return g;
+  let top = height;
+  let bottom = -1;
+  let left = width;
+  let right = -1;
+  for (let i = 0; i < cells.length; i++) {
+    if (cells[i] !== colour) continue;
+    const r = (i / width) | 0;
+    const c = i - r * width;
+    if (r < top) top = r;
+    if (r > bottom) bottom = r;
+    if (c < left) left = c;
+    if (c > right) right = c;
+  }
+  if (bottom < 0) return g;
+  const objects = components(g, { diagonal: true, multicolour: false, background });
+  const moves = new Int32Array(objects.length * 2);
+  let moved = false;
+  for (let i = 0; i < objects.length; i++) {
+    const o = objects[i]!;
+    if (o.shape.cells[o.shape.cells.findIndex((v) => v !== EMPTY)] === colour) continue;
+    const sharesColumns = o.left <= right && o.left + o.width - 1 >= left;
+    const sharesRows = o.top <= bottom && o.top + o.height - 1 >= top;
+    let dr = 0;
+    let dc = 0;
+    if (!sharesColumns) dr = top - o.top;
+    else if (!sharesRows) dc = left - o.left;
+    // Objects that would leave the grid stay where they are.
+    if (o.top + dr < 0 || o.top + dr + o.height > height || o.left + dc < 0 || o.left + dc + o.width > width) continue;
+    moves[2 * i] = dr;
+    moves[2 * i + 1] = dc;
+    if (dr !== 0 || dc !== 0) moved = true;
+  }
+  if (!moved) return g;
+  const out = cells.slice();
+  for (let pass = 0; pass < 2; pass++) {
+    for (let i = 0; i < objects.length; i++) {
+      const dr = moves[2 * i]!;
+      const dc = moves[2 * i + 1]!;
+      if (dr === 0 && dc === 0) continue;
+      const o = objects[i]!;
+      for (let r = 0; r < o.height; r++) {
+        for (let c = 0; c < o.width; c++) {
+          const v = o.shape.cells[r * o.width + c]!;
+          if (v === EMPTY) continue;
+          if (pass === 0) out[(o.top + r) * width + o.left + c] = background;
+          else out[(o.top + r + dr) * width + o.left + c + dc] = v;
+        }
+      }
+    }
+  }
+  return new Grid(height, width, out);
+}
