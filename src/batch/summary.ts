@@ -1,5 +1,6 @@
 /** The end-of-run summary of an evaluation. */
 import type { ResultLine } from './results-file.ts';
+import type { TaskReport } from './task-report.ts';
 
 export interface EvaluationSummary {
   readonly tasks: number;
@@ -11,9 +12,14 @@ export interface EvaluationSummary {
   readonly timeOuts: number;
   /** Unreadable task files and solver errors. */
   readonly failures: number;
-  /** Median seconds to a solution, over the solved tasks (null when none). */
+  /** Median seconds to the first program fitting every demonstration, over the solved tasks (null when none). */
   readonly medianSecondsToSolution: number | null;
   readonly totalSeconds: number;
+}
+
+/** Seconds until the first program that fits every demonstration (the whole task's time if unknown). */
+export function secondsToSolution(report: TaskReport): number {
+  return report.statistics?.secondsToFirstSolution ?? report.seconds;
 }
 
 export function median(values: readonly number[]): number | null {
@@ -31,7 +37,7 @@ export function summarise(lines: readonly ResultLine[]): EvaluationSummary {
     notFound: lines.filter((l) => l.status === 'not found').length,
     timeOuts: lines.filter((l) => l.status === 'not found' && l.reason === 'time').length,
     failures: lines.filter((l) => l.status === 'error').length,
-    medianSecondsToSolution: median(lines.filter((l) => l.solved).map((l) => l.seconds)),
+    medianSecondsToSolution: median(lines.filter((l) => l.solved).map(secondsToSolution)),
     totalSeconds: lines.reduce((sum, l) => sum + l.seconds, 0),
   };
 }

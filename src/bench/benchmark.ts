@@ -13,7 +13,7 @@ import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
 import { scoreReport } from '../batch/score.ts';
 import { solveFiles } from '../batch/solve-files.ts';
-import { median } from '../batch/summary.ts';
+import { median, secondsToSolution } from '../batch/summary.ts';
 import type { TaskReport } from '../batch/task-report.ts';
 import { ProgressBar } from '../output/progress-bar.ts';
 import { taskFiles } from '../tasks/read-task.ts';
@@ -40,7 +40,7 @@ function figures(reports: readonly TaskReport[]): Figures {
   for (const r of reports) {
     if (scoreReport(r).solved) {
       solved++;
-      times.push(r.seconds);
+      times.push(secondsToSolution(r));
     }
     if (r.statistics) {
       candidates += r.statistics.candidates;

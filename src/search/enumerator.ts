@@ -40,6 +40,8 @@ export interface EnumerationStatistics {
   failed: number;
   /** Highest cost level finished. */
   costReached: number;
+  /** Seconds from the start of the search to the first solution (absent when none). */
+  secondsToFirstSolution?: number;
 }
 
 export interface EnumerationOutcome {
@@ -83,9 +85,12 @@ export function enumerate(
     stats.kept++;
     if (type === 'Grid') {
       for (let i = 0; i < trainCount; i++) if (!(values[i] as Grid).equals(outputs[i]!)) return;
+      // Attempts must differ on the test inputs (pruning guarantees it; without pruning, check).
+      if (!limits.pruning && solutions.some((s) => sameTestOutputs(s.values, values, trainCount))) return;
       solutions.push(candidate);
       if (solutions.length === 1) {
         firstSolutionCost = cost;
+        stats.secondsToFirstSolution = (performance.now() - started) / 1000;
         // Further attempts get as long again as the first took (at least a second), within the limit.
         const now = performance.now();
         deadline = Math.min(deadline, now + Math.max(1000, now - started));
@@ -216,4 +221,9 @@ export function enumerate(
   }
   if (solutions.length > 0) reason = 'solved';
   return { solutions, reason, statistics: stats };
+}
+
+function sameTestOutputs(a: readonly unknown[], b: readonly unknown[], from: number): boolean {
+  for (let i = from; i < a.length; i++) if (!(a[i] as Grid).equals(b[i] as Grid)) return false;
+  return true;
 }
