@@ -4,7 +4,8 @@
  * sideways until its left column is theirs.
  */
 import { backgroundColour, components } from './components.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, type Grid } from './grid.ts';
+import { moveObjects } from './paint-object.ts';
 
 export function lineUpWithColour(g: Grid, colour: number): Grid {
   const { height, width, cells } = g;
@@ -43,22 +44,5 @@ export function lineUpWithColour(g: Grid, colour: number): Grid {
     if (dr !== 0 || dc !== 0) moved = true;
   }
   if (!moved) return g;
-  const out = cells.slice();
-  for (let pass = 0; pass < 2; pass++) {
-    for (let i = 0; i < objects.length; i++) {
-      const dr = moves[2 * i]!;
-      const dc = moves[2 * i + 1]!;
-      if (dr === 0 && dc === 0) continue;
-      const o = objects[i]!;
-      for (let r = 0; r < o.height; r++) {
-        for (let c = 0; c < o.width; c++) {
-          const v = o.shape.cells[r * o.width + c]!;
-          if (v === EMPTY) continue;
-          if (pass === 0) out[(o.top + r) * width + o.left + c] = background;
-          else out[(o.top + r + dr) * width + o.left + c + dc] = v;
-        }
-      }
-    }
-  }
-  return new Grid(height, width, out);
+  return moveObjects(g, objects, moves, background);
 }

@@ -4,7 +4,8 @@
  * toward the cells of that colour and stops just before it would overlap them.
  */
 import { backgroundColour, components } from './components.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, type Grid } from './grid.ts';
+import { moveObjects } from './paint-object.ts';
 
 /**
  * The direction of travel: along the rows when the object's rows overlap the target's rows,
@@ -40,7 +41,6 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
   }
   if (bottom < 0) return g;
   const objects = components(g, { diagonal: true, multicolour: false, background });
-  const out = cells.slice();
   const moves: number[] = [];
   for (const o of objects) {
     const shape = o.shape;
@@ -83,27 +83,5 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
     }
     moves.push(dr * steps, dc * steps);
   }
-  // Lift every moving object first, then put each down at its new place.
-  for (let i = 0; i < objects.length; i++) {
-    if (moves[2 * i] === 0 && moves[2 * i + 1] === 0) continue;
-    const o = objects[i]!;
-    for (let r = 0; r < o.height; r++) {
-      for (let c = 0; c < o.width; c++) {
-        if (o.shape.cells[r * o.width + c] !== EMPTY) out[(o.top + r) * width + o.left + c] = background;
-      }
-    }
-  }
-  for (let i = 0; i < objects.length; i++) {
-    const dr = moves[2 * i]!;
-    const dc = moves[2 * i + 1]!;
-    if (dr === 0 && dc === 0) continue;
-    const o = objects[i]!;
-    for (let r = 0; r < o.height; r++) {
-      for (let c = 0; c < o.width; c++) {
-        const v = o.shape.cells[r * o.width + c]!;
-        if (v !== EMPTY) out[(o.top + r + dr) * width + o.left + c + dc] = v;
-      }
-    }
-  }
-  return new Grid(height, width, out);
+  return moveObjects(g, objects, moves, background);
 }
