@@ -4,6 +4,7 @@
  * sideways until its left column is theirs.
  */
 import { backgroundColour, components } from './components.ts';
+import { cellBounds } from './crop.ts';
 import { EMPTY, type Grid } from './grid.ts';
 import { moveObjects } from './paint-object.ts';
 
@@ -11,20 +12,9 @@ export function lineUpWithColour(g: Grid, colour: number): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   if (colour === background) return g;
-  let top = height;
-  let bottom = -1;
-  let left = width;
-  let right = -1;
-  for (let i = 0; i < cells.length; i++) {
-    if (cells[i] !== colour) continue;
-    const r = (i / width) | 0;
-    const c = i - r * width;
-    if (r < top) top = r;
-    if (r > bottom) bottom = r;
-    if (c < left) left = c;
-    if (c > right) right = c;
-  }
-  if (bottom < 0) return g;
+  const bounds = cellBounds(g, colour, true);
+  if (!bounds) return g;
+  const { top, bottom, left, right } = bounds;
   const objects = components(g, { diagonal: true, multicolour: false, background });
   const moves = new Int32Array(objects.length * 2);
   let moved = false;

@@ -4,6 +4,7 @@
  * toward the cells of that colour and stops just before it would overlap them.
  */
 import { backgroundColour, components } from './components.ts';
+import { cellBounds } from './crop.ts';
 import { EMPTY, type Grid } from './grid.ts';
 import { moveObjects } from './paint-object.ts';
 
@@ -26,20 +27,9 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   if (colour === background) return g;
-  let top = height;
-  let bottom = -1;
-  let left = width;
-  let right = -1;
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] !== colour) continue;
-      if (r < top) top = r;
-      if (r > bottom) bottom = r;
-      if (c < left) left = c;
-      if (c > right) right = c;
-    }
-  }
-  if (bottom < 0) return g;
+  const bounds = cellBounds(g, colour, true);
+  if (!bounds) return g;
+  const { top, bottom, left, right } = bounds;
   const objects = components(g, { diagonal: true, multicolour: false, background });
   const moves: number[] = [];
   for (const o of objects) {
