@@ -8,6 +8,7 @@ import { Palette } from '../src/language/palette.ts';
 import { Point } from '../src/language/point.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 
 const G = Grid.fromRows;
 const colour = fc.integer({ min: 0, max: 9 });
@@ -17,13 +18,6 @@ function gridOf(name: string, ...args: unknown[]): Grid {
   const value = callPrimitive(name, ...args);
   if (!(value instanceof Grid)) throw new Error(`tests/primitives-colour.test.ts: ${name} gave ${String(value)}, expected a grid`);
   return value;
-}
-/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
-function backgroundOf(g: Grid): number {
-  if (g.cells.includes(0)) return 0;
-  const counts = new Array<number>(10).fill(0);
-  for (const v of g.cells) counts[v]!++;
-  return counts.indexOf(Math.max(...counts));
 }
 function countsOf(g: Grid): number[] {
   const counts = new Array<number>(10).fill(0);

@@ -5,18 +5,11 @@ import { Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive, evaluate } from './support/run-primitive.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 
 const G = Grid.fromRows;
 const rows = (value: unknown): unknown => (value instanceof Grid ? value.toRows() : value);
 const small = fc.integer({ min: -50, max: 50 });
-
-/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
-function backgroundOf(g: Grid): number {
-  if (g.cells.includes(0)) return 0;
-  const counts = new Array<number>(10).fill(0);
-  for (const v of g.cells) counts[v]!++;
-  return counts.indexOf(Math.max(...counts));
-}
 
 describe('counting laws', () => {
   it('count_colour summed over the colours is the number of cells', () => {

@@ -7,17 +7,11 @@ import type { GridObject } from '../src/language/grid-object.ts';
 import { Point } from '../src/language/point.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 
 const G = Grid.fromRows;
 const rows = (value: unknown): unknown => (value instanceof Grid ? value.toRows() : value);
 
-/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
-function backgroundOf(g: Grid): number {
-  if (g.cells.includes(0)) return 0;
-  const counts = new Array<number>(10).fill(0);
-  for (const v of g.cells) counts[v]!++;
-  return counts.indexOf(Math.max(...counts));
-}
 const countNot = (g: Grid, colour: number) => g.cells.reduce((n, v) => n + (v === colour ? 0 : 1), 0);
 const sub = (g: Grid, top: number, left: number, h: number, w: number) =>
   g.toRows().slice(top, top + h).map((row) => row.slice(left, left + w));

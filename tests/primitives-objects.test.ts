@@ -6,16 +6,9 @@ import { FAILURE } from '../src/language/failure.ts';
 import { GridObject } from '../src/language/grid-object.ts';
 import { arbitraryColour, arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 
 const G = Grid.fromRows;
-
-/** The background, computed independently here: black when present, else the most frequent colour (lowest on ties). */
-function backgroundOf(g: Grid): number {
-  if (g.cells.includes(0)) return 0;
-  const counts = new Array<number>(10).fill(0);
-  for (const v of g.cells) counts[v]!++;
-  return counts.indexOf(Math.max(...counts));
-}
 
 function objectsOf(name: string, ...args: unknown[]): GridObject[] {
   const value = callPrimitive(name, ...args);

@@ -2,8 +2,6 @@
  * Programs as data. A program names its input grid, computes named steps in order, and ends
  * with an answer expression. Comments are part of the tree so printing keeps them.
  */
-import type { BaseType } from './types.ts';
-
 export type LiteralValue =
   | { readonly type: 'Colour'; readonly value: number }
   | { readonly type: 'Int'; readonly value: number }
@@ -32,20 +30,4 @@ export interface Program {
   /** Comment lines just before `answer`. */
   readonly answerComments: readonly string[];
   readonly answer: Expression;
-}
-
-export const variable = (name: string): Expression => ({ kind: 'variable', name });
-export const call = (primitive: string, ...args: Expression[]): Expression => ({ kind: 'call', primitive, arguments: args });
-export const hole: Expression = { kind: 'hole' };
-export const literal = (literal: LiteralValue): Expression => ({ kind: 'literal', literal });
-export const colour = (value: number): Expression => literal({ type: 'Colour', value });
-export const integer = (value: number): Expression => literal({ type: 'Int', value });
-
-export function literalType(l: LiteralValue): BaseType {
-  return l.type;
-}
-
-/** A program whose answer is a single expression over the input `grid`, with no steps. */
-export function expressionProgram(answer: Expression, input = 'grid'): Program {
-  return { comments: [], input, steps: [], answerComments: [], answer };
 }

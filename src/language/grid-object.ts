@@ -45,5 +45,3 @@ export class GridObject {
     return best;
   }
 }
-
-export { EMPTY };
