@@ -1,7 +1,7 @@
 /** Recolouring: fixed changes, colour maps, swaps, keeping or removing a colour, colour ranks. */
 import { backgroundColour, colourCounts, components } from '../src/grid/components.ts';
 import { EMPTY, Grid, shapeAllowed } from '../src/grid/grid.ts';
-import { GridObject } from '../src/language/grid-object.ts';
+import { GridObject } from '../src/grid/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { majorityLines, restoreStripes } from '../src/grid/stripes.ts';

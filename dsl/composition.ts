@@ -6,7 +6,7 @@ import { backgroundColour } from '../src/grid/components.ts';
 import { Grid, getSizeCap } from '../src/grid/grid.ts';
 import { paintObjectInto } from '../src/grid/paint-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
-import { GridObject } from '../src/language/grid-object.ts';
+import { GridObject } from '../src/grid/grid-object.ts';
 import type { Point } from '../src/language/point.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { flipLeftRight, flipUpDown } from './symmetry.ts';

@@ -2,7 +2,7 @@
 import { backgroundColour } from '../src/grid/components.ts';
 import { cellBounds, cropGrid } from '../src/grid/crop.ts';
 import { EMPTY, Grid, shapeAllowed } from '../src/grid/grid.ts';
-import type { GridObject } from '../src/language/grid-object.ts';
+import type { GridObject } from '../src/grid/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
 

@@ -1,4 +1,5 @@
-/** The primitive library: every record, gathered from the category files. */
+/** The primitive library: every record, gathered from the category files, and the library built from them. */
+import { Library } from '../src/library/library.ts';
 import type { Primitive } from '../src/library/primitive.ts';
 import { colourPrimitives } from './colour.ts';
 import { compositionPrimitives } from './composition.ts';
@@ -23,3 +24,6 @@ export const PRIMITIVES: readonly Primitive[] = [
   ...fillingPrimitives,
   ...countingPrimitives,
 ];
+
+/** The library built from every record above. */
+export const defaultLibrary = new Library(PRIMITIVES);

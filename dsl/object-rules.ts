@@ -8,7 +8,7 @@ import { backgroundColour, components } from '../src/grid/components.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { paintObjectInto } from '../src/grid/paint-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
-import type { GridObject } from '../src/language/grid-object.ts';
+import type { GridObject } from '../src/grid/grid-object.ts';
 import { primitive } from '../src/library/primitive.ts';
 
 type Test = (o: GridObject) => boolean | Failure;

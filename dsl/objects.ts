@@ -3,7 +3,7 @@ import { backgroundColour, components } from '../src/grid/components.ts';
 import { cellsOfColour } from '../src/grid/colour-cells.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { enclosedCells } from '../src/grid/holes.ts';
-import type { GridObject } from '../src/language/grid-object.ts';
+import type { GridObject } from '../src/grid/grid-object.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
 

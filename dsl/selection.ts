@@ -4,7 +4,7 @@
  */
 import { EMPTY, type Grid } from '../src/grid/grid.ts';
 import { countEnclosedRegions } from '../src/grid/holes.ts';
-import type { GridObject } from '../src/language/grid-object.ts';
+import type { GridObject } from '../src/grid/grid-object.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import { primitive } from '../src/library/primitive.ts';
 import { touchesColour } from '../src/grid/touches-colour.ts';

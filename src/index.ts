@@ -3,7 +3,7 @@
  * task files. Everything else is internal and may change.
  */
 export { Grid, EMPTY, getSizeCap, setSizeCap, shapeAllowed } from './grid/grid.ts';
-export { GridObject } from './language/grid-object.ts';
+export { GridObject } from './grid/grid-object.ts';
 export { Point } from './language/point.ts';
 export { Palette } from './language/palette.ts';
 export { FAILURE, isFailure, type Failure } from './language/failure.ts';
@@ -16,7 +16,7 @@ export { checkProgram, ProgramTypeError, type TypeProblem } from './language/che
 export { runProgram, type RunResult, type TraceEntry } from './language/interpreter.ts';
 
 export { Library } from './library/library.ts';
-export { defaultLibrary } from './library/default-library.ts';
+export { defaultLibrary } from '../dsl/index.ts';
 export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, type WorkedExample } from './library/primitive.ts';
 
 export { parseTask, readTaskFile, readTasks, TaskFileError, type TaskOrError } from './tasks/read-task.ts';

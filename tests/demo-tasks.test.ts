@@ -6,7 +6,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { checkProgram } from '../src/language/checker.ts';
 import { parseProgram } from '../src/language/parser.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { readTaskFile } from '../src/tasks/read-task.ts';
 import { describeDifference, runOnTask } from '../src/tasks/run-on-task.ts';
 

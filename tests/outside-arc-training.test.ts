@@ -16,7 +16,7 @@ import { checkProgram } from '../src/language/checker.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { runProgram } from '../src/language/interpreter.ts';
 import { parseProgram } from '../src/language/parser.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { readTaskFile } from '../src/tasks/read-task.ts';
 
 const repoRoot = resolve(fileURLToPath(new URL('.', import.meta.url)), '..');

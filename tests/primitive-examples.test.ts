@@ -6,7 +6,7 @@ import { isFailure } from '../src/language/failure.ts';
 import { evaluateExpression } from '../src/language/interpreter.ts';
 import { parseExpression } from '../src/language/parser.ts';
 import type { Expression } from '../src/language/ast.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import type { Type } from '../src/language/types.ts';
 
 function callsOf(e: Expression): string[] {

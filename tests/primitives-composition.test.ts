@@ -5,13 +5,13 @@ import { compositionPrimitives } from '../dsl/composition.ts';
 import { backgroundColour, components } from '../src/grid/components.ts';
 import { EMPTY, Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
-import { GridObject } from '../src/language/grid-object.ts';
+import { GridObject } from '../src/grid/grid-object.ts';
 import { evaluateExpression } from '../src/language/interpreter.ts';
 import { parseExpression } from '../src/language/parser.ts';
 import { Point } from '../src/language/point.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { Library } from '../src/library/library.ts';
-import { applyPrimitive } from '../src/library/primitive.ts';
+import { applyOperation } from '../src/language/operation.ts';
 import { arbitraryGrid, arbitraryGridPair } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
 
@@ -19,7 +19,7 @@ const library = new Library(compositionPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
   const p = library.get(name);
   if (!p) throw new Error(`tests/primitives-composition.test.ts: no primitive named '${name}'`);
-  return applyPrimitive(p, args);
+  return applyOperation(p, args);
 }
 function grid(name: string, ...args: unknown[]): Grid {
   const result = apply(name, ...args);

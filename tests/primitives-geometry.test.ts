@@ -8,9 +8,9 @@ import { FAILURE } from '../src/language/failure.ts';
 import { evaluateExpression } from '../src/language/interpreter.ts';
 import { parseExpression } from '../src/language/parser.ts';
 import { Point } from '../src/language/point.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { Library } from '../src/library/library.ts';
-import { applyPrimitive } from '../src/library/primitive.ts';
+import { applyOperation } from '../src/language/operation.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
 
@@ -18,7 +18,7 @@ const library = new Library(geometryPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
   const p = library.get(name);
   if (!p) throw new Error(`tests/primitives-geometry.test.ts: no primitive named '${name}'`);
-  return applyPrimitive(p, args);
+  return applyOperation(p, args);
 }
 function grid(name: string, ...args: unknown[]): Grid {
   const result = apply(name, ...args);

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { EMPTY, Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
-import { GridObject } from '../src/language/grid-object.ts';
+import { GridObject } from '../src/grid/grid-object.ts';
 import { arbitraryColour, arbitraryGrid } from './support/arbitrary-grid.ts';
 import { callPrimitive } from './support/run-primitive.ts';
 import { backgroundOf } from './support/background-oracle.ts';

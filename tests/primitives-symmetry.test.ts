@@ -5,8 +5,8 @@ import { symmetryPrimitives } from '../dsl/symmetry.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { Library } from '../src/library/library.ts';
-import { applyPrimitive } from '../src/library/primitive.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { applyOperation } from '../src/language/operation.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { evaluateExpression } from '../src/language/interpreter.ts';
 import { parseExpression } from '../src/language/parser.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
@@ -15,7 +15,7 @@ const library = new Library(symmetryPrimitives);
 function apply(name: string, ...args: unknown[]): unknown {
   const p = library.get(name);
   if (!p) throw new Error(`tests/primitives-symmetry.test.ts: no primitive named '${name}'`);
-  return applyPrimitive(p, args);
+  return applyOperation(p, args);
 }
 function grid(name: string, g: Grid): Grid {
   const result = apply(name, g);

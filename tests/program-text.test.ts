@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { checkProgram, ProgramTypeError } from '../src/language/checker.ts';
 import { parseProgram, ProgramSyntaxError } from '../src/language/parser.ts';
 import { printProgram } from '../src/language/printer.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { programArbitrary } from './support/random-program.ts';
 
 describe('printing and parsing programs', () => {

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { checkProgram } from '../src/language/checker.ts';
 import { parseProgram } from '../src/language/parser.ts';
 import { printProgram } from '../src/language/printer.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { readTaskFile } from '../src/tasks/read-task.ts';
 import { runOnTask } from '../src/tasks/run-on-task.ts';
 

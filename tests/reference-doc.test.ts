@@ -1,7 +1,7 @@
 // dsl/REFERENCE.md must be exactly what the generator gives for the current primitive records.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { referenceDocument, signature } from '../src/output/reference.ts';
 
 describe('the primitive reference document', () => {

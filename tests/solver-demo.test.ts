@@ -4,7 +4,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseProgram } from '../src/language/parser.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { taskConstants } from '../src/search/constants.ts';
 import { programBits } from '../src/search/description-length.ts';
 import { solvePuzzle } from '../src/search/solve.ts';

@@ -7,7 +7,7 @@ import { Grid } from '../src/grid/grid.ts';
 import type { Expression, Program } from '../src/language/ast.ts';
 import { isFailure } from '../src/language/failure.ts';
 import { runProgram } from '../src/language/interpreter.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import type { Primitive } from '../src/library/primitive.ts';
 import { taskConstants } from '../src/search/constants.ts';
 import { programBits } from '../src/search/description-length.ts';

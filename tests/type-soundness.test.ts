@@ -7,7 +7,7 @@ import { FAILURE } from '../src/language/failure.ts';
 import { runProgram } from '../src/language/interpreter.ts';
 import { isBaseType } from '../src/language/types.ts';
 import { valueHasType } from '../src/language/value-identity.ts';
-import { defaultLibrary } from '../src/library/default-library.ts';
+import { defaultLibrary } from '../dsl/index.ts';
 import { Library } from '../src/library/library.ts';
 import type { Primitive } from '../src/library/primitive.ts';
 import { printProgram } from '../src/language/printer.ts';

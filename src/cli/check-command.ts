@@ -1,6 +1,6 @@
 /** `pithy check PROGRAM`: parse and type-check a program file, printing each step's type. */
 import type { Command } from 'commander';
-import { defaultLibrary } from '../library/default-library.ts';
+import { defaultLibrary } from '../../dsl/index.ts';
 import { formatProblem, loadProgramFile, ProgramFileError } from './program-file.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 

@@ -1,6 +1,6 @@
 /** `pithy primitives`: the primitive library, grouped by category, as text, markdown or JSON. */
 import type { Command } from 'commander';
-import { defaultLibrary } from '../library/default-library.ts';
+import { defaultLibrary } from '../../dsl/index.ts';
 import { primitivesByCategory, referenceDocument, signature } from '../output/reference.ts';
 import { writeJson, writeLines } from './output.ts';
 

@@ -3,7 +3,7 @@
  * output; prints pass/fail per pair and, for a failure, where the answer first differs.
  */
 import type { Command } from 'commander';
-import { defaultLibrary } from '../library/default-library.ts';
+import { defaultLibrary } from '../../dsl/index.ts';
 import { describeValue, valueToData } from '../output/describe-value.ts';
 import { drawPair } from '../output/terminal-grid.ts';
 import { readTasks } from '../tasks/read-task.ts';

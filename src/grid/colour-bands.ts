@@ -4,9 +4,8 @@
  * column).
  */
 import { Grid } from './grid.ts';
-import { FAILURE, type Failure } from '../language/failure.ts';
 
-export function colourBands(g: Grid): Grid | Failure {
+export function colourBands(g: Grid): Grid | null {
   const { height, width, cells } = g;
   const count = new Float64Array(10);
   const rowSum = new Float64Array(10);
@@ -22,7 +21,7 @@ export function colourBands(g: Grid): Grid | Failure {
   }
   const colours: number[] = [];
   for (let v = 1; v < 10; v++) if (count[v]! > 0) colours.push(v);
-  if (colours.length === 0) return FAILURE;
+  if (colours.length === 0) return null;
   const meanRow = (v: number) => rowSum[v]! / count[v]!;
   const meanColumn = (v: number) => columnSum[v]! / count[v]!;
   const spread = (mean: (v: number) => number) => {

@@ -1,6 +1,6 @@
 /** All the cells of one colour gathered into a single object, wherever they lie. */
 import { EMPTY, Grid } from './grid.ts';
-import { GridObject } from '../language/grid-object.ts';
+import { GridObject } from './grid-object.ts';
 import { cellBounds } from './crop.ts';
 
 /** The object made of every cell of `colour`, or undefined when the grid has none. */

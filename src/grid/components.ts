@@ -4,7 +4,7 @@
  * colour.
  */
 import { EMPTY, Grid } from './grid.ts';
-import { GridObject } from '../language/grid-object.ts';
+import { GridObject } from './grid-object.ts';
 
 export interface ComponentOptions {
   readonly diagonal: boolean;

@@ -4,7 +4,6 @@
  */
 import { backgroundColour } from './components.ts';
 import { Grid, shapeAllowed } from './grid.ts';
-import { FAILURE, type Failure } from '../language/failure.ts';
 
 /** Whether column c equals column c + p for every c with c + p < known (rows when `rows`). */
 function linesRepeat(g: Grid, p: number, known: number, rows: boolean): boolean {
@@ -26,8 +25,8 @@ function smallestPeriod(g: Grid, known: number, rows: boolean): number {
 }
 
 /** The grid grown (or cut) to height × width by continuing its smallest row and column periods. */
-export function extendPatternToSize(g: Grid, height: number, width: number): Grid | Failure {
-  if (!Number.isInteger(height) || !Number.isInteger(width) || !shapeAllowed(height, width)) return FAILURE;
+export function extendPatternToSize(g: Grid, height: number, width: number): Grid | null {
+  if (!Number.isInteger(height) || !Number.isInteger(width) || !shapeAllowed(height, width)) return null;
   const rowPeriod = smallestPeriod(g, g.height, true);
   const columnPeriod = smallestPeriod(g, g.width, false);
   const out = new Uint8Array(height * width);

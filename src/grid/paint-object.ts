@@ -2,7 +2,7 @@
  * Drawing objects into a cell buffer: painting an object's cells at its position, or
  * clearing the cells it covers; cells that fall outside the buffer are dropped.
  */
-import type { GridObject } from '../language/grid-object.ts';
+import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid } from './grid.ts';
 
 /**

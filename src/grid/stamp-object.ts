@@ -2,7 +2,7 @@
  * Stamping a template object onto markers: every region of a marker colour (cells joined
  * through edges or corners) is cleared and the template is drawn centred on it.
  */
-import type { GridObject } from '../language/grid-object.ts';
+import type { GridObject } from './grid-object.ts';
 import { backgroundColour, components } from './components.ts';
 import { EMPTY, Grid } from './grid.ts';
 

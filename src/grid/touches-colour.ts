@@ -1,5 +1,5 @@
 /** Whether an object has a neighbour (edge or corner) of a colour on a grid, outside itself. */
-import type { GridObject } from '../language/grid-object.ts';
+import type { GridObject } from './grid-object.ts';
 import { EMPTY, type Grid } from './grid.ts';
 
 export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {

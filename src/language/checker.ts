@@ -3,7 +3,7 @@
  * that is ill-typed, naming the step, the expected type and the found type.
  */
 import type { Expression, Program } from './ast.ts';
-import type { Library } from '../library/library.ts';
+import type { OperationLookup } from './operation.ts';
 import { functionType, isBaseType, splitFunctionType, type BaseType, type Type } from './types.ts';
 
 export interface TypeProblem {
@@ -42,7 +42,7 @@ class Problem extends Error {
   }
 }
 
-function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Library): Type {
+function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: OperationLookup): Type {
   switch (e.kind) {
     case 'variable': {
       const t = scope.get(e.name);
@@ -85,7 +85,7 @@ function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Librar
   }
 }
 
-function typeOfArgument(arg: Expression, want: Type, scope: ReadonlyMap<string, Type>, library: Library): Type {
+function typeOfArgument(arg: Expression, want: Type, scope: ReadonlyMap<string, Type>, library: OperationLookup): Type {
   if (arg.kind === 'call' && arg.arguments.length > 0 && arg.arguments[0]!.kind === 'hole' && splitFunctionType(want) === undefined) {
     throw new Problem('a section (a call with _) is only allowed where a function is expected', want, 'a section');
   }
@@ -93,7 +93,7 @@ function typeOfArgument(arg: Expression, want: Type, scope: ReadonlyMap<string, 
 }
 
 /** Returns the type of every step and of the answer, or throws ProgramTypeError. */
-export function checkProgram(program: Program, library: Library): { steps: Map<string, Type>; answer: Type } {
+export function checkProgram(program: Program, library: OperationLookup): { steps: Map<string, Type>; answer: Type } {
   const scope = new Map<string, Type>([[program.input, 'Grid']]);
   const problems: TypeProblem[] = [];
   const seen = new Set<string>([program.input]);
@@ -123,7 +123,7 @@ export function checkProgram(program: Program, library: Library): { steps: Map<s
 }
 
 /** The type of a lone expression over a scope (for worked examples). */
-export function checkExpression(e: Expression, scope: ReadonlyMap<string, Type>, library: Library): Type {
+export function checkExpression(e: Expression, scope: ReadonlyMap<string, Type>, library: OperationLookup): Type {
   try {
     return typeOf(e, scope, library);
   } catch (error) {

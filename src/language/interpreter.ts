@@ -3,12 +3,11 @@
  * that cannot apply yields FAILURE, which flows on to the answer; an exception inside a
  * primitive is caught and becomes FAILURE too, so nothing escapes.
  */
-import { Grid, shapeAllowed } from '../grid/grid.ts';
-import type { Library } from '../library/library.ts';
-import { applyPrimitive, type Primitive } from '../library/primitive.ts';
+import { Grid } from '../grid/grid.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 import { checkProgram } from './checker.ts';
 import { FAILURE, type Failure } from './failure.ts';
+import { applyOperation, sectionOf, type OperationLookup } from './operation.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
 import type { Type } from './types.ts';
@@ -40,19 +39,7 @@ export function literalValue(l: LiteralValue): unknown {
   }
 }
 
-/** Applies a primitive, turning exceptions and over-cap grids into FAILURE. */
-export function safeApply(p: Primitive, args: readonly unknown[]): unknown {
-  for (let i = 0; i < args.length; i++) if (args[i] === FAILURE) return FAILURE;
-  try {
-    const result = applyPrimitive(p, args);
-    if (result instanceof Grid && !shapeAllowed(result.height, result.width)) return FAILURE;
-    return result;
-  } catch {
-    return FAILURE;
-  }
-}
-
-export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unknown>, library: Library): unknown {
+export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unknown>, library: OperationLookup): unknown {
   switch (e.kind) {
     case 'variable':
       return env.has(e.name) ? env.get(e.name) : FAILURE;
@@ -65,10 +52,10 @@ export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unkno
       if (!p) return FAILURE;
       if (e.arguments.length > 0 && e.arguments[0]!.kind === 'hole') {
         const bound = e.arguments.slice(1).map((a) => evaluateExpression(a, env, library));
-        return (x: unknown) => safeApply(p, [x, ...bound]);
+        return sectionOf(p, bound);
       }
       const args = e.arguments.map((a) => evaluateExpression(a, env, library));
-      return safeApply(p, args);
+      return applyOperation(p, args);
     }
   }
 }
@@ -77,7 +64,7 @@ export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unkno
  * Runs `program` on `input`. The program is type-checked first (a ProgramTypeError is thrown
  * for an ill-typed one); after that, running never throws.
  */
-export function runProgram(program: Program, input: Grid, library: Library, options: { trace?: boolean } = {}): RunResult {
+export function runProgram(program: Program, input: Grid, library: OperationLookup, options: { trace?: boolean } = {}): RunResult {
   const types = checkProgram(program, library);
   const env = new Map<string, unknown>([[program.input, input]]);
   const trace: TraceEntry[] = [];

@@ -5,7 +5,7 @@
  * Types are plain strings so signatures are data a search can index.
  */
 import type { Grid } from '../grid/grid.ts';
-import type { GridObject } from './grid-object.ts';
+import type { GridObject } from '../grid/grid-object.ts';
 import type { Palette } from './palette.ts';
 import type { Point } from './point.ts';
 import type { Failure } from './failure.ts';

@@ -3,7 +3,7 @@
  * candidates that compute the same thing, and by tests to compare results.
  */
 import { Grid } from '../grid/grid.ts';
-import { GridObject } from './grid-object.ts';
+import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
 import { FAILURE } from './failure.ts';

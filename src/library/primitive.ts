@@ -3,6 +3,7 @@
  * document need to know about one primitive, in one place.
  */
 import type { Failure } from '../language/failure.ts';
+import type { Operation } from '../language/operation.ts';
 import type { Type, ValueOf } from '../language/types.ts';
 
 export const CATEGORIES = [
@@ -42,17 +43,12 @@ export interface WorkedExample {
 
 type ValuesOf<P extends readonly Type[]> = { [K in keyof P]: P[K] extends Type ? ValueOf<P[K]> : never };
 
-export interface Primitive {
-  readonly name: string;
+export interface Primitive extends Operation {
   readonly category: Category;
-  readonly parameters: readonly Type[];
-  readonly result: Type;
   /** Description-length prior in bits: what one use of the primitive costs a program. */
   readonly bits: number;
   readonly doc: string;
   readonly example: WorkedExample;
-  /** Pure; returns FAILURE when it cannot apply. Arguments arrive already type-checked. */
-  readonly run: (...args: never[]) => unknown;
 }
 
 /** Declares a primitive with its implementation typed from its signature. */
@@ -64,12 +60,7 @@ export function primitive<const P extends readonly Type[], const R extends Type>
   bits: number;
   doc: string;
   example: WorkedExample;
-  run: (...args: ValuesOf<P>) => ValueOf<R> | Failure;
+  run: (...args: ValuesOf<P>) => ValueOf<R> | Failure | null;
 }): Primitive {
   return record as unknown as Primitive;
-}
-
-/** Calls a primitive's implementation with untyped arguments (interpreter and search). */
-export function applyPrimitive(p: Primitive, args: readonly unknown[]): unknown {
-  return (p.run as (...a: unknown[]) => unknown)(...args);
 }

@@ -4,7 +4,7 @@
  */
 import { EMPTY, Grid } from '../grid/grid.ts';
 import { isFailure } from '../language/failure.ts';
-import { GridObject } from '../language/grid-object.ts';
+import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { Point } from '../language/point.ts';
 import type { Type } from '../language/types.ts';

@@ -4,8 +4,9 @@
  * some input or equal (on all inputs) a candidate already kept for their type. A Grid-valued
  * candidate equal to every demonstration output is a solution.
  */
-import { Grid, shapeAllowed } from '../grid/grid.ts';
+import type { Grid } from '../grid/grid.ts';
 import { FAILURE } from '../language/failure.ts';
+import { applyOperation, sectionOf } from '../language/operation.ts';
 import { literalValue } from '../language/interpreter.ts';
 import type { Expression } from '../language/ast.ts';
 import type { Type } from '../language/types.ts';
@@ -116,42 +117,28 @@ export function enumerate(
 
   const args: Candidate[] = [];
   const scratch = new Array<unknown>(examples);
+  /** One reused argument array per arity. */
+  const callScratch: unknown[][] = [];
   let reason: StopReason = 'exhausted';
 
   const evaluate = (production: Production, cost: number): void => {
     stats.candidates++;
     if ((stats.candidates & 1023) === 0) checkBudget();
-    const run = production.primitive.run as (...a: unknown[]) => unknown;
+    const operation = production.primitive;
     const values = scratch;
     const arity = args.length;
+    const call = (callScratch[arity] ??= new Array<unknown>(arity));
     if (production.section) {
       for (let i = 0; i < examples; i++) {
         const bound = new Array<unknown>(arity);
         for (let j = 0; j < arity; j++) bound[j] = args[j]!.values[i];
-        values[i] = (x: unknown) => {
-          try {
-            return run(x, ...bound);
-          } catch {
-            return FAILURE;
-          }
-        };
+        values[i] = sectionOf(operation, bound);
       }
     } else {
-      const a0 = args[0]?.values;
-      const a1 = args[1]?.values;
-      const a2 = args[2]?.values;
       for (let i = 0; i < examples; i++) {
-        let v: unknown;
-        try {
-          if (arity === 1) v = run(a0![i]);
-          else if (arity === 2) v = run(a0![i], a1![i]);
-          else if (arity === 3) v = run(a0![i], a1![i], a2![i]);
-          else if (arity === 0) v = run();
-          else v = run(...args.map((a) => a.values[i]));
-        } catch {
-          v = FAILURE;
-        }
-        if (v === FAILURE || v === undefined || (v instanceof Grid && !shapeAllowed(v.height, v.width))) {
+        for (let j = 0; j < arity; j++) call[j] = args[j]!.values[i];
+        const v = applyOperation(operation, call);
+        if (v === FAILURE) {
           stats.failed++;
           return;
         }

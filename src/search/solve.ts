@@ -5,7 +5,7 @@
 import type { Grid } from '../grid/grid.ts';
 import type { Program } from '../language/ast.ts';
 import { printProgram } from '../language/printer.ts';
-import { defaultLibrary } from '../library/default-library.ts';
+import { defaultLibrary } from '../../dsl/index.ts';
 import type { Library } from '../library/library.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { taskConstants } from './constants.ts';

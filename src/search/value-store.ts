@@ -6,7 +6,7 @@
  */
 import type { Expression } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
-import { GridObject } from '../language/grid-object.ts';
+import { GridObject } from '../grid/grid-object.ts';
 import { splitFunctionType, type BaseType, type Type } from '../language/types.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
 import type { Production } from './productions.ts';

@@ -3,7 +3,7 @@
  * whether it passed and, if not, where the answer first differs from the expected grid.
  */
 import type { Grid } from '../grid/grid.ts';
-import type { Library } from '../library/library.ts';
+import type { OperationLookup } from '../language/operation.ts';
 import type { Program } from '../language/ast.ts';
 import { isFailure } from '../language/failure.ts';
 import { runProgram, type TraceEntry } from '../language/interpreter.ts';
@@ -59,7 +59,7 @@ export function describeDifference(d: Difference): string {
  * Runs a (type-checked) program on every train pair and every test pair that has an output.
  * Throws ProgramTypeError for an ill-typed program; never throws while running.
  */
-export function runOnTask(program: Program, task: Task, library: Library, options: { trace?: boolean } = {}): PairResult[] {
+export function runOnTask(program: Program, task: Task, library: OperationLookup, options: { trace?: boolean } = {}): PairResult[] {
   const cases: { set: 'train' | 'test'; index: number; input: Grid; expected: Grid }[] = [];
   task.train.forEach((p, index) => cases.push({ set: 'train', index, input: p.input, expected: p.output }));
   task.test.forEach((t, index) => {

@@ -5,14 +5,14 @@
 import { Grid } from '../../src/grid/grid.ts';
 import { evaluateExpression } from '../../src/language/interpreter.ts';
 import { parseExpression } from '../../src/language/parser.ts';
-import { defaultLibrary } from '../../src/library/default-library.ts';
-import { applyPrimitive } from '../../src/library/primitive.ts';
+import { defaultLibrary } from '../../dsl/index.ts';
+import { applyOperation } from '../../src/language/operation.ts';
 
 /** Calls the named primitive of the default library with already-built arguments. */
 export function callPrimitive(name: string, ...args: unknown[]): unknown {
   const p = defaultLibrary.get(name);
   if (!p) throw new Error(`tests/support/run-primitive.ts: callPrimitive: no primitive named '${name}' in the default library`);
-  return applyPrimitive(p, args);
+  return applyOperation(p, args);
 }
 
 /** Evaluates an expression of the language with `grid` bound to the given grid. */

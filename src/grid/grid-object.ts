@@ -2,7 +2,7 @@
  * An object: a set of coloured cells at a position on a larger grid. Its `shape` grid is the
  * bounding box, with EMPTY where a cell is not part of the object.
  */
-import { EMPTY, Grid } from '../grid/grid.ts';
+import { EMPTY, Grid } from './grid.ts';
 
 export class GridObject {
   readonly top: number;
