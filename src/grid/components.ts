@@ -15,20 +15,27 @@ export interface ComponentOptions {
 }
 
 /**
- * Results already computed, per grid instance and options. Grids never change, so a result
- * stays valid for the grid's lifetime; the search asks for the same grid's objects many times
- * (each extractor, and primitives that work object by object).
+ * Bytes of analyses memoised on grids since the process started (components and colour
+ * counts), so that a memory budget can count what the caches hold.
  */
-const cache = new WeakMap<Grid, Map<number, readonly GridObject[]>>();
+let analysisBytes = 0;
+
+export function analysisBytesSoFar(): number {
+  return analysisBytes;
+}
 
 /** Objects in reading order of their first cell (top row first, then left). Callers must not change the list. */
 export function components(grid: Grid, options: ComponentOptions): readonly GridObject[] {
   const key = (options.diagonal ? 1 : 0) | (options.multicolour ? 2 : 0) | ((options.background + 2) << 2);
-  let forGrid = cache.get(grid);
-  const known = forGrid?.get(key);
+  // Kept with the grid: the search asks for the same grid's objects many times (each
+  // extractor, and primitives that work object by object).
+  let forGrid = grid.componentsMemo;
+  const known = forGrid?.get(key) as readonly GridObject[] | undefined;
   if (known) return known;
   const found = computeComponents(grid, options);
-  if (!forGrid) cache.set(grid, (forGrid = new Map()));
+  analysisBytes += 96 + 8 * found.length;
+  for (const o of found) analysisBytes += 200 + o.shape.cells.length;
+  if (!forGrid) grid.componentsMemo = forGrid = new Map();
   forGrid.set(key, found);
   return found;
 }
@@ -95,9 +102,11 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
   return objects;
 }
 
-/** Counts of each colour 0–9. */
+/** Counts of each colour 0–9, computed once per grid; callers must not change the array. */
 export function colourCounts(grid: Grid): Uint32Array {
-  const counts = new Uint32Array(10);
+  if (grid.colourCountsMemo) return grid.colourCountsMemo;
+  const counts = (grid.colourCountsMemo = new Uint32Array(10));
+  analysisBytes += 112;
   const cells = grid.cells;
   for (let i = 0; i < cells.length; i++) {
     const v = cells[i]!;
@@ -112,9 +121,9 @@ export function colourCounts(grid: Grid): Uint32Array {
  * empty ones); otherwise the most frequent colour, the lowest on ties.
  */
 export function backgroundColour(grid: Grid): number {
+  if (grid.backgroundMemo >= 0) return grid.backgroundMemo;
   const counts = colourCounts(grid);
-  if (counts[0]! > 0) return 0;
   let best = 0;
-  for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
-  return best;
+  if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
+  return (grid.backgroundMemo = best);
 }

@@ -32,6 +32,15 @@ export class Grid {
   /** Row-major cells; callers must not mutate a grid after construction. */
   readonly cells: Uint8Array;
   readonly hash: number;
+  /**
+   * Analyses computed once and kept with the grid (grids never change): colour counts, the
+   * background colour, connected components by options. Filled lazily by src/grid's analysis
+   * functions; a field rather than a WeakMap, because weak tables cost the garbage collector
+   * time on every collection and the search makes millions of grids.
+   */
+  colourCountsMemo: Uint32Array | undefined = undefined;
+  backgroundMemo = -1;
+  componentsMemo: Map<number, unknown> | undefined = undefined;
 
   /** Takes ownership of `cells` (length height × width). */
   constructor(height: number, width: number, cells: Uint8Array) {

@@ -3,15 +3,23 @@
  * of smaller cost, evaluated on every example input at once, and kept unless they fail on
  * some input or equal (on all inputs) a candidate already kept for their type. A Grid-valued
  * candidate equal to every demonstration output is a solution.
+ *
+ * The `Enumerator` class keeps each step in its own method (leaves, one cost level, filling
+ * argument slots, evaluating, offering to the store, budgets) so that a profile names them.
+ * Types are integer ids here (type-table.ts), and each production knows, per argument
+ * position, the cheapest cost its remaining arguments can have.
  */
+import { analysisBytesSoFar } from '../grid/components.ts';
 import type { Grid } from '../grid/grid.ts';
-import { FAILURE } from '../language/failure.ts';
-import { applyOperation, sectionOf } from '../language/operation.ts';
-import { literalValue } from '../language/interpreter.ts';
 import type { Expression } from '../language/ast.ts';
+import { FAILURE } from '../language/failure.ts';
+import { literalValue } from '../language/interpreter.ts';
+import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
+import { SectionProbes } from './section-probes.ts';
+import { TypeTable } from './type-table.ts';
 import { ValueStore, type Candidate } from './value-store.ts';
 
 export type StopReason = 'solved' | 'time' | 'candidates' | 'memory' | 'exhausted';
@@ -20,7 +28,7 @@ export interface EnumerationLimits {
   /** Wall-clock deadline (performance.now() value). */
   readonly deadline: number;
   readonly maxCandidates: number;
-  /** Cap on the approximate bytes of values held by the store. */
+  /** Cap on the bytes of values held by the store (cells, objects, memoised analyses). */
   readonly maxStoreBytes: number;
   readonly maxCost: number;
   /** How many solutions with distinct test outputs to collect. */
@@ -37,6 +45,8 @@ export interface EnumerationStatistics {
   kept: number;
   /** Dropped as observationally equivalent to a kept candidate. */
   pruned: number;
+  /** Of the pruned, sections dropped for behaving like a kept section on the probes. */
+  sectionsPruned: number;
   /** Dropped because they failed on some input. */
   failed: number;
   /** Highest cost level finished. */
@@ -57,6 +67,232 @@ class Stop extends Error {
   }
 }
 
+/** A production as the loop sees it: argument and result types as ids. */
+interface Rule {
+  readonly production: Production;
+  readonly argumentTypes: Int32Array;
+  readonly resultType: number;
+  readonly bits: number;
+  /** [position] → cheapest total cost of the arguments after it; refreshed each level. */
+  readonly restMinimum: Float64Array;
+}
+
+export class Enumerator {
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0 };
+  private readonly types = new TypeTable();
+  private readonly rules: Rule[];
+  private readonly leaves: Candidate[] = [];
+  private readonly store: ValueStore;
+  private readonly probes: SectionProbes;
+  private readonly solutions: Candidate[] = [];
+  private readonly examples: number;
+  private readonly trainCount: number;
+  private readonly gridType: number;
+  private readonly started = performance.now();
+  private readonly analysisBytesAtStart = analysisBytesSoFar();
+  private deadline: number;
+  private firstSolutionCost = Infinity;
+  /** Argument slots being filled. */
+  private readonly args: Candidate[] = [];
+  /** Values of the candidate being evaluated (copied when kept). */
+  private readonly scratch: unknown[];
+  /** One reused argument array per arity. */
+  private readonly callScratch: unknown[][] = [];
+
+  constructor(
+    inputs: readonly Grid[],
+    private readonly outputs: readonly Grid[],
+    constants: readonly Constant[],
+    productions: readonly Production[],
+    private readonly limits: EnumerationLimits,
+    inputName = 'grid',
+  ) {
+    this.examples = inputs.length;
+    this.trainCount = outputs.length;
+    this.scratch = new Array<unknown>(this.examples);
+    this.deadline = limits.deadline;
+    this.gridType = this.types.id('Grid');
+    this.rules = productions.map((production) => ({
+      production,
+      argumentTypes: Int32Array.from(production.argumentTypes, (t) => this.types.id(t)),
+      resultType: this.types.id(production.result),
+      bits: production.bits,
+      restMinimum: new Float64Array(production.argumentTypes.length + 1),
+    }));
+    this.leaves.push(this.leaf('Grid', 1, inputs, { kind: 'variable', name: inputName }));
+    for (const c of constants) {
+      const value = literalValue(c.literal);
+      this.leaves.push(this.leaf(c.literal.type, c.bits, new Array(this.examples).fill(value), { kind: 'literal', literal: c.literal }));
+    }
+    this.leaves.sort((a, b) => a.cost - b.cost);
+    const names: Type[] = [];
+    for (let t = 0; t < this.types.size; t++) names.push(this.types.type(t));
+    this.store = new ValueStore(limits.pruning, names, this.types.isFunction);
+    this.probes = new SectionProbes(inputs);
+  }
+
+  private leaf(type: Type, cost: number, values: readonly unknown[], expression: Expression): Candidate {
+    return { type, typeId: this.types.id(type), cost, values, production: undefined, arguments: [], leaf: expression, signature: undefined };
+  }
+
+  /** Runs cost level after cost level until a budget runs out or enough solutions are found. */
+  run(): EnumerationOutcome {
+    let reason: StopReason = 'exhausted';
+    try {
+      let nextLeaf = 0;
+      for (let cost = 1; cost <= this.limits.maxCost; cost++) {
+        if (this.solutions.length > 0 && cost > this.firstSolutionCost + this.limits.extraBits) break;
+        while (nextLeaf < this.leaves.length && this.leaves[nextLeaf]!.cost === cost) {
+          const leaf = this.leaves[nextLeaf++]!;
+          this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
+        }
+        this.expandLevel(cost);
+        this.statistics.costReached = cost;
+        this.checkBudget();
+      }
+    } catch (error) {
+      if (!(error instanceof Stop)) throw error;
+      reason = error.reason;
+    }
+    if (this.solutions.length > 0) reason = 'solved';
+    return { solutions: this.solutions, reason, statistics: this.statistics };
+  }
+
+  /** Every production whose bits and cheapest arguments fit in this cost. */
+  private expandLevel(cost: number): void {
+    this.refreshMinimums();
+    const args = this.args;
+    for (let r = 0; r < this.rules.length; r++) {
+      const rule = this.rules[r]!;
+      const remaining = cost - rule.bits;
+      if (remaining < 0 || rule.restMinimum[0]! > remaining) continue;
+      args.length = 0;
+      if (rule.argumentTypes.length === 0) {
+        if (remaining === 0) this.evaluate(rule, cost);
+        continue;
+      }
+      this.fill(rule, 0, remaining, cost);
+    }
+  }
+
+  private refreshMinimums(): void {
+    for (let r = 0; r < this.rules.length; r++) {
+      const rule = this.rules[r]!;
+      const types = rule.argumentTypes;
+      let sum = 0;
+      rule.restMinimum[types.length] = 0;
+      for (let j = types.length - 1; j >= 0; j--) {
+        sum += this.store.cheapest(types[j]!);
+        rule.restMinimum[j] = sum;
+      }
+    }
+  }
+
+  /** Chooses the argument at `position` from each cost that leaves room for the rest. */
+  private fill(rule: Rule, position: number, remaining: number, cost: number): void {
+    const types = rule.argumentTypes;
+    const type = types[position]!;
+    const last = position === types.length - 1;
+    const low = last ? remaining : this.store.cheapest(type);
+    const high = last ? remaining : remaining - rule.restMinimum[position + 1]!;
+    const args = this.args;
+    for (let c = low; c <= high; c++) {
+      const bucket = this.store.at(type, c);
+      for (let k = 0; k < bucket.length; k++) {
+        args[position] = bucket[k]!;
+        if (last) this.evaluate(rule, cost);
+        else this.fill(rule, position + 1, remaining - c, cost);
+      }
+    }
+    args.length = position;
+  }
+
+  /** Applies the rule's primitive to the chosen arguments on every example input. */
+  private evaluate(rule: Rule, cost: number): void {
+    const stats = this.statistics;
+    stats.candidates++;
+    if ((stats.candidates & 1023) === 0) this.checkBudget();
+    const operation = rule.production.primitive;
+    const values = this.scratch;
+    const args = this.args;
+    const arity = rule.argumentTypes.length;
+    if (rule.production.section) {
+      for (let i = 0; i < this.examples; i++) {
+        const bound = new Array<unknown>(arity);
+        for (let j = 0; j < arity; j++) bound[j] = args[j]!.values[i];
+        values[i] = sectionOf(operation, bound);
+      }
+      const signature = this.limits.pruning ? this.probes.signature(rule.production.result, values) : undefined;
+      this.offer(rule.resultType, cost, values, rule.production, undefined, signature);
+      return;
+    }
+    const call = (this.callScratch[arity] ??= new Array<unknown>(arity));
+    for (let i = 0; i < this.examples; i++) {
+      for (let j = 0; j < arity; j++) call[j] = args[j]!.values[i];
+      const v = applyOperation(operation, call);
+      if (v === FAILURE) {
+        stats.failed++;
+        return;
+      }
+      values[i] = v;
+    }
+    this.offer(rule.resultType, cost, values, rule.production, undefined, undefined);
+  }
+
+  /** Keeps a candidate unless an equal one is kept; `values` may be scratch (copied when kept). */
+  private offer(typeId: number, cost: number, values: readonly unknown[], production: Production | undefined, leaf: Expression | undefined, signature: unknown[] | undefined): void {
+    const store = this.store;
+    const hash = store.hashOf(typeId, values, signature);
+    if (store.has(typeId, hash, values, signature)) {
+      this.statistics.pruned++;
+      if (signature) this.statistics.sectionsPruned++;
+      return;
+    }
+    const candidate: Candidate = {
+      type: production ? production.result : this.types.type(typeId),
+      typeId,
+      cost,
+      values: values.slice(),
+      production,
+      arguments: production ? this.args.slice() : [],
+      leaf,
+      signature,
+    };
+    store.add(candidate, hash);
+    this.statistics.kept++;
+    if (typeId === this.gridType) this.checkSolution(candidate);
+  }
+
+  /** A kept grid candidate equal to every demonstration output is a solution. */
+  private checkSolution(candidate: Candidate): void {
+    const values = candidate.values;
+    for (let i = 0; i < this.trainCount; i++) if (!(values[i] as Grid).equals(this.outputs[i]!)) return;
+    // Attempts must differ on the test inputs (pruning guarantees it; without pruning, check).
+    if (!this.limits.pruning && this.solutions.some((s) => sameTestOutputs(s.values, values, this.trainCount))) return;
+    this.solutions.push(candidate);
+    if (this.solutions.length === 1) {
+      this.firstSolutionCost = candidate.cost;
+      const now = performance.now();
+      this.statistics.secondsToFirstSolution = (now - this.started) / 1000;
+      // Further attempts get as long again as the first took (at least a second), within the limit.
+      this.deadline = Math.min(this.deadline, now + Math.max(1000, now - this.started));
+    }
+    if (this.solutions.length >= this.limits.attempts) throw new Stop('solved');
+  }
+
+  /** Bytes held: the store's values plus what grids memoised since the search began. */
+  get bytesHeld(): number {
+    return this.store.bytes + (analysisBytesSoFar() - this.analysisBytesAtStart);
+  }
+
+  private checkBudget(): void {
+    if (performance.now() > this.deadline) throw new Stop('time');
+    if (this.statistics.candidates >= this.limits.maxCandidates) throw new Stop('candidates');
+    if (this.bytesHeld >= this.limits.maxStoreBytes) throw new Stop('memory');
+  }
+}
+
+/** Enumerates programs for the examples; see {@link Enumerator}. */
 export function enumerate(
   inputs: readonly Grid[],
   outputs: readonly Grid[],
@@ -65,149 +301,7 @@ export function enumerate(
   limits: EnumerationLimits,
   inputName = 'grid',
 ): EnumerationOutcome {
-  const store = new ValueStore(limits.pruning);
-  const stats: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, failed: 0, costReached: 0 };
-  const solutions: Candidate[] = [];
-  const examples = inputs.length;
-  const trainCount = outputs.length;
-  let firstSolutionCost = Infinity;
-  const started = performance.now();
-  let deadline = limits.deadline;
-
-  /** Keeps a candidate unless an equal one is kept; `values` may be a scratch array (copied when kept). */
-  const offer = (type: Type, cost: number, values: readonly unknown[], production: Production | undefined, parts: readonly Candidate[], leaf: Expression | undefined): void => {
-    const hash = ValueStore.hashValues(type, values);
-    if (store.has(type, hash, values)) {
-      stats.pruned++;
-      return;
-    }
-    const candidate: Candidate = { type, cost, values: values.slice(), production, arguments: parts.slice(), leaf };
-    store.add(candidate, hash);
-    stats.kept++;
-    if (type === 'Grid') {
-      for (let i = 0; i < trainCount; i++) if (!(values[i] as Grid).equals(outputs[i]!)) return;
-      // Attempts must differ on the test inputs (pruning guarantees it; without pruning, check).
-      if (!limits.pruning && solutions.some((s) => sameTestOutputs(s.values, values, trainCount))) return;
-      solutions.push(candidate);
-      if (solutions.length === 1) {
-        firstSolutionCost = cost;
-        stats.secondsToFirstSolution = (performance.now() - started) / 1000;
-        // Further attempts get as long again as the first took (at least a second), within the limit.
-        const now = performance.now();
-        deadline = Math.min(deadline, now + Math.max(1000, now - started));
-      }
-      if (solutions.length >= limits.attempts) throw new Stop('solved');
-    }
-  };
-
-  const checkBudget = (): void => {
-    if (performance.now() > deadline) throw new Stop('time');
-    if (stats.candidates >= limits.maxCandidates) throw new Stop('candidates');
-    if (store.bytes >= limits.maxStoreBytes) throw new Stop('memory');
-  };
-
-  // Leaves: the input grid and the task's constants.
-  const leaves: Candidate[] = [
-    { type: 'Grid', cost: 1, values: inputs, production: undefined, arguments: [], leaf: { kind: 'variable', name: inputName } },
-  ];
-  for (const c of constants) {
-    const value = literalValue(c.literal);
-    leaves.push({ type: c.literal.type, cost: c.bits, values: new Array(examples).fill(value), production: undefined, arguments: [], leaf: { kind: 'literal', literal: c.literal } });
-  }
-
-  const args: Candidate[] = [];
-  const scratch = new Array<unknown>(examples);
-  /** One reused argument array per arity. */
-  const callScratch: unknown[][] = [];
-  let reason: StopReason = 'exhausted';
-
-  const evaluate = (production: Production, cost: number): void => {
-    stats.candidates++;
-    if ((stats.candidates & 1023) === 0) checkBudget();
-    const operation = production.primitive;
-    const values = scratch;
-    const arity = args.length;
-    const call = (callScratch[arity] ??= new Array<unknown>(arity));
-    if (production.section) {
-      for (let i = 0; i < examples; i++) {
-        const bound = new Array<unknown>(arity);
-        for (let j = 0; j < arity; j++) bound[j] = args[j]!.values[i];
-        values[i] = sectionOf(operation, bound);
-      }
-    } else {
-      for (let i = 0; i < examples; i++) {
-        for (let j = 0; j < arity; j++) call[j] = args[j]!.values[i];
-        const v = applyOperation(operation, call);
-        if (v === FAILURE) {
-          stats.failed++;
-          return;
-        }
-        values[i] = v;
-      }
-    }
-    offer(production.result, cost, values, production, args, undefined);
-  };
-
-  const fill = (production: Production, position: number, remaining: number, cost: number): void => {
-    const types = production.argumentTypes;
-    if (position === types.length) {
-      if (remaining === 0) evaluate(production, cost);
-      return;
-    }
-    const type = types[position]!;
-    let restMinimum = 0;
-    for (let j = position + 1; j < types.length; j++) restMinimum += minimumCost.get(types[j]!) ?? Infinity;
-    const low = minimumCost.get(type) ?? Infinity;
-    const high = position === types.length - 1 ? remaining : remaining - restMinimum;
-    for (let c = position === types.length - 1 ? remaining : low; c <= high; c++) {
-      const bucket = store.at(type, c);
-      for (let k = 0; k < bucket.length; k++) {
-        args[position] = bucket[k]!;
-        fill(production, position + 1, remaining - c, cost);
-      }
-    }
-    args.length = position;
-  };
-
-  const minimumCost = new Map<string, number>();
-  const refreshMinimums = (): void => {
-    for (const p of productions) {
-      for (const t of [...p.argumentTypes, p.result]) minimumCost.set(t, store.cheapest(t));
-    }
-  };
-
-  try {
-    const byCost = [...leaves].sort((a, b) => a.cost - b.cost);
-    let nextLeaf = 0;
-    for (let cost = 1; cost <= limits.maxCost; cost++) {
-      if (solutions.length > 0 && cost > firstSolutionCost + limits.extraBits) break;
-      while (nextLeaf < byCost.length && byCost[nextLeaf]!.cost === cost) {
-        const leaf = byCost[nextLeaf++]!;
-        offer(leaf.type, leaf.cost, leaf.values, undefined, [], leaf.leaf);
-      }
-      refreshMinimums();
-      for (const production of productions) {
-        const remaining = cost - production.bits;
-        if (remaining < 0) continue;
-        args.length = 0;
-        if (production.argumentTypes.length === 0) {
-          if (remaining === 0) evaluate(production, cost);
-          continue;
-        }
-        let minimum = 0;
-        for (const t of production.argumentTypes) minimum += minimumCost.get(t) ?? Infinity;
-        if (minimum > remaining) continue;
-        fill(production, 0, remaining, cost);
-      }
-      stats.costReached = cost;
-      checkBudget();
-    }
-  } catch (error) {
-    if (!(error instanceof Stop)) throw error;
-    reason = error.reason;
-  }
-  if (solutions.length > 0) reason = 'solved';
-  return { solutions, reason, statistics: stats };
+  return new Enumerator(inputs, outputs, constants, productions, limits, inputName).run();
 }
 
 function sameTestOutputs(a: readonly unknown[], b: readonly unknown[], from: number): boolean {

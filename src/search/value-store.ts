@@ -1,18 +1,21 @@
 /**
- * What the search has kept: for each type, the candidates found so far, bucketed by cost, each
- * with its values on every example input. A candidate whose values equal a kept one of the
- * same type is observationally equivalent and is dropped (the kept one is never dearer, since
- * candidates arrive in order of cost).
+ * What the search has kept: for each type (by integer id), the candidates found so far,
+ * bucketed by cost, each with its values on every example input. A candidate whose values
+ * equal a kept one of the same type is observationally equivalent and is dropped (the kept one
+ * is never dearer, since candidates arrive in order of cost). Sections are compared by their
+ * behavioural signature (see section-probes.ts).
  */
 import type { Expression } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
 import { GridObject } from '../grid/grid-object.ts';
-import { splitFunctionType, type BaseType, type Type } from '../language/types.ts';
+import type { BaseType, Type } from '../language/types.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
 import type { Production } from './productions.ts';
+import { SectionProbes } from './section-probes.ts';
 
 export interface Candidate {
   readonly type: Type;
+  readonly typeId: number;
   readonly cost: number;
   /** One value per example input: the demonstration inputs, then the test inputs. */
   readonly values: readonly unknown[];
@@ -20,78 +23,108 @@ export interface Candidate {
   readonly arguments: readonly Candidate[];
   /** For leaves (the input, a constant): the expression itself. */
   readonly leaf: Expression | undefined;
+  /** For sections: the results on the probe arguments, compared instead of the values. */
+  readonly signature: readonly unknown[] | undefined;
 }
 
-function approximateBytes(value: unknown): number {
-  if (value instanceof Grid) return 96 + value.cells.length;
-  if (value instanceof GridObject) return 160 + value.shape.cells.length;
+/**
+ * Bytes a value holds, counted honestly enough to bound memory: object headers and the cells
+ * of grids (typed arrays live outside the JavaScript heap limit). What grids memoise (colour
+ * counts, components) is counted where it is made (`analysisBytes` in src/grid/components.ts).
+ */
+export function approximateBytes(value: unknown): number {
+  if (value instanceof Grid) return gridBytes(value);
+  if (value instanceof GridObject) return 64 + gridBytes(value.shape);
   if (Array.isArray(value)) {
     let sum = 48 + 8 * value.length;
     for (const v of value) sum += approximateBytes(v);
     return sum;
   }
+  if (typeof value === 'function') return 96;
   return 16;
 }
 
+function gridBytes(g: Grid): number {
+  return 120 + g.cells.length;
+}
+
+const EMPTY_LIST: readonly Candidate[] = [];
+
 export class ValueStore {
-  private readonly buckets = new Map<Type, Candidate[][]>();
-  private readonly byHash = new Map<Type, Map<number, Candidate | Candidate[]>>();
+  /** [type id][cost] → candidates. */
+  private readonly buckets: Candidate[][][] = [];
+  private readonly byHash: Map<number, Candidate | Candidate[]>[] = [];
+  /** [type id] → cheapest cost kept, or Infinity. */
+  private readonly cheapestCost: number[] = [];
   count = 0;
   bytes = 0;
 
-  constructor(readonly pruning: boolean) {}
+  constructor(
+    readonly pruning: boolean,
+    /** [type id] → the type's name, and whether it is a function type. */
+    private readonly typeNames: readonly Type[],
+    private readonly isFunction: readonly boolean[],
+  ) {
+    for (let t = 0; t < typeNames.length; t++) {
+      this.buckets.push([]);
+      this.byHash.push(new Map());
+      this.cheapestCost.push(Infinity);
+    }
+  }
 
   /** Candidates of a type at exactly this cost (empty when none). */
-  at(type: Type, cost: number): readonly Candidate[] {
-    return this.buckets.get(type)?.[cost] ?? EMPTY_LIST;
+  at(typeId: number, cost: number): readonly Candidate[] {
+    return this.buckets[typeId]![cost] ?? EMPTY_LIST;
   }
 
   /** Cheapest cost with a candidate of this type, or Infinity. */
-  cheapest(type: Type): number {
-    const list = this.buckets.get(type);
-    if (!list) return Infinity;
-    for (let c = 0; c < list.length; c++) if (list[c] && list[c]!.length > 0) return c;
-    return Infinity;
+  cheapest(typeId: number): number {
+    return this.cheapestCost[typeId]!;
   }
 
-  /** Hash of a tuple of values, or 0 for function types (never deduplicated). */
-  static hashValues(type: Type, values: readonly unknown[]): number {
-    if (splitFunctionType(type)) return 0;
+  /** Hash of a tuple of values (base types) or of a section's signature. */
+  hashOf(typeId: number, values: readonly unknown[], signature: readonly unknown[] | undefined): number {
+    const type = this.typeNames[typeId]!;
+    if (this.isFunction[typeId]) return signature ? SectionProbes.hash(type, signature) : 0;
     let h = 0x9747b28c;
     for (let i = 0; i < values.length; i++) h = Math.imul(h ^ hashValue(type as BaseType, values[i]), 0x5bd1e995) ^ (h >>> 15);
     return h >>> 0;
   }
 
-  /** True when a candidate with equal values is already kept. */
-  has(type: Type, hash: number, values: readonly unknown[]): boolean {
-    if (!this.pruning || splitFunctionType(type)) return false;
-    const slot = this.byHash.get(type)?.get(hash);
+  /** True when a candidate with equal values (or, for a section, an equal signature) is kept. */
+  has(typeId: number, hash: number, values: readonly unknown[], signature: readonly unknown[] | undefined): boolean {
+    if (!this.pruning) return false;
+    const isFunction = this.isFunction[typeId]!;
+    if (isFunction && !signature) return false;
+    const slot = this.byHash[typeId]!.get(hash);
     if (slot === undefined) return false;
+    const type = this.typeNames[typeId]!;
+    const same = (c: Candidate): boolean => (isFunction ? SectionProbes.equal(type, c.signature!, signature!) : sameValues(type as BaseType, c.values, values));
     if (Array.isArray(slot)) {
-      for (const c of slot) if (sameValues(type as BaseType, c.values, values)) return true;
+      for (const c of slot) if (same(c)) return true;
       return false;
     }
-    return sameValues(type as BaseType, (slot as Candidate).values, values);
+    return same(slot as Candidate);
   }
 
   add(candidate: Candidate, hash: number): void {
-    let list = this.buckets.get(candidate.type);
-    if (!list) this.buckets.set(candidate.type, (list = []));
+    const typeId = candidate.typeId;
+    const list = this.buckets[typeId]!;
     while (list.length <= candidate.cost) list.push([]);
     list[candidate.cost]!.push(candidate);
+    if (candidate.cost < this.cheapestCost[typeId]!) this.cheapestCost[typeId] = candidate.cost;
     this.count++;
+    this.bytes += 160;
     for (const v of candidate.values) this.bytes += approximateBytes(v);
-    if (!this.pruning || splitFunctionType(candidate.type)) return;
-    let table = this.byHash.get(candidate.type);
-    if (!table) this.byHash.set(candidate.type, (table = new Map()));
+    if (candidate.signature) this.bytes += 8 * candidate.signature.length;
+    if (!this.pruning || (this.isFunction[typeId] && !candidate.signature)) return;
+    const table = this.byHash[typeId]!;
     const slot = table.get(hash);
     if (slot === undefined) table.set(hash, candidate);
     else if (Array.isArray(slot)) slot.push(candidate);
     else table.set(hash, [slot as Candidate, candidate]);
   }
 }
-
-const EMPTY_LIST: readonly Candidate[] = [];
 
 function sameValues(type: BaseType, a: readonly unknown[], b: readonly unknown[]): boolean {
   for (let i = 0; i < a.length; i++) if (!valuesEqual(type, a[i], b[i])) return false;

@@ -1,0 +1,76 @@
+/**
+ * `npm run bench:speed`: how many candidates the search evaluates per second of CPU time, on a
+ * fixed sample of the public training set (ARC-AGI-1, F. Chollet 2019, Apache-2.0, read from
+ * ../shared/datasets/arc-agi-1-training/) at a fixed candidate cap per task, in this process,
+ * one task after another. A candidate cap instead of a time limit makes the work the same on
+ * every run, so the figure compares two versions of the search, and the programs found can be
+ * compared too (`--programs FILE` writes them as JSON lines: task, program text, bits).
+ *
+ *   npm run bench:speed -- [--tasks N] [--candidates N] [--dataset DIR] [--programs FILE]
+ */
+import { existsSync, writeFileSync } from 'node:fs';
+import { cpus } from 'node:os';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { Command } from 'commander';
+import { positiveNumber } from '../cli/solve-options.ts';
+import { solvePuzzle } from '../search/solve.ts';
+import { readTaskFile, taskFiles } from '../tasks/read-task.ts';
+import { puzzleOf } from '../tasks/task.ts';
+
+const repoRoot = resolve(dirname(fileURLToPath(import.meta.url)), '..', '..');
+const defaultDataset = resolve(repoRoot, '..', 'shared', 'datasets', 'arc-agi-1-training');
+
+/** Every k-th task in file-name order, so the sample spreads over the whole set. */
+export function spreadSample<T>(items: readonly T[], count: number): T[] {
+  if (count >= items.length) return items.slice();
+  const out: T[] = [];
+  for (let i = 0; i < count; i++) out.push(items[Math.floor((i * items.length) / count)]!);
+  return out;
+}
+
+function main(): void {
+  const program = new Command()
+    .name('bench:speed')
+    .description('candidate evaluations per CPU second at a fixed candidate cap, one task at a time')
+    .option('--tasks <n>', 'tasks in the sample (spread over the set)', positiveNumber('--tasks', true), 30)
+    .option('--candidates <n>', 'candidate cap per task', positiveNumber('--candidates', true), 300_000)
+    .option('--dataset <dir>', 'task directory', defaultDataset)
+    .option('--programs <file>', 'write each task\'s programs as JSON lines')
+    .parse(process.argv);
+  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string }>();
+  if (!existsSync(options.dataset)) {
+    process.stderr.write(`${options.dataset}: not found; the speed probe needs the public training set there (see ../shared/datasets/arc-agi-1-training/SOURCE.md)\n`);
+    process.exitCode = 2;
+    return;
+  }
+  const files = spreadSample(taskFiles(options.dataset), options.tasks);
+  let candidates = 0;
+  let cpuSeconds = 0;
+  let pruned = 0;
+  const lines: string[] = [];
+  for (const file of files) {
+    const puzzle = puzzleOf(readTaskFile(file));
+    const before = process.cpuUsage();
+    const result = solvePuzzle(puzzle, { maxCandidates: options.candidates, timeLimitSeconds: 3600 });
+    const used = process.cpuUsage(before);
+    cpuSeconds += (used.user + used.system) / 1e6;
+    candidates += result.statistics.candidates;
+    pruned += result.statistics.pruned;
+    lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits })) }));
+    process.stderr.write('.');
+  }
+  process.stderr.write('\n');
+  if (options.programs) writeFileSync(options.programs, lines.join('\n') + '\n');
+  process.stdout.write(
+    [
+      `tasks: ${files.length} spread over ${options.dataset}; cap ${options.candidates} candidates per task; one process; ${cpus()[0]?.model ?? 'unknown CPU'}`,
+      `candidates evaluated: ${candidates}`,
+      `CPU seconds: ${cpuSeconds.toFixed(2)}`,
+      `candidate evaluations per CPU second: ${Math.round(candidates / cpuSeconds)}`,
+      `share pruned as equivalent: ${((100 * pruned) / Math.max(1, candidates)).toFixed(1)}%`,
+    ].join('\n') + '\n',
+  );
+}
+
+main();
