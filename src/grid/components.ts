@@ -5,6 +5,7 @@
  */
 import { EMPTY, Grid } from './grid.ts';
 import { GridObject } from './grid-object.ts';
+import { backgroundOfCounts } from './most-frequent-colour.ts';
 
 export interface ComponentOptions {
   readonly diagonal: boolean;
@@ -112,9 +113,5 @@ export function colourCounts(grid: Grid): Uint32Array {
  * empty ones); otherwise the most frequent colour, the lowest on ties.
  */
 export function backgroundColour(grid: Grid): number {
-  const counts = colourCounts(grid);
-  if (counts[0]! > 0) return 0;
-  let best = 0;
-  for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
-  return best;
+  return backgroundOfCounts(colourCounts(grid));
 }
