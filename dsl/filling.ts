@@ -4,7 +4,7 @@
  */
 import { backgroundColour, components } from '../src/grid/components.ts';
 import { Grid } from '../src/grid/grid.ts';
-import { enclosedCells } from '../src/grid/holes.ts';
+import { fillEnclosed } from '../src/grid/holes.ts';
 import { completeRepeatingPattern } from '../src/grid/repeating-pattern.ts';
 import { FAILURE, type Failure } from '../src/language/failure.ts';
 import type { Point } from '../src/language/point.ts';
@@ -13,15 +13,6 @@ import { markNeighbours } from '../src/grid/neighbour-marks.ts';
 import { linesThroughColour } from '../src/grid/lines-through-cells.ts';
 import { connectAlong } from '../src/grid/connect-along.ts';
 import { fillGapsBySize } from '../src/grid/gaps-by-size.ts';
-
-export function fillEnclosed(g: Grid, colour: number): Grid {
-  const background = backgroundColour(g);
-  if (colour === background) return g;
-  const enclosed = enclosedCells(g, background);
-  const out = g.cells.slice();
-  for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
-  return new Grid(g.height, g.width, out);
-}
 
 /** A straight (row, column) or diagonal line between two cells of the grid, both ends included. */
 export function drawLine(g: Grid, from: Point, to: Point, colour: number): Grid | Failure {

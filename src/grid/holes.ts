@@ -1,8 +1,14 @@
 /**
  * Holes: regions of cells that belong to no object (EMPTY in a shape, or the background in a
- * grid) which cannot reach the outer border through edge steps.
+ * grid) which cannot reach the outer border through edge steps; counting them, taking them as
+ * objects, filling them.
  */
-import { Grid } from './grid.ts';
+import { backgroundColour, components } from './components.ts';
+import type { GridObject } from './grid-object.ts';
+import { EMPTY, Grid } from './grid.ts';
+
+/** Marks cells that are in no region; never a colour and never EMPTY. */
+const OUTSIDE = 10;
 
 /**
  * Marks, in a new array, the cells of colour `open` that are enclosed: not connected to the
@@ -63,4 +69,35 @@ export function countEnclosedRegions(grid: Grid, open: number): number {
     }
   }
   return regions;
+}
+
+/** Regions of background cells (edge neighbours) that cannot reach the border, in reading order. */
+export function enclosedRegions(grid: Grid): readonly GridObject[] {
+  const background = backgroundColour(grid);
+  const enclosed = enclosedCells(grid, background);
+  const cells = new Uint8Array(enclosed.length);
+  let any = false;
+  for (let i = 0; i < enclosed.length; i++) {
+    if (enclosed[i]) {
+      cells[i] = background;
+      any = true;
+    } else cells[i] = OUTSIDE;
+  }
+  if (!any) return [];
+  return components(new Grid(grid.height, grid.width, cells), { diagonal: false, multicolour: false, background: OUTSIDE });
+}
+
+/** Background cells that cannot reach the border through background cells (edge steps) take the colour. */
+export function fillEnclosed(g: Grid, colour: number): Grid {
+  const background = backgroundColour(g);
+  if (colour === background) return g;
+  const enclosed = enclosedCells(g, background);
+  const out = g.cells.slice();
+  for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
+  return new Grid(g.height, g.width, out);
+}
+
+/** How many separate gaps the object closes in: regions of its box, not its cells, that cannot reach the box's edge. */
+export function holeCount(o: GridObject): number {
+  return countEnclosedRegions(o.shape, EMPTY);
 }
