@@ -10,7 +10,7 @@ import { primitive } from '../src/library/primitive.ts';
 export const objectRulePrimitives = [
   primitive({
     name: 'recolour_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool', 'Colour'],
     result: 'Grid',
     bits: 6,
@@ -24,7 +24,7 @@ export const objectRulePrimitives = [
   }),
   primitive({
     name: 'erase_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool'],
     result: 'Grid',
     bits: 6,
@@ -38,7 +38,7 @@ export const objectRulePrimitives = [
   }),
   primitive({
     name: 'keep_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool'],
     result: 'Grid',
     bits: 6,
