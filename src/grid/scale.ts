@@ -17,45 +17,51 @@ export function scaleUp(g: Grid, k: number): Grid | null {
   return new Grid(height * k, outWidth, out);
 }
 
-/** Every k×k block, which must be of one colour, becomes one cell; null when the grid does not divide into such blocks. */
-export function scaleDown(g: Grid, k: number): Grid | null {
+/**
+ * The grid of k×k blocks, each block one cell whose colour `blockColour` gives from the index of
+ * the block's top-left cell (-1: the block has none, and the whole shrink fails); null when k is
+ * not a count up to 10 or the sides do not divide by it.
+ */
+function shrinkBlocks(g: Grid, k: number, blockColour: (corner: number) => number): Grid | null {
   if (!isCount(k, MOST_COPIES)) return null;
-  const { height, width, cells } = g;
+  const { height, width } = g;
   if (height % k !== 0 || width % k !== 0) return null;
   const h = height / k;
   const w = width / k;
   const out = new Uint8Array(h * w);
   for (let r = 0; r < h; r++) {
     for (let c = 0; c < w; c++) {
-      const v = cells[r * k * width + c * k]!;
-      for (let i = 0; i < k; i++) {
-        const base = (r * k + i) * width + c * k;
-        for (let j = 0; j < k; j++) if (cells[base + j] !== v) return null;
-      }
+      const v = blockColour(r * k * width + c * k);
+      if (v < 0) return null;
       out[r * w + c] = v;
     }
   }
   return new Grid(h, w, out);
 }
 
+/** Every k×k block, which must be of one colour, becomes one cell; null when the grid does not divide into such blocks. */
+export function scaleDown(g: Grid, k: number): Grid | null {
+  const { width, cells } = g;
+  return shrinkBlocks(g, k, (corner) => {
+    const v = cells[corner]!;
+    for (let i = 0; i < k; i++) {
+      const base = corner + i * width;
+      for (let j = 0; j < k; j++) if (cells[base + j] !== v) return -1;
+    }
+    return v;
+  });
+}
+
 /** Every k×k block becomes one cell of its most frequent colour (the lowest on ties); null when the sides do not divide by k. */
 export function majorityScaleDown(g: Grid, k: number): Grid | null {
-  if (!isCount(k, MOST_COPIES)) return null;
-  const { height, width, cells } = g;
-  if (height % k !== 0 || width % k !== 0) return null;
-  const h = height / k;
-  const w = width / k;
-  const out = new Uint8Array(h * w);
-  const counts = new Uint32Array(256);
-  for (let r = 0; r < h; r++) {
-    for (let c = 0; c < w; c++) {
-      counts.fill(0);
-      for (let i = 0; i < k; i++) {
-        const base = (r * k + i) * width + c * k;
-        for (let j = 0; j < k; j++) counts[cells[base + j]!]!++;
-      }
-      out[r * w + c] = mostFrequentColour(counts);
+  const { width, cells } = g;
+  const counts = new Uint32Array(10);
+  return shrinkBlocks(g, k, (corner) => {
+    counts.fill(0);
+    for (let i = 0; i < k; i++) {
+      const base = corner + i * width;
+      for (let j = 0; j < k; j++) counts[cells[base + j]!]!++;
     }
-  }
-  return new Grid(h, w, out);
+    return mostFrequentColour(counts);
+  });
 }
