@@ -11,6 +11,23 @@ import { EMPTY, Grid } from './grid.ts';
 const OUTSIDE = 10;
 
 /**
+ * A flood through edge steps over a height × width array of marks: from the first `tail` cells
+ * in `queue` (already marked), every cell reached through cells marked `from` is marked `to`.
+ */
+function spread(mark: Uint8Array, height: number, width: number, queue: Int32Array, tail: number, from: number, to: number): void {
+  let head = 0;
+  while (head < tail) {
+    const i = queue[head++]!;
+    const r = (i / width) | 0;
+    const c = i - r * width;
+    if (r > 0 && mark[i - width] === from) (mark[i - width] = to), (queue[tail++] = i - width);
+    if (r < height - 1 && mark[i + width] === from) (mark[i + width] = to), (queue[tail++] = i + width);
+    if (c > 0 && mark[i - 1] === from) (mark[i - 1] = to), (queue[tail++] = i - 1);
+    if (c < width - 1 && mark[i + 1] === from) (mark[i + 1] = to), (queue[tail++] = i + 1);
+  }
+}
+
+/**
  * Marks, in a new array, the cells of colour `open` that are enclosed: not connected to the
  * border by edge steps through cells of that colour (1 = enclosed).
  */
@@ -31,16 +48,7 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
       queue[tail++] = i;
     }
   }
-  let head = 0;
-  while (head < tail) {
-    const i = queue[head++]!;
-    const r = (i / width) | 0;
-    const c = i - r * width;
-    if (r > 0 && mark[i - width] === 1) { mark[i - width] = 2; queue[tail++] = i - width; }
-    if (r < height - 1 && mark[i + width] === 1) { mark[i + width] = 2; queue[tail++] = i + width; }
-    if (c > 0 && mark[i - 1] === 1) { mark[i - 1] = 2; queue[tail++] = i - 1; }
-    if (c < width - 1 && mark[i + 1] === 1) { mark[i + 1] = 2; queue[tail++] = i + 1; }
-  }
+  spread(mark, height, width, queue, tail, 1, 2);
   for (let i = 0; i < n; i++) mark[i] = mark[i] === 1 ? 1 : 0;
   return mark;
 }
@@ -55,18 +63,8 @@ export function countEnclosedRegions(grid: Grid, open: number): number {
     if (mark[start] !== 1) continue;
     regions++;
     mark[start] = 0;
-    let head = 0;
-    let tail = 0;
-    queue[tail++] = start;
-    while (head < tail) {
-      const i = queue[head++]!;
-      const r = (i / width) | 0;
-      const c = i - r * width;
-      if (r > 0 && mark[i - width] === 1) { mark[i - width] = 0; queue[tail++] = i - width; }
-      if (r < height - 1 && mark[i + width] === 1) { mark[i + width] = 0; queue[tail++] = i + width; }
-      if (c > 0 && mark[i - 1] === 1) { mark[i - 1] = 0; queue[tail++] = i - 1; }
-      if (c < width - 1 && mark[i + 1] === 1) { mark[i + 1] = 0; queue[tail++] = i + 1; }
-    }
+    queue[0] = start;
+    spread(mark, height, width, queue, 1, 1, 0);
   }
   return regions;
 }
