@@ -2,114 +2,12 @@
  * Composition primitives: painting and erasing objects, moving and mirroring objects,
  * layering grids over each other, and cell-wise masks of two grids.
  */
-import { backgroundColour } from '../src/grid/components.ts';
-import { Grid, getSizeCap } from '../src/grid/grid.ts';
-import { paintObjectInto } from '../src/grid/paint-object.ts';
-import { FAILURE, type Failure } from '../src/language/failure.ts';
-import { GridObject } from '../src/grid/grid-object.ts';
-import type { Point } from '../src/language/point.ts';
-import { primitive } from '../src/library/primitive.ts';
-import { flipLeftRight, flipUpDown } from './symmetry.ts';
+import { MASK_RULES, mask } from '../src/grid/mask.ts';
+import { reflectObjectLeftRight, reflectObjectUpDown, shiftObject } from '../src/grid/object-transforms.ts';
+import { overlay, overlayAll } from '../src/grid/overlay.ts';
+import { eraseObjects, keepOnlyObject, mapObjects, paintObjects } from '../src/grid/paint-object.ts';
 import { stampObjectOnColour } from '../src/grid/stamp-object.ts';
-
-export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
-  const out = g.cells.slice();
-  for (const o of objects) paintObjectInto(out, g.height, g.width, o);
-  return new Grid(g.height, g.width, out);
-}
-
-export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
-  const background = backgroundColour(g);
-  const out = g.cells.slice();
-  for (const o of objects) paintObjectInto(out, g.height, g.width, o, background);
-  return new Grid(g.height, g.width, out);
-}
-
-/** The grid with every cell outside the object turned to background. */
-export function keepOnlyObject(g: Grid, object: GridObject): Grid {
-  const out = new Uint8Array(g.cells.length).fill(backgroundColour(g));
-  paintObjectInto(out, g.height, g.width, object);
-  return new Grid(g.height, g.width, out);
-}
-
-export function overlay(bottom: Grid, top: Grid, transparent: number): Grid | Failure {
-  if (bottom.height !== top.height || bottom.width !== top.width) return FAILURE;
-  const out = bottom.cells.slice();
-  const cells = top.cells;
-  for (let i = 0; i < out.length; i++) if (cells[i] !== transparent) out[i] = cells[i]!;
-  return new Grid(bottom.height, bottom.width, out);
-}
-
-/**
- * Stacks the grids in order; later cells that are not the shared background win. The shared
- * background is black when any grid holds black, else the most frequent colour over all grids.
- */
-export function overlayAll(grids: readonly Grid[]): Grid | Failure {
-  if (grids.length === 0) return FAILURE;
-  const { height, width } = grids[0]!;
-  const counts = new Uint32Array(10);
-  for (const g of grids) {
-    if (g.height !== height || g.width !== width) return FAILURE;
-    for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
-  }
-  // The shared background, by the same rule as backgroundColour: black when any cell is black.
-  let background = 0;
-  if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
-  const out = grids[0]!.cells.slice();
-  for (let k = 1; k < grids.length; k++) {
-    const cells = grids[k]!.cells;
-    for (let i = 0; i < out.length; i++) if (cells[i] !== background) out[i] = cells[i]!;
-  }
-  return new Grid(height, width, out);
-}
-
-/** Which pairs (first filled, second filled) give the colour, as bits: both, first only, second only, neither. */
-const MASK_RULES = {
-  both: 0b1000,
-  either: 0b1110,
-  exactlyOne: 0b0110,
-  neither: 0b0001,
-} as const;
-
-/**
- * Cell-wise mask of two same-sized grids: a cell is "filled" when it is not 0; the result
- * has the colour where the rule holds and 0 elsewhere.
- */
-export function mask(a: Grid, b: Grid, colour: number, rule: number): Grid | Failure {
-  if (a.height !== b.height || a.width !== b.width) return FAILURE;
-  const out = new Uint8Array(a.cells.length);
-  const x = a.cells;
-  const y = b.cells;
-  for (let i = 0; i < out.length; i++) {
-    const first = x[i] !== 0;
-    const second = y[i] !== 0;
-    const bit = first ? (second ? 0b1000 : 0b0100) : second ? 0b0010 : 0b0001;
-    if (rule & bit) out[i] = colour;
-  }
-  return new Grid(a.height, a.width, out);
-}
-
-export function mapObjects(g: Grid, objects: readonly GridObject[], transform: (o: GridObject) => GridObject | Failure): Grid | Failure {
-  const background = backgroundColour(g);
-  const out = g.cells.slice();
-  const moved: GridObject[] = [];
-  for (const o of objects) {
-    paintObjectInto(out, g.height, g.width, o, background);
-    const t = transform(o);
-    if (t === FAILURE) return FAILURE;
-    moved.push(t);
-  }
-  for (const o of moved) paintObjectInto(out, g.height, g.width, o);
-  return new Grid(g.height, g.width, out);
-}
-
-export function moveObject(o: GridObject, offset: Point): GridObject | Failure {
-  const far = 2 * getSizeCap();
-  const top = o.top + offset.row;
-  const left = o.left + offset.column;
-  if (Math.abs(top) > far || Math.abs(left) > far) return FAILURE;
-  return new GridObject(top, left, o.shape);
-}
+import { primitive } from '../src/library/primitive.ts';
 
 const MASKS = [
   ['mask_both', MASK_RULES.both, 'both grids are filled', [[3, 0, 0, 0]]],
@@ -259,7 +157,7 @@ export const compositionPrimitives = [
       expression: 'map_objects(grid, objects_by_colour(grid), move_object(_, (1, 2)))',
       output: [[0, 0, 0], [0, 0, 3]],
     },
-    run: moveObject,
+    run: (o, offset) => shiftObject(o, offset.row, offset.column),
   }),
   primitive({
     name: 'reflect_object_horizontally',
@@ -273,7 +171,7 @@ export const compositionPrimitives = [
       expression: 'map_objects(grid, objects_multicolour(grid), reflect_object_horizontally(_))',
       output: [[0, 0, 0, 0], [0, 2, 1, 0], [0, 0, 1, 0]],
     },
-    run: (o) => new GridObject(o.top, o.left, flipLeftRight(o.shape)),
+    run: reflectObjectLeftRight,
   }),
   primitive({
     name: 'reflect_object_vertically',
@@ -287,7 +185,7 @@ export const compositionPrimitives = [
       expression: 'map_objects(grid, objects_multicolour(grid), reflect_object_vertically(_))',
       output: [[0, 0, 0, 0], [0, 1, 0, 0], [0, 1, 2, 0]],
     },
-    run: (o) => new GridObject(o.top, o.left, flipUpDown(o.shape)),
+    run: reflectObjectUpDown,
   }),
   primitive({
     name: 'overlay_all_first_on_top',

@@ -1,15 +1,9 @@
 /** Counting and comparison: counts of objects, colours and cells; small arithmetic; choice. */
+import { countColours } from '../src/grid/colour-ranking.ts';
 import { backgroundColour, colourCounts } from '../src/grid/components.ts';
 import { Grid, shapeAllowed } from '../src/grid/grid.ts';
-import { FAILURE } from '../src/language/failure.ts';
+import { boundedWholeNumber } from '../src/grid/whole-numbers.ts';
 import { primitive } from '../src/library/primitive.ts';
-
-/** Arithmetic results beyond this size fail: no puzzle quantity comes near it. */
-const INT_LIMIT = 10_000;
-
-function bounded(n: number): number | typeof FAILURE {
-  return Number.isInteger(n) && n >= -INT_LIMIT && n <= INT_LIMIT ? n : FAILURE;
-}
 
 export const countingPrimitives = [
   primitive({
@@ -40,13 +34,7 @@ export const countingPrimitives = [
     bits: 5,
     doc: 'How many different non-background colours the grid has.',
     example: { input: [[0, 2, 0], [5, 2, 0]], expression: 'count_colours(grid)', output: 2 },
-    run: (g) => {
-      const counts = colourCounts(g);
-      const background = backgroundColour(g);
-      let n = 0;
-      for (let c = 0; c < 10; c++) if (c !== background && counts[c]! > 0) n++;
-      return n;
-    },
+    run: countColours,
   }),
   primitive({
     name: 'count_cells',
@@ -66,7 +54,7 @@ export const countingPrimitives = [
     bits: 6,
     doc: 'The sum of two numbers.',
     example: { input: [[1, 0, 1], [0, 0, 0]], expression: 'add(count_objects(objects_by_colour(grid)), 3)', output: 5 },
-    run: (a, b) => bounded(a + b),
+    run: (a, b) => boundedWholeNumber(a + b),
   }),
   primitive({
     name: 'subtract',
@@ -76,7 +64,7 @@ export const countingPrimitives = [
     bits: 6,
     doc: 'The first number minus the second.',
     example: { input: [[1, 0, 1], [0, 0, 0]], expression: 'subtract(5, count_objects(objects_by_colour(grid)))', output: 3 },
-    run: (a, b) => bounded(a - b),
+    run: (a, b) => boundedWholeNumber(a - b),
   }),
   primitive({
     name: 'multiply',
@@ -86,7 +74,7 @@ export const countingPrimitives = [
     bits: 7,
     doc: 'The product of two numbers.',
     example: { input: [[1, 0, 1], [0, 0, 0]], expression: 'multiply(count_objects(objects_by_colour(grid)), 3)', output: 6 },
-    run: (a, b) => bounded(a * b),
+    run: (a, b) => boundedWholeNumber(a * b),
   }),
   primitive({
     name: 'is_greater',
@@ -126,6 +114,6 @@ export const countingPrimitives = [
     bits: 6,
     doc: 'A new grid of the given height and width filled with the colour; fails beyond the size cap.',
     example: { input: [[1, 0, 1], [0, 0, 0]], expression: 'grid_of_size(1, count_objects(objects_by_colour(grid)), #4)', output: [[4, 4]] },
-    run: (height, width, colour) => (Number.isInteger(height) && Number.isInteger(width) && shapeAllowed(height, width) ? Grid.filled(height, width, colour) : FAILURE),
+    run: (height, width, colour) => (Number.isInteger(height) && Number.isInteger(width) && shapeAllowed(height, width) ? Grid.filled(height, width, colour) : null),
   }),
 ];

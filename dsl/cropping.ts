@@ -1,49 +1,16 @@
 /** Cropping: cutting out the content, an object's box, a given region, or a half of the grid. */
 import { backgroundColour } from '../src/grid/components.ts';
-import { cellBounds, cropGrid } from '../src/grid/crop.ts';
-import { EMPTY, Grid, shapeAllowed } from '../src/grid/grid.ts';
-import type { GridObject } from '../src/grid/grid-object.ts';
-import { FAILURE, type Failure } from '../src/language/failure.ts';
+import {
+  cropRegion,
+  cropToCells,
+  cropToColourIn,
+  cropToObject,
+  half,
+  keepMiddleLine,
+  objectPicture,
+  removeBorder,
+} from '../src/grid/crop.ts';
 import { primitive } from '../src/library/primitive.ts';
-
-/** The bounding box of the cells that are (match) or are not (!match) of the colour. */
-function cropToCells(g: Grid, colour: number, match: boolean): Grid | Failure {
-  const b = cellBounds(g, colour, match);
-  return b ? cropGrid(g, b.top, b.left, b.bottom - b.top + 1, b.right - b.left + 1) : FAILURE;
-}
-
-/** The part of the grid under the object's bounding box (clipped to the grid). */
-export function cropToObject(g: Grid, o: GridObject): Grid | Failure {
-  const top = Math.max(0, o.top);
-  const left = Math.max(0, o.left);
-  const bottom = Math.min(g.height, o.top + o.height);
-  const right = Math.min(g.width, o.left + o.width);
-  if (bottom <= top || right <= left) return FAILURE;
-  return cropGrid(g, top, left, bottom - top, right - left);
-}
-
-/** The object's own cells on a black (0) background. */
-export function objectPicture(o: GridObject): Grid {
-  const source = o.shape.cells;
-  const cells = new Uint8Array(source.length);
-  for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? 0 : source[i]!;
-  return new Grid(o.height, o.width, cells);
-}
-
-/**
- * Only the middle column (or row) of an odd width (height) keeps its cells; every other cell
- * becomes background. The grid keeps its size.
- */
-function keepMiddleLine(g: Grid, column: boolean): Grid | Failure {
-  const { height, width, cells } = g;
-  const length = column ? width : height;
-  if (length % 2 === 0) return FAILURE;
-  const middle = (length - 1) / 2;
-  const out = new Uint8Array(cells.length).fill(backgroundColour(g));
-  if (column) for (let r = 0; r < height; r++) out[r * width + middle] = cells[r * width + middle]!;
-  else out.set(cells.subarray(middle * width, (middle + 1) * width), middle * width);
-  return new Grid(height, width, out);
-}
 
 export const croppingPrimitives = [
   primitive({
@@ -88,13 +55,7 @@ export const croppingPrimitives = [
     bits: 7,
     doc: 'The rectangle with the first point as its top-left corner and the second as (height, width); fails unless it lies inside the grid.',
     example: { input: [[1, 2, 3], [4, 5, 6], [7, 8, 9]], expression: 'crop_region(grid, (1, 0), (2, 2))', output: [[4, 5], [7, 8]] },
-    run: (g, corner, size) => {
-      const { row, column } = corner;
-      const h = size.row;
-      const w = size.column;
-      if (!shapeAllowed(h, w) || row < 0 || column < 0 || row + h > g.height || column + w > g.width) return FAILURE;
-      return cropGrid(g, row, column, h, w);
-    },
+    run: (g, corner, size) => cropRegion(g, corner.row, corner.column, size.row, size.column),
   }),
   primitive({
     name: 'crop_to_colour',
@@ -114,7 +75,7 @@ export const croppingPrimitives = [
     bits: 6,
     doc: 'The grid without its outermost ring of cells; fails when fewer than 3 rows or columns.',
     example: { input: [[5, 5, 5, 5], [5, 1, 2, 5], [5, 5, 5, 5]], expression: 'remove_border(grid)', output: [[1, 2]] },
-    run: (g) => (g.height < 3 || g.width < 3 ? FAILURE : cropGrid(g, 1, 1, g.height - 2, g.width - 2)),
+    run: removeBorder,
   }),
   primitive({
     name: 'top_half',
@@ -124,7 +85,7 @@ export const croppingPrimitives = [
     bits: 5,
     doc: 'The top half of the rows (an odd middle row is left out); fails on a single row.',
     example: { input: [[1, 1], [5, 5], [2, 2]], expression: 'top_half(grid)', output: [[1, 1]] },
-    run: (g) => (g.height < 2 ? FAILURE : cropGrid(g, 0, 0, g.height >> 1, g.width)),
+    run: (g) => half(g, 'top'),
   }),
   primitive({
     name: 'bottom_half',
@@ -134,10 +95,7 @@ export const croppingPrimitives = [
     bits: 5,
     doc: 'The bottom half of the rows (an odd middle row is left out); fails on a single row.',
     example: { input: [[1, 1], [5, 5], [2, 2]], expression: 'bottom_half(grid)', output: [[2, 2]] },
-    run: (g) => {
-      const h = g.height >> 1;
-      return h < 1 ? FAILURE : cropGrid(g, g.height - h, 0, h, g.width);
-    },
+    run: (g) => half(g, 'bottom'),
   }),
   primitive({
     name: 'left_half',
@@ -147,7 +105,7 @@ export const croppingPrimitives = [
     bits: 5,
     doc: 'The left half of the columns (an odd middle column is left out); fails on a single column.',
     example: { input: [[1, 2, 3, 4]], expression: 'left_half(grid)', output: [[1, 2]] },
-    run: (g) => (g.width < 2 ? FAILURE : cropGrid(g, 0, 0, g.height, g.width >> 1)),
+    run: (g) => half(g, 'left'),
   }),
   primitive({
     name: 'right_half',
@@ -157,10 +115,7 @@ export const croppingPrimitives = [
     bits: 5,
     doc: 'The right half of the columns (an odd middle column is left out); fails on a single column.',
     example: { input: [[1, 2, 5, 3, 4]], expression: 'right_half(grid)', output: [[3, 4]] },
-    run: (g) => {
-      const w = g.width >> 1;
-      return w < 1 ? FAILURE : cropGrid(g, 0, g.width - w, g.height, w);
-    },
+    run: (g) => half(g, 'right'),
   }),
   primitive({
     name: 'keep_middle_column',
@@ -194,10 +149,6 @@ export const croppingPrimitives = [
       expression: 'crop_to_colour_in(recolour(grid, #0, #5), grid, #0)',
       output: [[5], [5]],
     },
-    run: (g, marks, colour) => {
-      if (g.height !== marks.height || g.width !== marks.width) return FAILURE;
-      const b = cellBounds(marks, colour, true);
-      return b ? cropGrid(g, b.top, b.left, b.bottom - b.top + 1, b.right - b.left + 1) : FAILURE;
-    },
+    run: cropToColourIn,
   }),
 ];

@@ -2,340 +2,17 @@
  * Filling primitives: enclosed areas, lines, connections between same-coloured cells,
  * outlines, hollowing, bounding boxes, frames and rays.
  */
-import { backgroundColour, components } from '../src/grid/components.ts';
-import { Grid } from '../src/grid/grid.ts';
-import { enclosedCells } from '../src/grid/holes.ts';
-import { completeRepeatingPattern } from '../src/grid/repeating-pattern.ts';
-import { FAILURE, type Failure } from '../src/language/failure.ts';
-import type { Point } from '../src/language/point.ts';
-import { primitive } from '../src/library/primitive.ts';
-import { markNeighbours } from '../src/grid/neighbour-marks.ts';
-import { linesThroughColour } from '../src/grid/lines-through-cells.ts';
-import { connectAlong } from '../src/grid/connect-along.ts';
+import { connectSameColour } from '../src/grid/connect.ts';
+import { fillEmptySquares } from '../src/grid/empty-squares.ts';
 import { fillGapsBySize } from '../src/grid/gaps-by-size.ts';
-
-export function fillEnclosed(g: Grid, colour: number): Grid {
-  const background = backgroundColour(g);
-  if (colour === background) return g;
-  const enclosed = enclosedCells(g, background);
-  const out = g.cells.slice();
-  for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
-  return new Grid(g.height, g.width, out);
-}
-
-/** A straight (row, column) or diagonal line between two cells of the grid, both ends included. */
-export function drawLine(g: Grid, from: Point, to: Point, colour: number): Grid | Failure {
-  const { height, width } = g;
-  const inside = (p: Point) => p.row >= 0 && p.row < height && p.column >= 0 && p.column < width;
-  if (!inside(from) || !inside(to)) return FAILURE;
-  const dr = to.row - from.row;
-  const dc = to.column - from.column;
-  if (dr !== 0 && dc !== 0 && Math.abs(dr) !== Math.abs(dc)) return FAILURE;
-  const steps = Math.max(Math.abs(dr), Math.abs(dc));
-  const sr = Math.sign(dr);
-  const sc = Math.sign(dc);
-  const out = g.cells.slice();
-  for (let k = 0; k <= steps; k++) out[(from.row + k * sr) * width + from.column + k * sc] = colour;
-  return new Grid(height, width, out);
-}
-
-/**
- * Along every row, then every column: background cells between two consecutive
- * non-background cells of the same colour take that colour, or `paint` when given (cells
- * the rows filled stay).
- */
-export function connectSameColour(g: Grid, paint?: number): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  const connect = (start: number, step: number, length: number) => {
-    let last = -1;
-    for (let k = 0; k < length; k++) {
-      const i = start + k * step;
-      const v = cells[i]!;
-      if (v === background) continue;
-      if (last >= 0 && cells[start + last * step] === v) {
-        for (let m = last + 1; m < k; m++) {
-          const j = start + m * step;
-          if (out[j] === background) out[j] = paint ?? v;
-        }
-      }
-      last = k;
-    }
-  };
-  for (let r = 0; r < height; r++) connect(r * width, 1, width);
-  for (let c = 0; c < width; c++) connect(c, width, height);
-  return new Grid(height, width, out);
-}
-
-/**
- * Background cells with a non-background cell among their 8 neighbours take the colour;
- * with `source` given, only neighbours of that colour count.
- */
-export function surround(g: Grid, colour: number, source?: number): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] !== background) continue;
-      let near = false;
-      for (let nr = Math.max(0, r - 1); nr <= Math.min(height - 1, r + 1) && !near; nr++) {
-        for (let nc = Math.max(0, c - 1); nc <= Math.min(width - 1, c + 1); nc++) {
-          const v = cells[nr * width + nc]!;
-          if (source === undefined ? v !== background : v === source) {
-            near = true;
-            break;
-          }
-        }
-      }
-      if (near) out[r * width + c] = colour;
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/** Non-background cells whose four edge neighbours are all inside the grid and non-background become background. */
-export function hollow(g: Grid): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 1; r < height - 1; r++) {
-    for (let c = 1; c < width - 1; c++) {
-      const i = r * width + c;
-      if (cells[i] === background) continue;
-      if (cells[i - 1] !== background && cells[i + 1] !== background && cells[i - width] !== background && cells[i + width] !== background) {
-        out[i] = background;
-      }
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/**
- * For every object (non-background cells joined through edges and corners, any colours),
- * paints background cells inside its bounding box (`ring` 0) or on the ring one cell outside
- * it (`ring` 1) with the colour.
- */
-function boxes(g: Grid, colour: number, ring: boolean): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (const o of components(g, { diagonal: true, multicolour: true, background })) {
-    const top = ring ? o.top - 1 : o.top;
-    const left = ring ? o.left - 1 : o.left;
-    const bottom = ring ? o.top + o.height : o.top + o.height - 1;
-    const right = ring ? o.left + o.width : o.left + o.width - 1;
-    for (let r = Math.max(0, top); r <= Math.min(height - 1, bottom); r++) {
-      for (let c = Math.max(0, left); c <= Math.min(width - 1, right); c++) {
-        if (ring && r !== top && r !== bottom && c !== left && c !== right) continue;
-        const i = r * width + c;
-        if (cells[i] === background) out[i] = colour;
-      }
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/**
- * Rays along every column (or row) in one direction: each background cell takes the colour
- * of the nearest non-background cell behind it, if there is one.
- */
-export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  const lines = alongColumns ? width : height;
-  const length = alongColumns ? height : width;
-  const step = alongColumns ? width : 1;
-  for (let line = 0; line < lines; line++) {
-    const start = alongColumns ? line : line * width;
-    let paint = background;
-    for (let k = 0; k < length; k++) {
-      const i = start + (forwards ? k : length - 1 - k) * step;
-      const v = cells[i]!;
-      if (v !== background) paint = v;
-      else out[i] = paint;
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/**
- * Diagonal rays going down: each background cell takes the colour of the nearest
- * non-background cell up its diagonal (up-left when `towardsRight`, else up-right).
- */
-export function shootDiagonalRaysDown(g: Grid, towardsRight: boolean): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  const dc = towardsRight ? -1 : 1;
-  for (let r = 1; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const i = r * width + c;
-      const sc = c + dc;
-      if (cells[i] === background && sc >= 0 && sc < width) out[i] = out[(r - 1) * width + sc]!;
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/** The outermost ring of cells takes the colour. */
-export function drawBorder(g: Grid, colour: number): Grid {
-  const { height, width } = g;
-  const out = g.cells.slice();
-  for (let c = 0; c < width; c++) {
-    out[c] = colour;
-    out[(height - 1) * width + c] = colour;
-  }
-  for (let r = 0; r < height; r++) {
-    out[r * width] = colour;
-    out[r * width + width - 1] = colour;
-  }
-  return new Grid(height, width, out);
-}
-
-/** Rows and columns made only of background cells take the colour. */
-export function fillEmptyLines(g: Grid, colour: number): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 0; r < height; r++) {
-    let empty = true;
-    for (let c = 0; c < width && empty; c++) if (cells[r * width + c] !== background) empty = false;
-    if (empty) out.fill(colour, r * width, (r + 1) * width);
-  }
-  for (let c = 0; c < width; c++) {
-    let empty = true;
-    for (let r = 0; r < height && empty; r++) if (cells[r * width + c] !== background) empty = false;
-    if (empty) for (let r = 0; r < height; r++) out[r * width + c] = colour;
-  }
-  return new Grid(height, width, out);
-}
-
-/** Non-background cells with fewer than two edge neighbours of their own colour become background. */
-export function removeLonelyCells(g: Grid): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const i = r * width + c;
-      const v = cells[i]!;
-      if (v === background) continue;
-      let same = 0;
-      if (r > 0 && cells[i - width] === v) same++;
-      if (r < height - 1 && cells[i + width] === v) same++;
-      if (c > 0 && cells[i - 1] === v) same++;
-      if (c < width - 1 && cells[i + 1] === v) same++;
-      if (same < 2) out[i] = background;
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/**
- * Squares of k×k background cells take the colour; they are found by their top-left corner in
- * reading order, and a square overlapping one already taken is skipped.
- */
-export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | Failure {
-  const { height, width, cells } = g;
-  if (!Number.isInteger(k) || k < 1 || k > height || k > width) return FAILURE;
-  const background = backgroundColour(g);
-  // filled[(r + 1) * (width + 1) + c + 1]: non-background cells above and left of (r, c), inclusive.
-  const stride = width + 1;
-  const filled = new Uint16Array((height + 1) * stride);
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const own = cells[r * width + c] !== background ? 1 : 0;
-      filled[(r + 1) * stride + c + 1] = own + filled[r * stride + c + 1]! + filled[(r + 1) * stride + c]! - filled[r * stride + c]!;
-    }
-  }
-  const taken = new Uint8Array(height * width);
-  let out: Uint8Array | undefined;
-  for (let r = 0; r + k <= height; r++) {
-    for (let c = 0; c + k <= width; c++) {
-      const inside = filled[(r + k) * stride + c + k]! - filled[r * stride + c + k]! - filled[(r + k) * stride + c]! + filled[r * stride + c]!;
-      if (inside !== 0) continue;
-      let free = true;
-      for (let dr = 0; dr < k && free; dr++) for (let dc = 0; dc < k; dc++) if (taken[(r + dr) * width + c + dc]) (free = false), (dc = k);
-      if (!free) continue;
-      out ??= cells.slice();
-      for (let dr = 0; dr < k; dr++) {
-        const base = (r + dr) * width + c;
-        taken.fill(1, base, base + k);
-        out.fill(colour, base, base + k);
-      }
-    }
-  }
-  return out ? new Grid(height, width, out) : g;
-}
-
-/** Every non-background cell paints the background cells along its four diagonals, up to the next non-background cell or the edge; the first ray to reach a cell (reading order) wins. */
-export function shootDiagonalRays(g: Grid): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const v = cells[r * width + c]!;
-      if (v === background) continue;
-      for (let d = 0; d < 4; d++) {
-        const dr = d < 2 ? -1 : 1;
-        const dc = d % 2 === 0 ? -1 : 1;
-        for (let nr = r + dr, nc = c + dc; nr >= 0 && nr < height && nc >= 0 && nc < width; nr += dr, nc += dc) {
-          const j = nr * width + nc;
-          if (cells[j] !== background) break;
-          if (out[j] === background) out[j] = v;
-        }
-      }
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/** Background cells that touch a non-background cell by a corner (a diagonal neighbour) take the colour. */
-export function surroundDiagonally(g: Grid, colour: number): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  const out = cells.slice();
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const i = r * width + c;
-      if (cells[i] !== background) continue;
-      const filled = (nr: number, nc: number) => nr >= 0 && nr < height && nc >= 0 && nc < width && cells[nr * width + nc] !== background;
-      if (filled(r - 1, c - 1) || filled(r - 1, c + 1) || filled(r + 1, c - 1) || filled(r + 1, c + 1)) out[i] = colour;
-    }
-  }
-  return new Grid(height, width, out);
-}
-
-/**
- * Every non-background cell not of the target colour that looks along its row or column, over
- * background cells only, straight at a cell of the target colour paints the cells between in its
- * own colour.
- */
-export function extendTowardColour(g: Grid, target: number): Grid | Failure {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  if (target === background) return FAILURE;
-  const out = cells.slice();
-  const steps: [number, number][] = [[-1, 0], [1, 0], [0, -1], [0, 1]];
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      const v = cells[r * width + c]!;
-      if (v === background || v === target) continue;
-      for (const [dr, dc] of steps) {
-        let nr = r + dr;
-        let nc = c + dc;
-        while (nr >= 0 && nr < height && nc >= 0 && nc < width && cells[nr * width + nc] === background) (nr += dr), (nc += dc);
-        if (nr < 0 || nr >= height || nc < 0 || nc >= width || cells[nr * width + nc] !== target) continue;
-        for (let pr = r + dr, pc = c + dc; pr !== nr || pc !== nc; pr += dr, pc += dc) out[pr * width + pc] = v;
-      }
-    }
-  }
-  return new Grid(height, width, out);
-}
+import { fillEnclosed } from '../src/grid/holes.ts';
+import { drawBorder, drawLine, fillEmptyLines, linesThroughColour } from '../src/grid/lines.ts';
+import { ANY_DRAWN_CELL, markBeside } from '../src/grid/neighbour-marks.ts';
+import { paintObjectBoxes } from '../src/grid/object-boxes.ts';
+import { extendTowardColour, shootDiagonalRays, shootDiagonalRaysDown, shootRays } from '../src/grid/rays.ts';
+import { hollow, removeLonelyCells } from '../src/grid/remove-by-neighbours.ts';
+import { completeRepeatingPattern } from '../src/grid/repeating-pattern.ts';
+import { primitive } from '../src/library/primitive.ts';
 
 export const fillingPrimitives = [
   primitive({
@@ -378,7 +55,7 @@ export const fillingPrimitives = [
       expression: 'connect_same_colour(grid)',
       output: [[2, 2, 2, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
     },
-    run: connectSameColour,
+    run: (g) => connectSameColour(g, null, true, true),
   }),
   primitive({
     name: 'surround',
@@ -392,7 +69,7 @@ export const fillingPrimitives = [
       expression: 'surround(grid, #2)',
       output: [[2, 2, 2, 0], [2, 5, 2, 0], [2, 2, 2, 0], [0, 0, 0, 0]],
     },
-    run: surround,
+    run: (g, colour) => markBeside(g, ANY_DRAWN_CELL, colour, 'block'),
   }),
   primitive({
     name: 'connect_same_colour_with',
@@ -406,7 +83,7 @@ export const fillingPrimitives = [
       expression: 'connect_same_colour_with(grid, #8)',
       output: [[2, 8, 8, 2], [0, 0, 0, 0], [3, 0, 0, 1]],
     },
-    run: (g, colour) => connectSameColour(g, colour),
+    run: (g, colour) => connectSameColour(g, colour, true, true),
   }),
   primitive({
     name: 'surround_colour',
@@ -420,7 +97,7 @@ export const fillingPrimitives = [
       expression: 'surround_colour(grid, #5, #2)',
       output: [[2, 2, 2, 0], [2, 5, 2, 0], [2, 2, 2, 3]],
     },
-    run: (g, source, colour) => surround(g, colour, source),
+    run: (g, source, colour) => markBeside(g, source, colour, 'block'),
   }),
   primitive({
     name: 'draw_border',
@@ -490,7 +167,7 @@ export const fillingPrimitives = [
       expression: 'fill_bounding_boxes(grid, #8)',
       output: [[1, 8, 8, 0], [8, 1, 1, 0], [0, 0, 0, 0]],
     },
-    run: (g, colour) => boxes(g, colour, false),
+    run: (g, colour) => paintObjectBoxes(g, colour, false),
   }),
   primitive({
     name: 'frame_objects',
@@ -504,7 +181,7 @@ export const fillingPrimitives = [
       expression: 'frame_objects(grid, #1)',
       output: [[0, 0, 0, 0], [0, 1, 1, 1], [0, 1, 7, 1], [0, 1, 1, 1]],
     },
-    run: (g, colour) => boxes(g, colour, true),
+    run: (g, colour) => paintObjectBoxes(g, colour, true),
   }),
   primitive({
     name: 'shoot_rays_down',
@@ -578,7 +255,7 @@ export const fillingPrimitives = [
       expression: 'complete_repeating_pattern(grid, #0)',
       output: [[1, 2, 1, 2], [3, 4, 3, 4], [1, 2, 1, 2], [3, 4, 3, 4]],
     },
-    run: (g, hole) => completeRepeatingPattern(g, hole) ?? FAILURE,
+    run: completeRepeatingPattern,
   }),
   primitive({
     name: 'fill_empty_squares',
@@ -620,7 +297,7 @@ export const fillingPrimitives = [
       expression: 'surround_diagonally(grid, #8)',
       output: [[8, 0, 8], [0, 4, 0], [8, 0, 8]],
     },
-    run: surroundDiagonally,
+    run: (g, colour) => markBeside(g, ANY_DRAWN_CELL, colour, 'corners'),
   }),
   primitive({
     name: 'extend_toward_colour',
@@ -648,7 +325,7 @@ export const fillingPrimitives = [
       expression: 'surround_colour_edges(grid, #2, #7)',
       output: [[0, 7, 0], [7, 2, 7], [0, 7, 3]],
     },
-    run: (g, source, colour) => markNeighbours(g, source, colour, false),
+    run: (g, source, colour) => markBeside(g, source, colour, 'edges'),
   }),
   primitive({
     name: 'surround_colour_corners',
@@ -662,7 +339,7 @@ export const fillingPrimitives = [
       expression: 'surround_colour_corners(grid, #2, #4)',
       output: [[4, 0, 4], [0, 2, 0], [4, 0, 3]],
     },
-    run: (g, source, colour) => markNeighbours(g, source, colour, true),
+    run: (g, source, colour) => markBeside(g, source, colour, 'corners'),
   }),
   primitive({
     name: 'draw_rows_through_colour',
@@ -718,7 +395,7 @@ export const fillingPrimitives = [
       expression: 'connect_same_colour_across(grid, #2)',
       output: [[1, 2, 1, 0], [0, 0, 0, 0], [1, 0, 0, 3]],
     },
-    run: (g, colour) => connectAlong(g, colour, true),
+    run: (g, colour) => connectSameColour(g, colour, true, false),
   }),
   primitive({
     name: 'connect_same_colour_down',
@@ -732,7 +409,7 @@ export const fillingPrimitives = [
       expression: 'connect_same_colour_down(grid, #2)',
       output: [[1, 0, 1, 0], [2, 0, 0, 0], [1, 0, 0, 3]],
     },
-    run: (g, colour) => connectAlong(g, colour, false),
+    run: (g, colour) => connectSameColour(g, colour, false, true),
   }),
   primitive({
     name: 'fill_largest_gaps',

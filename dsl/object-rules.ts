@@ -4,35 +4,13 @@
  * primitives they cost a program a few bits instead of an extraction, a filter and a repaint.
  * Objects here are one-colour regions joined through edges (as objects_by_colour).
  */
-import { backgroundColour, components } from '../src/grid/components.ts';
-import { Grid } from '../src/grid/grid.ts';
-import { paintObjectInto } from '../src/grid/paint-object.ts';
-import { FAILURE, type Failure } from '../src/language/failure.ts';
-import type { GridObject } from '../src/grid/grid-object.ts';
+import { paintObjectsWhere } from '../src/grid/object-rules.ts';
 import { primitive } from '../src/library/primitive.ts';
-
-type Test = (o: GridObject) => boolean | Failure;
-
-/** Paints, in `colour` (or the background when undefined), every object that passes or fails the test. */
-function paintWhere(g: Grid, test: Test, wanted: boolean, colour: number | undefined): Grid | Failure {
-  const background = backgroundColour(g);
-  const objects = components(g, { diagonal: false, multicolour: false, background });
-  const out = g.cells.slice();
-  let changed = false;
-  for (const o of objects) {
-    const verdict = test(o);
-    if (verdict === FAILURE) return FAILURE;
-    if (verdict !== wanted) continue;
-    paintObjectInto(out, g.height, g.width, o, colour ?? background);
-    changed = true;
-  }
-  return changed ? new Grid(g.height, g.width, out) : g;
-}
 
 export const objectRulePrimitives = [
   primitive({
     name: 'recolour_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool', 'Colour'],
     result: 'Grid',
     bits: 6,
@@ -42,11 +20,11 @@ export const objectRulePrimitives = [
       expression: 'recolour_objects_where(grid, has_size(_, 1), #5)',
       output: [[5, 0, 1, 1], [0, 0, 0, 0], [5, 0, 0, 0]],
     },
-    run: (g, test, colour) => paintWhere(g, test, true, colour),
+    run: (g, test, colour) => paintObjectsWhere(g, test, true, colour),
   }),
   primitive({
     name: 'erase_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool'],
     result: 'Grid',
     bits: 6,
@@ -56,11 +34,11 @@ export const objectRulePrimitives = [
       expression: 'erase_objects_where(grid, has_size(_, 1))',
       output: [[0, 0, 1, 1], [0, 0, 0, 0], [0, 0, 0, 0]],
     },
-    run: (g, test) => paintWhere(g, test, true, undefined),
+    run: (g, test) => paintObjectsWhere(g, test, true, null),
   }),
   primitive({
     name: 'keep_objects_where',
-    category: 'composition',
+    category: 'object rules',
     parameters: ['Grid', 'Object -> Bool'],
     result: 'Grid',
     bits: 6,
@@ -70,6 +48,6 @@ export const objectRulePrimitives = [
       expression: 'keep_objects_where(grid, has_size(_, 1))',
       output: [[1, 0, 0, 0], [0, 0, 0, 0], [2, 0, 0, 0]],
     },
-    run: (g, test) => paintWhere(g, test, false, undefined),
+    run: (g, test) => paintObjectsWhere(g, test, false, null),
   }),
 ];

@@ -1,42 +1,8 @@
 /** Object extraction: connected regions, by one colour or many, with 4 or 8 neighbours. */
+import { cellsOfColour, colourGroups } from '../src/grid/colour-cells.ts';
 import { backgroundColour, components } from '../src/grid/components.ts';
-import { cellsOfColour } from '../src/grid/colour-cells.ts';
-import { Grid } from '../src/grid/grid.ts';
-import { enclosedCells } from '../src/grid/holes.ts';
-import type { GridObject } from '../src/grid/grid-object.ts';
-import { FAILURE } from '../src/language/failure.ts';
+import { enclosedRegions } from '../src/grid/holes.ts';
 import { primitive } from '../src/library/primitive.ts';
-
-/** Marks cells that are in no region; never a colour and never EMPTY. */
-const OUTSIDE = 10;
-
-/** One object per non-background colour present, holding all its cells, in colour order. */
-export function colourGroups(grid: Grid): GridObject[] {
-  const background = backgroundColour(grid);
-  const groups: GridObject[] = [];
-  for (let colour = 0; colour < 10; colour++) {
-    if (colour === background) continue;
-    const group = cellsOfColour(grid, colour);
-    if (group) groups.push(group);
-  }
-  return groups;
-}
-
-/** Regions of background cells (edge neighbours) that cannot reach the border, reading order. */
-export function enclosedRegions(grid: Grid): readonly GridObject[] {
-  const background = backgroundColour(grid);
-  const enclosed = enclosedCells(grid, background);
-  const cells = new Uint8Array(enclosed.length);
-  let any = false;
-  for (let i = 0; i < enclosed.length; i++) {
-    if (enclosed[i]) {
-      cells[i] = background;
-      any = true;
-    } else cells[i] = OUTSIDE;
-  }
-  if (!any) return [];
-  return components(new Grid(grid.height, grid.width, cells), { diagonal: false, multicolour: false, background: OUTSIDE });
-}
 
 export const objectPrimitives = [
   primitive({
@@ -107,7 +73,7 @@ export const objectPrimitives = [
     bits: 6,
     doc: 'Every cell of the colour, wherever it lies, as one object; fails when the colour is absent.',
     example: { input: [[2, 0, 0], [0, 0, 0], [0, 0, 2]], expression: 'count_objects(objects_by_colour(object_picture(cells_of_colour(grid, #2))))', output: 2 },
-    run: (g, colour) => cellsOfColour(g, colour) ?? FAILURE,
+    run: cellsOfColour,
   }),
   primitive({
     name: 'enclosed_regions',

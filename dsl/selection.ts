@@ -2,164 +2,21 @@
  * Object selection: picking one object or a sub-list by size, position, colour, shape or
  * uniqueness; the predicates and keys that feed keep_objects, sort_objects and friends.
  */
-import { EMPTY, type Grid } from '../src/grid/grid.ts';
-import { countEnclosedRegions } from '../src/grid/holes.ts';
-import type { GridObject } from '../src/grid/grid-object.ts';
-import { FAILURE, type Failure } from '../src/language/failure.ts';
+import { holeCount } from '../src/grid/holes.ts';
+import { firstObjectWhere, objectByKey, objectBySize, objectsWhere, sortObjects } from '../src/grid/object-lists.ts';
+import {
+  colourCount,
+  countColourInObject,
+  hasColour,
+  isLine,
+  isSolidRectangle,
+  sameShape,
+  touchesColour,
+  touchesEdge,
+} from '../src/grid/object-properties.ts';
+import { mostCommonObject, oddOneOut, uniqueColourObject } from '../src/grid/odd-one-out.ts';
+import { isSymmetricLeftRight } from '../src/grid/symmetry.ts';
 import { primitive } from '../src/library/primitive.ts';
-import { touchesColour } from '../src/grid/touches-colour.ts';
-
-type Objects = readonly GridObject[];
-type Key = (object: GridObject) => number | Failure;
-type Test = (object: GridObject) => boolean | Failure;
-
-/** The first object with the largest (sign 1) or smallest (sign -1) cell count. */
-function bySize(objects: Objects, sign: 1 | -1): GridObject | Failure {
-  if (objects.length === 0) return FAILURE;
-  let best = objects[0]!;
-  for (let i = 1; i < objects.length; i++) if ((objects[i]!.size - best.size) * sign > 0) best = objects[i]!;
-  return best;
-}
-
-/** The first object with the largest (sign 1) or smallest (sign -1) key. */
-function byKey(objects: Objects, key: Key, sign: 1 | -1): GridObject | Failure {
-  if (objects.length === 0) return FAILURE;
-  let best: GridObject | undefined;
-  let bestKey = 0;
-  for (const o of objects) {
-    const k = key(o);
-    if (k === FAILURE) return FAILURE;
-    if (best === undefined || (k - bestKey) * sign > 0) {
-      best = o;
-      bestKey = k;
-    }
-  }
-  return best!;
-}
-
-/** The objects for which `test` gives `wanted`, in their order; FAILURE if a test fails. */
-function filter(objects: Objects, test: Test, wanted: boolean): Objects | Failure {
-  const kept: GridObject[] = [];
-  for (const o of objects) {
-    const t = test(o);
-    if (t === FAILURE) return FAILURE;
-    if (t === wanted) kept.push(o);
-  }
-  return kept.length === objects.length ? objects : kept;
-}
-
-export function sortObjects(objects: Objects, key: Key): Objects | Failure {
-  const n = objects.length;
-  const keys = new Float64Array(n);
-  const order = new Array<number>(n);
-  for (let i = 0; i < n; i++) {
-    const k = key(objects[i]!);
-    if (k === FAILURE) return FAILURE;
-    keys[i] = k;
-    order[i] = i;
-  }
-  order.sort((a, b) => keys[a]! - keys[b]! || a - b);
-  return order.map((i) => objects[i]!);
-}
-
-/** The object whose shape-and-colours pattern occurs most often (the first on ties); fails unless some pattern repeats. */
-export function mostCommonObject(objects: Objects): GridObject | Failure {
-  const n = objects.length;
-  let best = -1;
-  let bestCount = 1;
-  for (let i = 0; i < n; i++) {
-    const shape = objects[i]!.shape;
-    let count = 0;
-    for (let j = 0; j < n; j++) if (shape.equals(objects[j]!.shape)) count++;
-    if (count > bestCount) (best = i), (bestCount = count);
-  }
-  return best < 0 ? FAILURE : objects[best]!;
-}
-
-/** The only object whose shape-and-colours pattern occurs once, when every other pattern repeats. */
-export function oddOneOut(objects: Objects): GridObject | Failure {
-  const n = objects.length;
-  if (n < 3) return FAILURE;
-  let unique: GridObject | undefined;
-  for (let i = 0; i < n; i++) {
-    const shape = objects[i]!.shape;
-    let repeated = false;
-    for (let j = 0; j < n && !repeated; j++) if (j !== i && shape.equals(objects[j]!.shape)) repeated = true;
-    if (repeated) continue;
-    if (unique !== undefined) return FAILURE;
-    unique = objects[i]!;
-  }
-  return unique ?? FAILURE;
-}
-
-/** The only object whose main colour no other object has. */
-export function uniqueColourObject(objects: Objects): GridObject | Failure {
-  const n = objects.length;
-  if (n < 2) return FAILURE;
-  const counts = new Uint32Array(10);
-  const colours = new Uint8Array(n);
-  for (let i = 0; i < n; i++) {
-    colours[i] = objects[i]!.mainColour;
-    counts[colours[i]!]!++;
-  }
-  let unique: GridObject | undefined;
-  for (let i = 0; i < n; i++) {
-    if (counts[colours[i]!] !== 1) continue;
-    if (unique !== undefined) return FAILURE;
-    unique = objects[i]!;
-  }
-  return unique ?? FAILURE;
-}
-
-export function hasColour(o: GridObject, colour: number): boolean {
-  const cells = o.shape.cells;
-  for (let i = 0; i < cells.length; i++) if (cells[i] === colour) return true;
-  return false;
-}
-
-export function touchesEdge(o: GridObject, g: Grid): boolean {
-  const { height, width, cells } = o.shape;
-  for (let r = 0; r < height; r++) {
-    const row = o.top + r;
-    for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] === EMPTY) continue;
-      const column = o.left + c;
-      if (row === 0 || column === 0 || row === g.height - 1 || column === g.width - 1) return true;
-    }
-  }
-  return false;
-}
-
-export function isSolidRectangle(o: GridObject): boolean {
-  return o.size === o.shape.cells.length;
-}
-
-export function isMirrorSymmetric(o: GridObject): boolean {
-  const { height, width, cells } = o.shape;
-  for (let r = 0; r < height; r++) {
-    const base = r * width;
-    for (let c = 0, d = width - 1; c < d; c++, d--) if (cells[base + c] !== cells[base + d]) return false;
-  }
-  return true;
-}
-
-/** Whether two objects occupy the same cells of their boxes, colours aside. */
-export function sameShape(a: GridObject, b: GridObject): boolean {
-  if (a.height !== b.height || a.width !== b.width || a.size !== b.size) return false;
-  const x = a.shape.cells;
-  const y = b.shape.cells;
-  for (let i = 0; i < x.length; i++) if ((x[i] === EMPTY) !== (y[i] === EMPTY)) return false;
-  return true;
-}
-
-export function colourCount(o: GridObject): number {
-  let seen = 0;
-  const cells = o.shape.cells;
-  for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) seen |= 1 << cells[i]!;
-  let count = 0;
-  for (; seen; seen &= seen - 1) count++;
-  return count;
-}
 
 export const selectionPrimitives = [
   primitive({
@@ -170,7 +27,7 @@ export const selectionPrimitives = [
     bits: 4,
     doc: 'The object with the most cells (the first one on ties); fails on an empty list.',
     example: { input: [[1, 0, 2, 2], [0, 0, 0, 2]], expression: 'object_picture(largest_object(objects_by_colour(grid)))', output: [[2, 2], [0, 2]] },
-    run: (objects) => bySize(objects, 1),
+    run: (objects) => objectBySize(objects, true),
   }),
   primitive({
     name: 'smallest_object',
@@ -180,7 +37,7 @@ export const selectionPrimitives = [
     bits: 4,
     doc: 'The object with the fewest cells (the first one on ties); fails on an empty list.',
     example: { input: [[1, 0, 2, 2], [0, 0, 0, 2]], expression: 'object_picture(smallest_object(objects_by_colour(grid)))', output: [[1]] },
-    run: (objects) => bySize(objects, -1),
+    run: (objects) => objectBySize(objects, false),
   }),
   primitive({
     name: 'first_object',
@@ -190,7 +47,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The first object of the list (reading order for extracted objects); fails on an empty list.',
     example: { input: [[0, 3, 0], [4, 0, 0]], expression: 'object_picture(first_object(objects_by_colour(grid)))', output: [[3]] },
-    run: (objects) => objects[0] ?? FAILURE,
+    run: (objects) => objects[0] ?? null,
   }),
   primitive({
     name: 'last_object',
@@ -200,7 +57,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The last object of the list; fails on an empty list.',
     example: { input: [[0, 3, 0], [4, 0, 0]], expression: 'object_picture(last_object(objects_by_colour(grid)))', output: [[4]] },
-    run: (objects) => objects[objects.length - 1] ?? FAILURE,
+    run: (objects) => objects[objects.length - 1] ?? null,
   }),
   primitive({
     name: 'object_at',
@@ -210,7 +67,7 @@ export const selectionPrimitives = [
     bits: 6,
     doc: 'The object at a position in the list, counting from 0; fails when out of range.',
     example: { input: [[1, 0, 2, 0, 3]], expression: 'object_picture(object_at(objects_by_colour(grid), 1))', output: [[2]] },
-    run: (objects, index) => (Number.isInteger(index) && index >= 0 && index < objects.length ? objects[index]! : FAILURE),
+    run: (objects, index) => (Number.isInteger(index) && index >= 0 && index < objects.length ? objects[index]! : null),
   }),
   primitive({
     name: 'keep_objects',
@@ -220,7 +77,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The objects for which the test holds, in their order.',
     example: { input: [[1, 0, 2, 0, 1]], expression: 'count_objects(keep_objects(objects_by_colour(grid), has_colour(_, #1)))', output: 2 },
-    run: (objects, test) => filter(objects, test, true),
+    run: (objects, test) => objectsWhere(objects, test, true),
   }),
   primitive({
     name: 'drop_objects',
@@ -230,7 +87,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The objects for which the test does not hold, in their order.',
     example: { input: [[1, 0, 2, 0, 1]], expression: 'count_objects(drop_objects(objects_by_colour(grid), has_colour(_, #1)))', output: 1 },
-    run: (objects, test) => filter(objects, test, false),
+    run: (objects, test) => objectsWhere(objects, test, false),
   }),
   primitive({
     name: 'object_with_most',
@@ -240,7 +97,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The object with the highest key (the first one on ties); fails on an empty list.',
     example: { input: [[1, 0, 2], [0, 0, 2]], expression: 'object_picture(object_with_most(objects_by_colour(grid), object_height(_)))', output: [[2], [2]] },
-    run: (objects, key) => byKey(objects, key, 1),
+    run: (objects, key) => objectByKey(objects, key, true),
   }),
   primitive({
     name: 'object_with_least',
@@ -250,7 +107,7 @@ export const selectionPrimitives = [
     bits: 5,
     doc: 'The object with the lowest key (the first one on ties); fails on an empty list.',
     example: { input: [[0, 0, 2], [1, 0, 2]], expression: 'object_picture(object_with_least(objects_by_colour(grid), object_top(_)))', output: [[2], [2]] },
-    run: (objects, key) => byKey(objects, key, -1),
+    run: (objects, key) => objectByKey(objects, key, false),
   }),
   primitive({
     name: 'sort_objects',
@@ -340,7 +197,7 @@ export const selectionPrimitives = [
     bits: 7,
     doc: 'Whether the object, in its bounding box, is the same as its left-right mirror image.',
     example: { input: [[6, 6, 6], [0, 6, 0], [0, 0, 0]], expression: 'is_symmetric_object(first_object(objects_by_colour(grid)))', output: true },
-    run: isMirrorSymmetric,
+    run: (o) => isSymmetricLeftRight(o.shape),
   }),
   primitive({
     name: 'is_single_colour',
@@ -360,7 +217,7 @@ export const selectionPrimitives = [
     bits: 7,
     doc: 'Whether the object is a straight line one cell thick: a single row or a single column.',
     example: { input: [[0, 0, 0], [3, 3, 3], [0, 0, 0]], expression: 'is_line(first_object(objects_by_colour(grid)))', output: true },
-    run: (o) => (o.height === 1 || o.width === 1) && o.size === o.height * o.width,
+    run: isLine,
   }),
   primitive({
     name: 'has_same_shape',
@@ -454,7 +311,7 @@ export const selectionPrimitives = [
     bits: 7,
     doc: 'How many separate gaps the object closes in: regions inside its bounding box, not part of it, that cannot reach the box edge.',
     example: { input: [[3, 3, 3, 0], [3, 0, 3, 0], [3, 3, 3, 0], [0, 0, 0, 0]], expression: 'hole_count(first_object(objects_by_colour(grid)))', output: 1 },
-    run: (o) => countEnclosedRegions(o.shape, EMPTY),
+    run: holeCount,
   }),
   primitive({
     name: 'has_hole',
@@ -464,7 +321,7 @@ export const selectionPrimitives = [
     bits: 6,
     doc: 'Whether the object closes in at least one gap (see hole_count): a ring, a frame, a loop.',
     example: { input: [[3, 3, 3, 0], [3, 0, 3, 0], [3, 3, 3, 0], [0, 0, 0, 0]], expression: 'has_hole(first_object(objects_by_colour(grid)))', output: true },
-    run: (o) => countEnclosedRegions(o.shape, EMPTY) > 0,
+    run: (o) => holeCount(o) > 0,
   }),
   primitive({
     name: 'count_colour_in_object',
@@ -474,12 +331,7 @@ export const selectionPrimitives = [
     bits: 6,
     doc: 'How many cells of the object have the colour (a key: for example the shape with the most red spots).',
     example: { input: [[1, 2, 1], [2, 1, 0]], expression: 'count_colour_in_object(first_object(objects_multicolour(grid)), #2)', output: 2 },
-    run: (o, colour) => {
-      const cells = o.shape.cells;
-      let n = 0;
-      for (let i = 0; i < cells.length; i++) if (cells[i] === colour) n++;
-      return n;
-    },
+    run: countColourInObject,
   }),
   primitive({
     name: 'first_object_where',
@@ -493,14 +345,7 @@ export const selectionPrimitives = [
       expression: 'object_picture(first_object_where(objects_by_colour(grid), is_bigger_than(_, 1)))',
       output: [[3, 3], [3, 0]],
     },
-    run: (objects, test) => {
-      for (const o of objects) {
-        const verdict = test(o);
-        if (verdict === FAILURE) return FAILURE;
-        if (verdict) return o;
-      }
-      return FAILURE;
-    },
+    run: firstObjectWhere,
   }),
   primitive({
     name: 'most_common_object',

@@ -5,6 +5,7 @@
  */
 import { EMPTY, Grid } from './grid.ts';
 import { GridObject } from './grid-object.ts';
+import { backgroundOfCounts } from './most-frequent-colour.ts';
 
 export interface ComponentOptions {
   readonly diagonal: boolean;
@@ -122,8 +123,5 @@ export function colourCounts(grid: Grid): Uint32Array {
  */
 export function backgroundColour(grid: Grid): number {
   if (grid.backgroundMemo >= 0) return grid.backgroundMemo;
-  const counts = colourCounts(grid);
-  let best = 0;
-  if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
-  return (grid.backgroundMemo = best);
+  return (grid.backgroundMemo = backgroundOfCounts(colourCounts(grid)));
 }

@@ -3,6 +3,7 @@
  * bounding box, with EMPTY where a cell is not part of the object.
  */
 import { EMPTY, Grid } from './grid.ts';
+import { mostFrequentColour } from './most-frequent-colour.ts';
 
 export class GridObject {
   readonly top: number;
@@ -40,8 +41,6 @@ export class GridObject {
     const counts = new Uint16Array(10);
     const cells = this.shape.cells;
     for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) counts[cells[i]!]!++;
-    let best = 0;
-    for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
-    return best;
+    return mostFrequentColour(counts);
   }
 }

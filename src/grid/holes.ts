@@ -1,8 +1,31 @@
 /**
  * Holes: regions of cells that belong to no object (EMPTY in a shape, or the background in a
- * grid) which cannot reach the outer border through edge steps.
+ * grid) which cannot reach the outer border through edge steps; counting them, taking them as
+ * objects, filling them.
  */
-import { Grid } from './grid.ts';
+import { backgroundColour, components } from './components.ts';
+import type { GridObject } from './grid-object.ts';
+import { EMPTY, Grid } from './grid.ts';
+
+/** Marks cells that are in no region; never a colour and never EMPTY. */
+const OUTSIDE = 10;
+
+/**
+ * A flood through edge steps over a height × width array of marks: from the first `tail` cells
+ * in `queue` (already marked), every cell reached through cells marked `from` is marked `to`.
+ */
+function spread(mark: Uint8Array, height: number, width: number, queue: Int32Array, tail: number, from: number, to: number): void {
+  let head = 0;
+  while (head < tail) {
+    const i = queue[head++]!;
+    const r = (i / width) | 0;
+    const c = i - r * width;
+    if (r > 0 && mark[i - width] === from) (mark[i - width] = to), (queue[tail++] = i - width);
+    if (r < height - 1 && mark[i + width] === from) (mark[i + width] = to), (queue[tail++] = i + width);
+    if (c > 0 && mark[i - 1] === from) (mark[i - 1] = to), (queue[tail++] = i - 1);
+    if (c < width - 1 && mark[i + 1] === from) (mark[i + 1] = to), (queue[tail++] = i + 1);
+  }
+}
 
 /**
  * Marks, in a new array, the cells of colour `open` that are enclosed: not connected to the
@@ -25,16 +48,7 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
       queue[tail++] = i;
     }
   }
-  let head = 0;
-  while (head < tail) {
-    const i = queue[head++]!;
-    const r = (i / width) | 0;
-    const c = i - r * width;
-    if (r > 0 && mark[i - width] === 1) { mark[i - width] = 2; queue[tail++] = i - width; }
-    if (r < height - 1 && mark[i + width] === 1) { mark[i + width] = 2; queue[tail++] = i + width; }
-    if (c > 0 && mark[i - 1] === 1) { mark[i - 1] = 2; queue[tail++] = i - 1; }
-    if (c < width - 1 && mark[i + 1] === 1) { mark[i + 1] = 2; queue[tail++] = i + 1; }
-  }
+  spread(mark, height, width, queue, tail, 1, 2);
   for (let i = 0; i < n; i++) mark[i] = mark[i] === 1 ? 1 : 0;
   return mark;
 }
@@ -49,18 +63,39 @@ export function countEnclosedRegions(grid: Grid, open: number): number {
     if (mark[start] !== 1) continue;
     regions++;
     mark[start] = 0;
-    let head = 0;
-    let tail = 0;
-    queue[tail++] = start;
-    while (head < tail) {
-      const i = queue[head++]!;
-      const r = (i / width) | 0;
-      const c = i - r * width;
-      if (r > 0 && mark[i - width] === 1) { mark[i - width] = 0; queue[tail++] = i - width; }
-      if (r < height - 1 && mark[i + width] === 1) { mark[i + width] = 0; queue[tail++] = i + width; }
-      if (c > 0 && mark[i - 1] === 1) { mark[i - 1] = 0; queue[tail++] = i - 1; }
-      if (c < width - 1 && mark[i + 1] === 1) { mark[i + 1] = 0; queue[tail++] = i + 1; }
-    }
+    queue[0] = start;
+    spread(mark, height, width, queue, 1, 1, 0);
   }
   return regions;
+}
+
+/** Regions of background cells (edge neighbours) that cannot reach the border, in reading order. */
+export function enclosedRegions(grid: Grid): readonly GridObject[] {
+  const background = backgroundColour(grid);
+  const enclosed = enclosedCells(grid, background);
+  const cells = new Uint8Array(enclosed.length);
+  let any = false;
+  for (let i = 0; i < enclosed.length; i++) {
+    if (enclosed[i]) {
+      cells[i] = background;
+      any = true;
+    } else cells[i] = OUTSIDE;
+  }
+  if (!any) return [];
+  return components(new Grid(grid.height, grid.width, cells), { diagonal: false, multicolour: false, background: OUTSIDE });
+}
+
+/** Background cells that cannot reach the border through background cells (edge steps) take the colour. */
+export function fillEnclosed(g: Grid, colour: number): Grid {
+  const background = backgroundColour(g);
+  if (colour === background) return g;
+  const enclosed = enclosedCells(g, background);
+  const out = g.cells.slice();
+  for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
+  return new Grid(g.height, g.width, out);
+}
+
+/** How many separate gaps the object closes in: regions of its box, not its cells, that cannot reach the box's edge. */
+export function holeCount(o: GridObject): number {
+  return countEnclosedRegions(o.shape, EMPTY);
 }

@@ -3,24 +3,21 @@
  * up or down until its top row is theirs; an object above or below them (no shared row) moves
  * sideways until its left column is theirs.
  */
-import { backgroundColour, components } from './components.ts';
-import { cellBounds } from './crop.ts';
-import { EMPTY, type Grid } from './grid.ts';
+import type { Grid } from './grid.ts';
+import { objectsAroundColour } from './objects-around-colour.ts';
 import { moveObjects } from './paint-object.ts';
 
 export function lineUpWithColour(g: Grid, colour: number): Grid {
-  const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  if (colour === background) return g;
-  const bounds = cellBounds(g, colour, true);
-  if (!bounds) return g;
-  const { top, bottom, left, right } = bounds;
-  const objects = components(g, { diagonal: true, multicolour: false, background });
+  const { height, width } = g;
+  const scene = objectsAroundColour(g, colour);
+  if (!scene) return g;
+  const { top, bottom, left, right } = scene.target;
+  const objects = scene.objects;
   const moves = new Int32Array(objects.length * 2);
   let moved = false;
   for (let i = 0; i < objects.length; i++) {
     const o = objects[i]!;
-    if (o.shape.cells[o.shape.cells.findIndex((v) => v !== EMPTY)] === colour) continue;
+    if (scene.ofTarget[i]) continue;
     const sharesColumns = o.left <= right && o.left + o.width - 1 >= left;
     const sharesRows = o.top <= bottom && o.top + o.height - 1 >= top;
     let dr = 0;
@@ -34,5 +31,5 @@ export function lineUpWithColour(g: Grid, colour: number): Grid {
     if (dr !== 0 || dc !== 0) moved = true;
   }
   if (!moved) return g;
-  return moveObjects(g, objects, moves, background);
+  return moveObjects(g, objects, moves, scene.background);
 }

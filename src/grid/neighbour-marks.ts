@@ -1,28 +1,48 @@
 /**
- * Marks beside the cells of one colour: background cells that touch such a cell through an
- * edge, or through a corner only, take a colour.
+ * Marks beside cells: background cells that have a cell of a colour (or any drawn cell) among
+ * their neighbours take a colour.
  */
 import { backgroundColour } from './components.ts';
 import { Grid } from './grid.ts';
 
-const EDGE_STEPS = [-1, 0, 1, 0, 0, -1, 0, 1];
-const CORNER_STEPS = [-1, -1, -1, 1, 1, -1, 1, 1];
+/** `source` value meaning any cell that is not the background. */
+export const ANY_DRAWN_CELL = -1;
 
-/** Background cells beside a cell of `source` (by edges, or by corners when `corners`) take `colour`. */
-export function markNeighbours(g: Grid, source: number, colour: number, corners: boolean): Grid {
+/**
+ * Which cells count as a cell's neighbours: the four sharing an edge, the four sharing only a
+ * corner, or the 3×3 block around it (the cell itself included, which matters only when the
+ * source colour is the background).
+ */
+export type Neighbourhood = 'edges' | 'corners' | 'block';
+
+/** Row and column steps of each neighbourhood, as pairs. */
+const STEPS: Readonly<Record<Neighbourhood, readonly number[]>> = {
+  edges: [-1, 0, 1, 0, 0, -1, 0, 1],
+  corners: [-1, -1, -1, 1, 1, -1, 1, 1],
+  block: [-1, -1, -1, 0, -1, 1, 0, -1, 0, 0, 0, 1, 1, -1, 1, 0, 1, 1],
+};
+
+/**
+ * Background cells with a neighbour of colour `source` (any drawn cell for
+ * {@link ANY_DRAWN_CELL}) take `colour`.
+ */
+export function markBeside(g: Grid, source: number, colour: number, neighbourhood: Neighbourhood): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const steps = corners ? CORNER_STEPS : EDGE_STEPS;
+  const steps = STEPS[neighbourhood];
   const out = cells.slice();
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] !== source) continue;
-      for (let k = 0; k < 8; k += 2) {
+      if (cells[r * width + c] !== background) continue;
+      for (let k = 0; k < steps.length; k += 2) {
         const nr = r + steps[k]!;
         const nc = c + steps[k + 1]!;
         if (nr < 0 || nr >= height || nc < 0 || nc >= width) continue;
-        const i = nr * width + nc;
-        if (cells[i] === background) out[i] = colour;
+        const v = cells[nr * width + nc]!;
+        if (source === ANY_DRAWN_CELL ? v !== background : v === source) {
+          out[r * width + c] = colour;
+          break;
+        }
       }
     }
   }

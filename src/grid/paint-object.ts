@@ -1,8 +1,10 @@
 /**
- * Drawing objects into a cell buffer: painting an object's cells at its position, or
- * clearing the cells it covers; cells that fall outside the buffer are dropped.
+ * Drawing objects onto grids: painting an object's cells at its position, or clearing the
+ * cells it covers (into a cell buffer or as a new grid), moving or changing several objects at
+ * once; cells that fall outside the grid are dropped.
  */
-import type { GridObject } from './grid-object.ts';
+import { backgroundColour } from './components.ts';
+import { GridObject } from './grid-object.ts';
 import { EMPTY, Grid } from './grid.ts';
 
 /**
@@ -53,4 +55,45 @@ export function moveObjects(grid: Grid, objects: readonly GridObject[], moves: A
     if (dr !== 0 || dc !== 0) paintObjectInto(out, height, width, objects[i]!, undefined, dr, dc);
   }
   return new Grid(height, width, out);
+}
+
+/** The grid with every object painted on it in order; later objects cover earlier ones. */
+export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
+  const out = g.cells.slice();
+  for (const o of objects) paintObjectInto(out, g.height, g.width, o);
+  return new Grid(g.height, g.width, out);
+}
+
+/** The grid with the cells under every object turned to the background colour. */
+export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
+  const background = backgroundColour(g);
+  const out = g.cells.slice();
+  for (const o of objects) paintObjectInto(out, g.height, g.width, o, background);
+  return new Grid(g.height, g.width, out);
+}
+
+/** The grid with every cell outside the object turned to the background colour. */
+export function keepOnlyObject(g: Grid, object: GridObject): Grid {
+  const out = new Uint8Array(g.cells.length).fill(backgroundColour(g));
+  paintObjectInto(out, g.height, g.width, object);
+  return new Grid(g.height, g.width, out);
+}
+
+/**
+ * Every object erased from the grid, then each painted again as `transform` changes it. The
+ * transform may give something other than an object (the language's failure value) when it
+ * cannot apply; then so does this, with null.
+ */
+export function mapObjects<Other>(g: Grid, objects: readonly GridObject[], transform: (o: GridObject) => GridObject | Other): Grid | null {
+  const background = backgroundColour(g);
+  const out = g.cells.slice();
+  const moved: GridObject[] = [];
+  for (const o of objects) {
+    paintObjectInto(out, g.height, g.width, o, background);
+    const t = transform(o);
+    if (!(t instanceof GridObject)) return null;
+    moved.push(t);
+  }
+  for (const o of moved) paintObjectInto(out, g.height, g.width, o);
+  return new Grid(g.height, g.width, out);
 }

@@ -10,21 +10,21 @@ const CHECK_BUDGET = 60_000;
 
 /**
  * The grid with every cell of `hole` replaced from the smallest repeating tile that agrees with
- * all other cells and covers every hole; undefined when there is no hole, no known cell, or no
+ * all other cells and covers every hole; null when there is no hole, no known cell, or no
  * such tile smaller than the grid.
  *
  * A tile has `ph` rows and `pw` columns; the cell (r, c) belongs to the tile cell
  * (r mod ph, (c - shift * floor(r / ph)) mod pw), where the shift is 0 unless the tile is one
  * row high. Tiles are tried by area, then height, then
- * shift, so the answer is deterministic. The search gives up (undefined) after a fixed number
+ * shift, so the answer is deterministic. The search gives up (null) after a fixed number
  * of cell comparisons.
  */
-export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undefined {
+export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null {
   const { height, width, cells } = grid;
   const size = cells.length;
   let holes = 0;
   for (let i = 0; i < size; i++) if (cells[i] === hole) holes++;
-  if (holes === 0 || holes === size) return undefined;
+  if (holes === 0 || holes === size) return null;
   const known = new Int32Array(size - holes);
   const unknown = new Int32Array(holes);
   for (let i = 0, k = 0, u = 0; i < size; i++) {
@@ -73,7 +73,7 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undef
         trial++;
         let agrees = true;
         for (let k = 0; k < known.length && agrees; k++) {
-          if (--budget < 0) return undefined;
+          if (--budget < 0) return null;
           const r = knownRow[k]!;
           const band = (r / ph) | 0;
           let column = (knownColumn[k]! - shift * band) % pw;
@@ -93,5 +93,5 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | undef
       }
     }
   }
-  return undefined;
+  return null;
 }

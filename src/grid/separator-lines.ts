@@ -1,9 +1,10 @@
 /**
  * Separator lines: full rows and columns of one colour that divide a grid into cells (the
- * panes of a window), and the panes they leave between them.
+ * panes of a window), the panes they leave between them, and the colour of each pane.
  */
 import { backgroundColour } from './components.ts';
 import { Grid } from './grid.ts';
+import { mostFrequentColour } from './most-frequent-colour.ts';
 
 export interface SeparatorLines {
   readonly colour: number;
@@ -70,10 +71,10 @@ export function findSeparatorLines(grid: Grid): SeparatorLines | undefined {
   return best;
 }
 
-/** The panes between the separator lines in reading order, or undefined when there are no lines. */
-export function splitAtSeparatorLines(grid: Grid): Grid[] | undefined {
+/** The panes between the separator lines in reading order, or null when there are no lines. */
+export function splitAtSeparatorLines(grid: Grid): Grid[] | null {
   const lines = findSeparatorLines(grid);
-  if (!lines) return undefined;
+  if (!lines) return null;
   const { width, cells } = grid;
   const parts: Grid[] = [];
   const columnRuns = gaps(lines.columns);
@@ -87,4 +88,24 @@ export function splitAtSeparatorLines(grid: Grid): Grid[] | undefined {
     }
   }
   return parts;
+}
+
+/** The most frequent colour of each pane between the separator lines, laid out as the panes are; null when there are no lines. */
+export function paneColours(g: Grid): Grid | null {
+  const lines = findSeparatorLines(g);
+  if (!lines) return null;
+  const rowRuns = gaps(lines.rows);
+  const columnRuns = gaps(lines.columns);
+  const out = new Uint8Array(rowRuns.length * columnRuns.length);
+  const counts = new Uint32Array(10);
+  const { width, cells } = g;
+  let k = 0;
+  for (const [top, bottom] of rowRuns) {
+    for (const [left, right] of columnRuns) {
+      counts.fill(0);
+      for (let r = top; r < bottom; r++) for (let c = left; c < right; c++) counts[cells[r * width + c]!]!++;
+      out[k++] = mostFrequentColour(counts);
+    }
+  }
+  return new Grid(rowRuns.length, columnRuns.length, out);
 }

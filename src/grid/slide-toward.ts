@@ -3,9 +3,8 @@
  * edges or corners) of another colour moves in a straight line, across, down or diagonally,
  * toward the cells of that colour and stops just before it would overlap them.
  */
-import { backgroundColour, components } from './components.ts';
-import { cellBounds } from './crop.ts';
 import { EMPTY, type Grid } from './grid.ts';
+import { objectsAroundColour } from './objects-around-colour.ts';
 import { moveObjects } from './paint-object.ts';
 
 /**
@@ -25,16 +24,15 @@ function direction(from: number, to: number, targetFrom: number, targetTo: numbe
  */
 export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity): Grid {
   const { height, width, cells } = g;
-  const background = backgroundColour(g);
-  if (colour === background) return g;
-  const bounds = cellBounds(g, colour, true);
-  if (!bounds) return g;
-  const { top, bottom, left, right } = bounds;
-  const objects = components(g, { diagonal: true, multicolour: false, background });
+  const scene = objectsAroundColour(g, colour);
+  if (!scene) return g;
+  const { top, bottom, left, right } = scene.target;
+  const objects = scene.objects;
   const moves: number[] = [];
-  for (const o of objects) {
+  for (let i = 0; i < objects.length; i++) {
+    const o = objects[i]!;
     const shape = o.shape;
-    if (shape.cells[shape.cells.findIndex((v) => v !== EMPTY)] === colour) {
+    if (scene.ofTarget[i]) {
       moves.push(0, 0);
       continue;
     }
@@ -73,5 +71,5 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
     }
     moves.push(dr * steps, dc * steps);
   }
-  return moveObjects(g, objects, moves, background);
+  return moveObjects(g, objects, moves, scene.background);
 }

@@ -5,14 +5,13 @@
 import type { GridObject } from './grid-object.ts';
 import { backgroundColour, components } from './components.ts';
 import { EMPTY, Grid } from './grid.ts';
+import { firstCellColour } from './objects-around-colour.ts';
 
 export function stampObjectOnColour(g: Grid, template: GridObject, colour: number): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   if (colour === background) return g;
-  const markers = components(g, { diagonal: true, multicolour: false, background }).filter(
-    (o) => o.shape.cells[o.shape.cells.findIndex((v) => v !== EMPTY)] === colour,
-  );
+  const markers = components(g, { diagonal: true, multicolour: false, background }).filter((o) => firstCellColour(o) === colour);
   if (markers.length === 0) return g;
   const out = cells.slice();
   for (const m of markers) {

@@ -3,6 +3,7 @@
  * the direction that agrees best with the grid.
  */
 import { Grid } from './grid.ts';
+import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Each row (alongRows) or column becomes its most frequent colour, the lowest on ties. */
 export function majorityLines(g: Grid, alongRows: boolean): Grid {
@@ -16,8 +17,7 @@ export function majorityLines(g: Grid, alongRows: boolean): Grid {
     const start = alongRows ? line * width : line;
     counts.fill(0);
     for (let k = 0; k < length; k++) counts[cells[start + k * step]!]!++;
-    let best = 0;
-    for (let c = 1; c < 10; c++) if (counts[c]! > counts[best]!) best = c;
+    const best = mostFrequentColour(counts);
     for (let k = 0; k < length; k++) out[start + k * step] = best;
   }
   return new Grid(height, width, out);

@@ -14,6 +14,7 @@ export const CATEGORIES = [
   'symmetry',
   'geometry',
   'composition',
+  'object rules',
   'filling',
   'counting',
 ] as const;
@@ -27,6 +28,7 @@ export const CATEGORY_TITLES: Record<Category, string> = {
   symmetry: 'Symmetry',
   geometry: 'Geometry',
   composition: 'Composition',
+  'object rules': 'Object rules',
   filling: 'Filling',
   counting: 'Counting and comparison',
 };

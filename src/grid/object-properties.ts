@@ -1,0 +1,86 @@
+/**
+ * Properties of one object, the tests and keys that choose objects: its colours, its shape,
+ * whether it touches the grid's edge or a colour.
+ */
+import type { GridObject } from './grid-object.ts';
+import { EMPTY, type Grid } from './grid.ts';
+
+/** Whether any cell of the object has the colour. */
+export function hasColour(o: GridObject, colour: number): boolean {
+  return o.shape.cells.indexOf(colour) >= 0;
+}
+
+/** How many cells of the object have the colour. */
+export function countColourInObject(o: GridObject, colour: number): number {
+  const cells = o.shape.cells;
+  let n = 0;
+  for (let i = 0; i < cells.length; i++) if (cells[i] === colour) n++;
+  return n;
+}
+
+/** How many different colours the object has. */
+export function colourCount(o: GridObject): number {
+  let seen = 0;
+  const cells = o.shape.cells;
+  for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) seen |= 1 << cells[i]!;
+  let count = 0;
+  for (; seen; seen &= seen - 1) count++;
+  return count;
+}
+
+/** Whether the object fills its whole bounding box. */
+export function isSolidRectangle(o: GridObject): boolean {
+  return o.size === o.shape.cells.length;
+}
+
+/** Whether the object is a straight line one cell thick: a single full row or column. */
+export function isLine(o: GridObject): boolean {
+  return (o.height === 1 || o.width === 1) && o.size === o.height * o.width;
+}
+
+/** Whether two objects occupy the same cells of their boxes, colours and places aside. */
+export function sameShape(a: GridObject, b: GridObject): boolean {
+  if (a.height !== b.height || a.width !== b.width || a.size !== b.size) return false;
+  const x = a.shape.cells;
+  const y = b.shape.cells;
+  for (let i = 0; i < x.length; i++) if ((x[i] === EMPTY) !== (y[i] === EMPTY)) return false;
+  return true;
+}
+
+/** Whether a cell of the object lies on the outer border of the grid. */
+export function touchesEdge(o: GridObject, g: Grid): boolean {
+  const { height, width, cells } = o.shape;
+  for (let r = 0; r < height; r++) {
+    const row = o.top + r;
+    for (let c = 0; c < width; c++) {
+      if (cells[r * width + c] === EMPTY) continue;
+      const column = o.left + c;
+      if (row === 0 || column === 0 || row === g.height - 1 || column === g.width - 1) return true;
+    }
+  }
+  return false;
+}
+
+/** Whether the object has a neighbour (edge or corner) of a colour on a grid, outside itself. */
+export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
+  const shape = o.shape;
+  const { height, width } = g;
+  for (let r = 0; r < shape.height; r++) {
+    for (let c = 0; c < shape.width; c++) {
+      if (shape.cells[r * shape.width + c] === EMPTY) continue;
+      const row = o.top + r;
+      const column = o.left + c;
+      for (let nr = row - 1; nr <= row + 1; nr++) {
+        if (nr < 0 || nr >= height) continue;
+        for (let nc = column - 1; nc <= column + 1; nc++) {
+          if (nc < 0 || nc >= width || g.cells[nr * width + nc] !== colour) continue;
+          const sr = nr - o.top;
+          const sc = nc - o.left;
+          const inside = sr >= 0 && sr < shape.height && sc >= 0 && sc < shape.width && shape.cells[sr * shape.width + sc] !== EMPTY;
+          if (!inside) return true;
+        }
+      }
+    }
+  }
+  return false;
+}

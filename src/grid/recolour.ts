@@ -1,0 +1,73 @@
+/**
+ * Recolouring cell by cell through a colour table: one colour to another, a whole colour map,
+ * two colours swapped, everything but one colour (or but the background) made one colour.
+ */
+import { backgroundColour } from './components.ts';
+import { Grid } from './grid.ts';
+
+/**
+ * The grid with every colour c replaced by `target[c]` (`target` holds an entry for every
+ * value a cell can have); the same grid when nothing changes.
+ */
+export function mapColours(g: Grid, target: Uint8Array): Grid {
+  const source = g.cells;
+  let changed = false;
+  for (let c = 0; c < 10; c++) {
+    if (target[c] !== c && source.indexOf(c) >= 0) {
+      changed = true;
+      break;
+    }
+  }
+  if (!changed) return g;
+  const cells = new Uint8Array(source.length);
+  for (let i = 0; i < source.length; i++) cells[i] = target[source[i]!]!;
+  return new Grid(g.height, g.width, cells);
+}
+
+/** A colour table that changes nothing. */
+function unchangedTable(): Uint8Array {
+  const target = new Uint8Array(256);
+  for (let c = 0; c < 256; c++) target[c] = c;
+  return target;
+}
+
+/** Cells of `from` get `to`; the same grid when there are none or the colours are equal. */
+export function recolour(g: Grid, from: number, to: number): Grid {
+  const source = g.cells;
+  const first = from === to ? -1 : source.indexOf(from);
+  if (first < 0) return g;
+  const cells = source.slice();
+  for (let i = first; i < cells.length; i++) if (cells[i] === from) cells[i] = to;
+  return new Grid(g.height, g.width, cells);
+}
+
+/** Every colour c becomes `colourMap[c]` (ten entries, colours 0–9), all at once. */
+export function applyColourMap(g: Grid, colourMap: ArrayLike<number>): Grid {
+  const target = unchangedTable();
+  for (let c = 0; c < 10; c++) target[c] = colourMap[c]!;
+  return mapColours(g, target);
+}
+
+/** Cells of `a` get `b` and cells of `b` get `a`. */
+export function swapColours(g: Grid, a: number, b: number): Grid {
+  const target = unchangedTable();
+  target[a] = b;
+  target[b] = a;
+  return mapColours(g, target);
+}
+
+/** Cells of the colour keep it; every other cell becomes the background. */
+export function keepColour(g: Grid, colour: number): Grid {
+  const background = backgroundColour(g);
+  const target = new Uint8Array(256).fill(background);
+  target[colour] = colour;
+  return mapColours(g, target);
+}
+
+/** Every cell that is not the background gets the colour. */
+export function recolourAllButBackground(g: Grid, colour: number): Grid {
+  const target = new Uint8Array(256).fill(colour);
+  const background = backgroundColour(g);
+  target[background] = background;
+  return mapColours(g, target);
+}

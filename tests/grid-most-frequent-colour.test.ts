@@ -1,0 +1,43 @@
+/** The most frequent colour of a count table, and the background rule on one. */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { backgroundOfCounts, mostFrequentColour } from '../src/grid/most-frequent-colour.ts';
+
+const counts = fc.array(fc.nat({ max: 20 }), { minLength: 10, maxLength: 10 });
+
+describe('mostFrequentColour', () => {
+  it('picks the largest count, the lowest colour on ties', () => {
+    expect(mostFrequentColour([0, 3, 0, 5, 0, 0, 0, 0, 0, 1])).toBe(3);
+    expect(mostFrequentColour([2, 0, 0, 0, 0, 0, 0, 7, 0, 7])).toBe(7);
+    expect(mostFrequentColour([4, 4, 4, 4, 4, 4, 4, 4, 4, 4])).toBe(0);
+  });
+
+  it('gives 0 when every count is 0 and ignores entries past colour 9', () => {
+    expect(mostFrequentColour(new Uint32Array(10))).toBe(0);
+    const wide = new Uint32Array(256);
+    wide[2] = 1;
+    wide[200] = 50;
+    expect(mostFrequentColour(wide)).toBe(2);
+  });
+
+  it('no colour has more, and every lower colour has strictly less', () => {
+    fc.assert(
+      fc.property(counts, (table) => {
+        const best = mostFrequentColour(table);
+        for (let c = 0; c < 10; c++) expect(table[c]!).toBeLessThanOrEqual(table[best]!);
+        for (let c = 0; c < best; c++) expect(table[c]!).toBeLessThan(table[best]!);
+      }),
+    );
+  });
+});
+
+describe('backgroundOfCounts', () => {
+  it('is black whenever there is a black cell, however few', () => {
+    expect(backgroundOfCounts([1, 9, 9, 0, 0, 0, 0, 0, 0, 0])).toBe(0);
+  });
+
+  it('without black, is the most frequent colour (the lowest on ties)', () => {
+    expect(backgroundOfCounts([0, 2, 5, 5, 0, 0, 0, 0, 0, 0])).toBe(2);
+    expect(backgroundOfCounts([0, 0, 0, 0, 0, 0, 3, 0, 3, 0])).toBe(6);
+  });
+});
