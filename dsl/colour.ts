@@ -121,7 +121,7 @@ function coloursByFrequency(g: Grid): Grid | Failure {
   return new Grid(colours.length, 1, Uint8Array.from(colours));
 }
 
-/** Columns of the colours other than black, most frequent first, each as tall as the colour's count. */
+/** Columns of the colours other than 0, most frequent first, each as tall as the colour's count. */
 function colourHistogram(g: Grid): Grid | Failure {
   const counts = colourCounts(g);
   const colours: number[] = [];
@@ -332,7 +332,7 @@ export const colourPrimitives = [
     parameters: ['Grid'],
     result: 'Grid',
     bits: 7,
-    doc: 'A bar chart of the colours other than black: one column per colour, the most frequent first (lower colour on ties), each filled from the top with as many cells as the colour has, black below.',
+    doc: 'A bar chart of the colours other than 0: one column per colour, the most frequent first (lower colour on ties), each filled from the top with as many cells as the colour has, 0 below.',
     example: { input: [[2, 2, 1], [2, 3, 1]], expression: 'colour_histogram(grid)', output: [[2, 1, 3], [2, 1, 0], [2, 0, 0]] },
     run: colourHistogram,
   }),
@@ -372,7 +372,7 @@ export const colourPrimitives = [
     parameters: ['Grid'],
     result: 'Grid',
     bits: 6,
-    doc: 'The colours other than black in the order their bands run: one row by mean column when they spread more across, else one column by mean row.',
+    doc: 'The colours other than 0 in the order their bands run: one row by mean column when they spread more across, else one column by mean row.',
     example: { input: [[4, 4, 2, 2, 8], [4, 2, 2, 8, 8]], expression: 'colour_bands(grid)', output: [[4, 2, 8]] },
     run: colourBands,
   }),

@@ -42,7 +42,7 @@ export function overlay(bottom: Grid, top: Grid, transparent: number): Grid | Fa
 
 /**
  * Stacks the grids in order; later cells that are not the shared background win. The shared
- * background is black when any grid holds black, else the most frequent colour over all grids.
+ * background is 0 when any grid holds a 0, else the most frequent colour over all grids.
  */
 export function overlayAll(grids: readonly Grid[]): Grid | Failure {
   if (grids.length === 0) return FAILURE;
@@ -52,7 +52,7 @@ export function overlayAll(grids: readonly Grid[]): Grid | Failure {
     if (g.height !== height || g.width !== width) return FAILURE;
     for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
   }
-  // The shared background, by the same rule as backgroundColour: black when any cell is black.
+  // The shared background, by the same rule as backgroundColour: 0 when any cell is 0.
   let background = 0;
   if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
   const out = grids[0]!.cells.slice();

@@ -22,7 +22,7 @@ export function cropToObject(g: Grid, o: GridObject): Grid | Failure {
   return cropGrid(g, top, left, bottom - top, right - left);
 }
 
-/** The object's own cells on a black (0) background. */
+/** The object's own cells on a background of colour 0. */
 export function objectPicture(o: GridObject): Grid {
   const source = o.shape.cells;
   const cells = new Uint8Array(source.length);
@@ -76,7 +76,7 @@ export const croppingPrimitives = [
     parameters: ['Object'],
     result: 'Grid',
     bits: 4,
-    doc: 'The object on its own, the size of its bounding box, black (0) where it has no cell.',
+    doc: 'The object on its own, the size of its bounding box, colour 0 where it has no cell.',
     example: { input: [[0, 0, 0], [0, 5, 5], [0, 0, 5]], expression: 'object_picture(first_object(objects_by_colour(grid)))', output: [[5, 5], [0, 5]] },
     run: objectPicture,
   }),
