@@ -43,7 +43,7 @@ export const croppingPrimitives = [
     parameters: ['Object'],
     result: 'Grid',
     bits: 4,
-    doc: 'The object on its own, the size of its bounding box, black (0) where it has no cell.',
+    doc: 'The object on its own, the size of its bounding box, colour 0 where it has no cell.',
     example: { input: [[0, 0, 0], [0, 5, 5], [0, 0, 5]], expression: 'object_picture(first_object(objects_by_colour(grid)))', output: [[5, 5], [0, 5]] },
     run: objectPicture,
   }),

@@ -91,7 +91,7 @@ export const objectPrimitives = [
     parameters: ['Grid'],
     result: 'Colour',
     bits: 4,
-    doc: 'The background colour: black (0) when the grid holds any black cell, otherwise the most frequent colour (the lowest on ties).',
+    doc: 'The background colour: 0 when the grid holds any cell of colour 0, otherwise the most frequent colour (the lowest on ties).',
     example: { input: [[2, 2, 1], [2, 0, 2]], expression: 'background(grid)', output: 0 },
     run: (g) => backgroundColour(g),
   }),

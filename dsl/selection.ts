@@ -329,7 +329,7 @@ export const selectionPrimitives = [
     parameters: ['Object', 'Colour'],
     result: 'Int',
     bits: 6,
-    doc: 'How many cells of the object have the colour (a key: for example the shape with the most red spots).',
+    doc: 'How many cells of the object have the colour (a key: for example the shape with the most spots of colour 2).',
     example: { input: [[1, 2, 1], [2, 1, 0]], expression: 'count_colour_in_object(first_object(objects_multicolour(grid)), #2)', output: 2 },
     run: countColourInObject,
   }),

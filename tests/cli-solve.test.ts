@@ -20,7 +20,7 @@ function isGrid(value: unknown): boolean {
 
 describe('pithy solve --predictions', () => {
   const dir = mkdtempSync(join(tmpdir(), 'pithy-solve-'));
-  const tasks = ['lighthouse-mirror', 'red-buoys-only'];
+  const tasks = ['lighthouse-mirror', 'marker-buoys'];
   for (const t of tasks) copyFileSync(join(demo, `${t}.json`), join(dir, `${t}.json`));
   writeFileSync(join(dir, 'broken.json'), '{"train": [{"input": [[1, 2], [3]], "output": [[1]]}], "test": []}');
   const predictions = join(dir, 'out.jsonl');
@@ -55,7 +55,7 @@ describe('pithy solve --predictions', () => {
 
   it('refuses to overwrite an existing predictions file', () => {
     const before = readFileSync(predictions, 'utf8');
-    const again = pithy('solve', join(dir, 'red-buoys-only.json'), '--predictions', predictions);
+    const again = pithy('solve', join(dir, 'marker-buoys.json'), '--predictions', predictions);
     expect(again.status).toBe(2);
     expect(again.stderr).toContain('already exists');
     expect(readFileSync(predictions, 'utf8')).toBe(before);
@@ -64,7 +64,7 @@ describe('pithy solve --predictions', () => {
 
 describe('pithy eval', () => {
   const dir = mkdtempSync(join(tmpdir(), 'pithy-eval-'));
-  for (const t of ['lighthouse-mirror', 'lagoon-fill']) copyFileSync(join(demo, `${t}.json`), join(dir, `${t}.json`));
+  for (const t of ['lighthouse-mirror', 'lagoon-view']) copyFileSync(join(demo, `${t}.json`), join(dir, `${t}.json`));
   const results = join(dir, 'results.jsonl');
 
   it('scores every task, appends a line per task, and resumes without solving again', () => {
@@ -93,9 +93,9 @@ describe('pithy eval', () => {
 
 describe('pithy --size-cap', () => {
   it('rejects grids over a lowered cap, naming the file, the place and the cap', () => {
-    const run = pithy('--size-cap', '2', 'solve', join(demo, 'lagoon-fill.json'));
+    const run = pithy('--size-cap', '2', 'solve', join(demo, 'lagoon-view.json'));
     expect(run.status).toBe(1);
-    expect(run.stderr + run.stdout).toMatch(/lagoon-fill\.json.*\$\.train\[0\]\.input.*size cap of 2/);
+    expect(run.stderr + run.stdout).toMatch(/lagoon-view\.json.*\$\.train\[0\]\.input.*size cap of 2/);
   });
 
   it('refuses a cap outside 1 to 1000', () => {

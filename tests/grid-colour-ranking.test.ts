@@ -44,7 +44,7 @@ describe('colourByCount', () => {
 describe('countColours', () => {
   it('counts the colours other than the background', () => {
     expect(countColours(G([[0, 2, 0], [5, 2, 0]]))).toBe(2);
-    // no black: 7 (four cells) is the background; 1 and 3 remain
+    // no colour 0: 7 (four cells) is the background; 1 and 3 remain
     expect(countColours(G([[7, 7, 1], [7, 7, 3]]))).toBe(2);
     expect(countColours(G([[6]]))).toBe(0);
   });
@@ -71,7 +71,7 @@ describe('coloursByFrequency', () => {
 });
 
 describe('colourHistogram', () => {
-  it('one column per colour other than black, as tall as its count', () => {
+  it('one column per colour other than 0, as tall as its count', () => {
     // 2 ×3, 1 ×2, 3 ×1
     expect(colourHistogram(G([[2, 2, 1], [2, 3, 1]]))!.toRows()).toEqual([
       [2, 1, 3],

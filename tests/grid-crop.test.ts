@@ -66,7 +66,7 @@ describe('rectangles', () => {
 describe('objects', () => {
   const o = new GridObject(1, 1, G([[5, 5], [EMPTY, 5]]));
 
-  it('objectPicture puts the object on black', () => {
+  it('objectPicture puts the object on colour 0', () => {
     expect(objectPicture(o).toRows()).toEqual([[5, 5], [0, 5]]);
   });
 

@@ -32,11 +32,11 @@ describe('mostFrequentColour', () => {
 });
 
 describe('backgroundOfCounts', () => {
-  it('is black whenever there is a black cell, however few', () => {
+  it('is 0 whenever there is a cell of colour 0, however few', () => {
     expect(backgroundOfCounts([1, 9, 9, 0, 0, 0, 0, 0, 0, 0])).toBe(0);
   });
 
-  it('without black, is the most frequent colour (the lowest on ties)', () => {
+  it('without colour 0, is the most frequent colour (the lowest on ties)', () => {
     expect(backgroundOfCounts([0, 2, 5, 5, 0, 0, 0, 0, 0, 0])).toBe(2);
     expect(backgroundOfCounts([0, 0, 0, 0, 0, 0, 3, 0, 3, 0])).toBe(6);
   });

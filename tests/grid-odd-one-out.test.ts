@@ -26,11 +26,11 @@ describe('objects', () => {
   });
 
   it('uniqueColourObject: the only object whose main colour no other has', () => {
-    const green = at(0, [[3]]);
-    const greenPair = at(2, [[3, 3]]);
+    const three = at(0, [[3]]);
+    const threePair = at(2, [[3, 3]]);
     const lone = at(5, [[4, 4]]);
-    expect(uniqueColourObject([green, lone, greenPair])).toBe(lone);
-    expect(uniqueColourObject([green, lone])).toBeNull();
+    expect(uniqueColourObject([three, lone, threePair])).toBe(lone);
+    expect(uniqueColourObject([three, lone])).toBeNull();
     expect(uniqueColourObject([lone])).toBeNull();
   });
 });

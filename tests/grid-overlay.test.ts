@@ -32,7 +32,7 @@ describe('overlayAll', () => {
     expect(overlayAll([G([[1, 3]]), G([[4, 0]])])!.toRows()).toEqual([[4, 3]]);
   });
 
-  it('without black, the most frequent colour over all the grids is see-through', () => {
+  it('without colour 0, the most frequent colour over all the grids is see-through', () => {
     // 5 appears three times over both grids, more than any other colour
     expect(overlayAll([G([[1, 5]]), G([[5, 5]])])!.toRows()).toEqual([[1, 5]]);
   });

@@ -56,7 +56,7 @@ describe('swapColours', () => {
 describe('keepColour', () => {
   it('keeps one colour, the rest becomes the background', () => {
     expect(keepColour(G([[0, 1, 2], [2, 0, 0]]), 2).toRows()).toEqual([[0, 0, 2], [2, 0, 0]]);
-    // no black: 5 is the background
+    // no colour 0: 5 is the background
     expect(keepColour(G([[5, 5, 3], [5, 4, 5]]), 4).toRows()).toEqual([[5, 5, 5], [5, 4, 5]]);
   });
 

@@ -15,7 +15,7 @@ describe('translate', () => {
     expect(translate(G([[0, 0], [0, 4]]), { row: -1, column: -1 }).toRows()).toEqual([[4, 0], [0, 0]]);
   });
 
-  it('without black the background is the most frequent colour', () => {
+  it('without colour 0 the background is the most frequent colour', () => {
     expect(translate(G([[5, 5, 2]]), { row: 0, column: -1 }).toRows()).toEqual([[5, 2, 5]]);
   });
 

@@ -112,7 +112,7 @@ describe('colour laws', () => {
         expect(callPrimitive('majority_colour', g)).toBe(counts.indexOf(Math.max(...counts)));
       }),
     );
-    // Worked by hand: black 3 cells beats 4 (2 cells) and 3 (1 cell), though black is the background.
+    // Worked by hand: 0 (3 cells) beats 4 (2 cells) and 3 (1 cell), though 0 is the background.
     expect(callPrimitive('majority_colour', G([[0, 3, 0], [4, 4, 0]]))).toBe(0);
     // 6 and 2 tie with two cells each: the lower, 2.
     expect(callPrimitive('majority_colour', G([[6, 2], [2, 6], [1, 0]]))).toBe(2);
@@ -167,10 +167,10 @@ describe('colour, hand-worked cases', () => {
     expect(rows(callPrimitive('apply_palette', g, Palette.fromPairs([[1, 2], [2, 3], [3, 1]])))).toEqual([[0, 2, 2], [3, 0, 2], [0, 0, 1]]);
   });
 
-  it('keep_colour and remove_colour on a grey background', () => {
-    const grey = G([[5, 5, 1], [2, 5, 5]]);
-    expect(rows(callPrimitive('keep_colour', grey, 1))).toEqual([[5, 5, 1], [5, 5, 5]]);
-    expect(rows(callPrimitive('remove_colour', grey, 1))).toEqual([[5, 5, 5], [2, 5, 5]]);
+  it('keep_colour and remove_colour on a background of 5', () => {
+    const fives = G([[5, 5, 1], [2, 5, 5]]);
+    expect(rows(callPrimitive('keep_colour', fives, 1))).toEqual([[5, 5, 1], [5, 5, 5]]);
+    expect(rows(callPrimitive('remove_colour', fives, 1))).toEqual([[5, 5, 5], [2, 5, 5]]);
   });
 
   it('colour ranks', () => {
@@ -199,9 +199,9 @@ describe('colour, hand-worked cases', () => {
   });
 
   it('replace_background and most_common_object_colour', () => {
-    // No black: 5 (four cells) is the background.
+    // No 0: 5 (four cells) is the background.
     expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 2]]), 3))).toEqual([[3, 1, 3], [3, 3, 2]]);
-    // One black cell: black is the background although 5 has more cells.
+    // One cell of 0: 0 is the background although 5 has more cells.
     expect(rows(callPrimitive('replace_background', G([[5, 1, 5], [5, 5, 0]]), 3))).toEqual([[5, 1, 5], [5, 5, 3]]);
     const objects = callPrimitive('objects_by_colour', G([[6, 0, 1, 0, 6], [0, 0, 1, 0, 0], [1, 0, 0, 0, 6]]));
     // objects: 6, the 1 pair, 6, 1, 6 -> colour 6 three times
@@ -281,14 +281,14 @@ describe('recolour_objects_by_size_rank and colours_by_frequency', () => {
   });
 
   it('colours_by_frequency, worked by hand', () => {
-    // Black is the background; 3 has three cells, 1 and 6 two each (1 first), 9 one.
+    // 0 is the background; 3 has three cells, 1 and 6 two each (1 first), 9 one.
     expect(rows(callPrimitive('colours_by_frequency', G([[3, 6, 1, 0], [3, 6, 1, 9], [3, 0, 0, 0]])))).toEqual([[3], [1], [6], [9]]);
     expect(callPrimitive('colours_by_frequency', G([[4, 4]]))).toBe(FAILURE);
   });
 });
 
 describe('colour_histogram', () => {
-  it('keeps the count of every colour other than black, in columns from the most frequent', () => {
+  it('keeps the count of every colour other than 0, in columns from the most frequent', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const out = callPrimitive('colour_histogram', g);
@@ -306,7 +306,7 @@ describe('colour_histogram', () => {
   });
 
   it('works a small case by hand: ties go to the lower colour', () => {
-    // 5 has three cells, 2 and 9 one each; black is left out.
+    // 5 has three cells, 2 and 9 one each; 0 is left out.
     expect(rows(callPrimitive('colour_histogram', G([[5, 9, 0], [5, 5, 2]])))).toEqual([
       [5, 2, 9],
       [5, 0, 0],

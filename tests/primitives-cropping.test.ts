@@ -39,7 +39,7 @@ describe('cropping laws', () => {
     );
   });
 
-  it('crop_to_object gives the grid under the object box; object_picture the object on black', () => {
+  it('crop_to_object gives the grid under the object box; object_picture the object on 0', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         for (const o of callPrimitive('objects_multicolour', g) as GridObject[]) {
@@ -136,10 +136,10 @@ describe('cropping, hand-worked cases', () => {
     expect(callPrimitive('crop_to_content', Grid.filled(2, 2, 5))).toBe(FAILURE);
   });
 
-  it('crop_to_content on a non-black background crops to the other colours', () => {
-    // No black: 7 (eight cells) is the background, so only the 2 is content.
+  it('crop_to_content on a background other than 0 crops to the other colours', () => {
+    // No 0: 7 (eight cells) is the background, so only the 2 is content.
     expect(rows(callPrimitive('crop_to_content', G([[7, 7, 7], [7, 2, 7], [7, 7, 7]])))).toEqual([[2]]);
-    // One black cell makes black the background although 7 has more cells: the sevens are the
+    // One cell of 0 makes 0 the background although 7 has more cells: the sevens are the
     // content and their bounding box is the whole grid.
     expect(rows(callPrimitive('crop_to_content', G([[7, 7, 7], [7, 0, 7], [7, 7, 7]])))).toEqual([
       [7, 7, 7],

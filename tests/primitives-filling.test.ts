@@ -59,7 +59,7 @@ describe('filling laws', () => {
   });
 
   it('fill_enclosed is idempotent whenever the fill does not change which colour is the background', () => {
-    // When the fill covers every black cell (or, with no black, the filled colour overtakes the
+    // When the fill covers every 0 cell (or, with no 0, the filled colour overtakes the
     // background) and a third colour becomes the background, a second fill works on a different
     // background; that case is left out.
     fc.assert(
@@ -290,7 +290,7 @@ describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal 
     ]);
     expect(rows(apply('draw_border', G([[5]]), 3))).toEqual([[3]]);
     expect(rows(apply('draw_border', G([[0, 0], [0, 0]]), 8))).toEqual([[8, 8], [8, 8]]);
-    // Black present, so black is the background: row 1 and column 2 are empty.
+    // 0 present, so 0 is the background: row 1 and column 2 are empty.
     expect(rows(apply('fill_empty_lines', G([[3, 3, 0, 3], [0, 0, 0, 0], [3, 0, 0, 3]]), 2))).toEqual([
       [3, 3, 2, 3],
       [2, 2, 2, 2],
@@ -349,7 +349,7 @@ describe('filling hand-worked cases', () => {
     ]);
   });
 
-  it('hollow on a non-black background keeps cells on the grid border', () => {
+  it('hollow on a background other than 0 keeps cells on the grid border', () => {
     const g = G([
       [1, 1, 1, 4],
       [1, 1, 1, 4],
@@ -535,7 +535,7 @@ describe('marks beside cells, lines through cells, one-way connections and gaps 
     const g = G([[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 2, 0], [0, 0, 0, 0, 0]]);
     const edges = grid('surround_colour_edges', g, 1, 7);
     expect(edges.toRows()).toEqual([[0, 7, 0, 0, 0], [7, 1, 7, 0, 0], [0, 7, 0, 0, 0], [0, 0, 0, 2, 0], [0, 0, 0, 0, 0]]);
-    // (2, 2) is a corner neighbour of both the blue and the red cell.
+    // (2, 2) is a corner neighbour of both the 1 and the 2.
     expect(grid('surround_colour_corners', edges, 2, 4).toRows()).toEqual([
       [0, 7, 0, 0, 0], [7, 1, 7, 0, 0], [0, 7, 4, 0, 4], [0, 0, 0, 2, 0], [0, 0, 4, 0, 4],
     ]);

@@ -102,7 +102,7 @@ describe('geometry laws', () => {
         expect(grid('fall_down', fallen).equals(fallen)).toBe(true);
         // The background cannot change: the cells are only moved.
         expect(Array.from(colourCounts(fallen))).toEqual(Array.from(colourCounts(g)));
-        // The background by the rule: black when present, else the most frequent (lowest on ties).
+        // The background by the rule: 0 when present, else the most frequent (lowest on ties).
         let background = 0;
         const counts = colourCounts(g);
         if (counts[0] === 0) for (let c = 1; c < 10; c++) if (counts[c]! > counts[background]!) background = c;
@@ -339,7 +339,7 @@ describe('geometry hand-worked cases', () => {
     expect(rows(apply('split_down', G([[1, 1], [7, 7], [2, 2]]), 2))).toEqual([[[1, 1]], [[2, 2]]]);
   });
 
-  it('split_at_lines finds grey separators on a black background, in reading order', () => {
+  it('split_at_lines finds separators of 5 on a background of 0, in reading order', () => {
     const window = G([
       [1, 0, 5, 0, 2],
       [0, 0, 5, 0, 0],
@@ -372,7 +372,7 @@ describe('geometry hand-worked cases', () => {
     expect(rows(apply('merge_repeated_lines', G([[5, 5], [5, 5]])))).toEqual([[5]]);
   });
 
-  it('falls keep order on a non-black background', () => {
+  it('falls keep order on a background other than 0', () => {
     const g = G([[7, 1, 7], [2, 7, 7], [7, 7, 3]]); // background 7
     expect(rows(apply('fall_right', g))).toEqual([[7, 7, 1], [7, 7, 2], [7, 7, 3]]);
     expect(rows(apply('fall_down', G([[4, 0], [0, 0], [6, 0]])))).toEqual([[0, 0], [4, 0], [6, 0]]);
@@ -444,9 +444,9 @@ describe('sliding toward a colour and continuing patterns', () => {
       [0, 0, 0, 0, 0],
       [0, 8, 8, 0, 0],
     ]);
-    // The red piece shares columns with the light-blue block, so it moves down until its lower
-    // cell rests on the block. The yellow dot shares neither rows nor columns, so it moves
-    // diagonally down-left: (2, 3), (3, 2), and (4, 1) would be on the block. The green dot's
+    // The piece of 2s shares columns with the block of 8s, so it moves down until its lower
+    // cell rests on the block. The 4 shares neither rows nor columns, so it moves
+    // diagonally down-left: (2, 3), (3, 2), and (4, 1) would be on the block. The 3's
     // diagonal path (1, 3), (2, 2), (3, 1), (4, 0) leaves the grid without meeting the block.
     expect(grid('slide_toward_colour', g, 8).toRows()).toEqual([
       [0, 0, 0, 0, 3],
@@ -509,8 +509,8 @@ describe('step_toward_colour', () => {
       [0, 0, 0, 4, 3],
       [0, 0, 0, 0, 0],
     ]);
-    // The magenta dot shares no row or column with the yellow dot: one diagonal step down-right.
-    // The green dot already touches it and stays.
+    // The 6 shares no row or column with the 4: one diagonal step down-right.
+    // The 3 already touches it and stays.
     expect(grid('step_toward_colour', g, 4).toRows()).toEqual([
       [0, 0, 0, 0, 0],
       [0, 0, 0, 0, 0],
@@ -548,7 +548,7 @@ describe('line_up_with_colour', () => {
       [0, 0, 0, 0, 0, 0],
       [0, 0, 0, 6, 0, 0],
     ]);
-    // Yellow shares no column with blue: it drops to row 2. Magenta shares no row or column:
+    // The 4s share no column with the 1s: they drop to row 2. The 6 shares no row or column:
     // it moves up (no shared column comes first), to row 2.
     expect(grid('line_up_with_colour', g, 1).toRows()).toEqual([
       [0, 0, 0, 0, 0, 0],

@@ -45,7 +45,7 @@ describe('object rules, laws', () => {
 });
 
 describe('object rules, hand-worked cases', () => {
-  // Three objects on black: a lone 1 at the top left, a pair of 1s, and a lone 2 below.
+  // Three objects on 0: a lone 1 at the top left, a pair of 1s, and a lone 2 below.
   const g = Grid.fromRows([[1, 0, 1, 1], [0, 0, 0, 0], [2, 0, 0, 0]]);
 
   it('recolours only the single cells', () => {

@@ -196,7 +196,7 @@ describe('object extraction laws', () => {
     );
   });
 
-  it('background is black when the grid holds black, else a colour with the most cells', () => {
+  it('background is 0 when the grid holds a 0, else a colour with the most cells', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         expect(callPrimitive('background', g)).toBe(backgroundOf(g));
@@ -286,12 +286,12 @@ describe('object extraction, hand-worked cases', () => {
     ]);
   });
 
-  it('background is black whenever black is present, otherwise the most frequent colour (lowest on ties)', () => {
-    // Three 3s and one 0: black is present, so black is the background.
+  it('background is 0 whenever 0 is present, otherwise the most frequent colour (lowest on ties)', () => {
+    // Three 3s and one 0: 0 is present, so 0 is the background.
     expect(callPrimitive('background', G([[3, 3], [0, 3]]))).toBe(0);
-    // No black: three 3s beat one 5.
+    // No 0: three 3s beat one 5.
     expect(callPrimitive('background', G([[3, 3], [5, 3]]))).toBe(3);
-    // No black, two 7s and two 4s tie: the lower colour, 4.
+    // No 0, two 7s and two 4s tie: the lower colour, 4.
     expect(callPrimitive('background', G([[7, 4], [4, 7]]))).toBe(4);
   });
 

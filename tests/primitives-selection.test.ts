@@ -343,12 +343,12 @@ describe('touches_colour', () => {
       [0, 0, 0, 0, 3],
       [5, 0, 0, 0, 0],
     ]);
-    const [blue, grey, green, lone] = objectsOf(g);
-    expect(blue?.mainColour).toBe(1);
-    expect(callPrimitive('touches_colour', blue, g, 5)).toBe(true); // (0, 1) and (1, 2) meet at a corner
-    expect(callPrimitive('touches_colour', blue, g, 3)).toBe(false);
-    expect(callPrimitive('touches_colour', green, g, 5)).toBe(false); // (1, 2) is two columns away
-    expect(callPrimitive('touches_colour', grey, g, 5)).toBe(false); // its own cell does not count
+    const [ones, five, threes, lone] = objectsOf(g);
+    expect(ones?.mainColour).toBe(1);
+    expect(callPrimitive('touches_colour', ones, g, 5)).toBe(true); // (0, 1) and (1, 2) meet at a corner
+    expect(callPrimitive('touches_colour', ones, g, 3)).toBe(false);
+    expect(callPrimitive('touches_colour', threes, g, 5)).toBe(false); // (1, 2) is two columns away
+    expect(callPrimitive('touches_colour', five, g, 5)).toBe(false); // its own cell does not count
     expect(callPrimitive('touches_colour', lone, g, 1)).toBe(false);
   });
 

@@ -22,16 +22,16 @@ function pairData(r: PairResult): Record<string, unknown> {
   };
 }
 
-function pairLines(r: PairResult, trace: boolean): string[] {
+function pairLines(r: PairResult, trace: boolean, legend: boolean): string[] {
   const mode = stdoutColourMode();
   const label = `${r.set} ${r.index}`.padEnd(9);
   const lines = [r.passed ? `  ${label} pass` : `  ${label} FAIL  ${describeDifference(r.difference!)}`];
   if (trace && r.trace) {
     for (const entry of r.trace) {
-      const shown = describeValue(entry.type, entry.value, mode);
+      const shown = describeValue(entry.type, entry.value, mode, { legend });
       lines.push(`      ${entry.name} : ${entry.type} = ${shown[0]}`, ...shown.slice(1).map((l) => `        ${l}`));
     }
-    if (!r.passed && r.got) lines.push(...drawPair(r.expected, r.got, mode, { input: 'expected', output: 'got' }).map((l) => `      ${l}`));
+    if (!r.passed && r.got) lines.push(...drawPair(r.expected, r.got, mode, { input: 'expected', output: 'got' }, { legend }).map((l) => `      ${l}`));
   }
   return lines;
 }
@@ -43,8 +43,9 @@ export function registerRunCommand(program: Command): void {
     .argument('<program>', 'file with the program text')
     .argument('<task>', 'task JSON file or directory of them')
     .option('--trace', "print every step's value")
+    .option('--legend', 'with --trace, name the colours under every drawn grid (number and palette name)')
     .option('--json', 'print the results as JSON')
-    .action((programFile: string, taskPath: string, options: { trace?: boolean; json?: boolean }) => {
+    .action((programFile: string, taskPath: string, options: { trace?: boolean; legend?: boolean; json?: boolean }) => {
       let loaded: LoadedProgram;
       try {
         loaded = loadProgramFile(programFile, defaultLibrary);
@@ -78,7 +79,7 @@ export function registerRunCommand(program: Command): void {
         const count = results.filter((r) => r.passed).length;
         writeLines([
           `${entry.task.name} (${entry.task.path})`,
-          ...results.flatMap((r) => pairLines(r, options.trace === true)),
+          ...results.flatMap((r) => pairLines(r, options.trace === true, options.legend === true)),
           `  ${count}/${results.length} pairs passed`,
         ]);
       }

@@ -9,10 +9,12 @@ export function registerShowCommand(program: Command): void {
     .command('show')
     .description('draw the pairs of a task file (or of every task file in a directory)')
     .argument('<task>', 'task JSON file or directory of them')
+    .option('--legend', 'name the colours under every drawn pair (number and palette name)')
     .option('--json', 'print the tasks as JSON (grids as lists of rows)')
-    .action((path: string, options: { json?: boolean }) => {
+    .action((path: string, options: { legend?: boolean; json?: boolean }) => {
       const entries = readTasks([path]);
       const mode = stdoutColourMode();
+      const drawing = { legend: options.legend === true };
       const data: unknown[] = [];
       for (const entry of entries) {
         if (!entry.ok) {
@@ -31,8 +33,8 @@ export function registerShowCommand(program: Command): void {
           continue;
         }
         const lines = [`${task.name} (${task.path}): ${task.train.length} train, ${task.test.length} test`];
-        task.train.forEach((p, i) => lines.push('', ...drawPair(p.input, p.output, mode, { input: `train ${i} input`, output: 'output' })));
-        task.test.forEach((t, i) => lines.push('', ...drawPair(t.input, t.output, mode, { input: `test ${i} input`, output: 'output' })));
+        task.train.forEach((p, i) => lines.push('', ...drawPair(p.input, p.output, mode, { input: `train ${i} input`, output: 'output' }, drawing)));
+        task.test.forEach((t, i) => lines.push('', ...drawPair(t.input, t.output, mode, { input: `test ${i} input`, output: 'output' }, drawing)));
         lines.push('');
         writeLines(lines);
       }

@@ -1,5 +1,5 @@
 /**
- * The order of colour bands: the colours other than black, sorted by their mean column (one
+ * The order of colour bands: the colours other than 0, sorted by their mean column (one
  * row) when their mean columns spread wider than their mean rows, else by their mean row (one
  * column).
  */

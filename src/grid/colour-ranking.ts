@@ -47,8 +47,8 @@ export function coloursByFrequency(g: Grid): Grid | null {
 }
 
 /**
- * A bar chart of the colours other than black: one column per colour, most frequent first
- * (lower colour on ties), each filled from the top with as many cells as the colour has, black
+ * A bar chart of the colours other than 0: one column per colour, most frequent first
+ * (lower colour on ties), each filled from the top with as many cells as the colour has, colour 0
  * below; null when there is no such colour or the chart would pass the size cap.
  */
 export function colourHistogram(g: Grid): Grid | null {

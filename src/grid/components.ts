@@ -117,9 +117,9 @@ export function colourCounts(grid: Grid): Uint32Array {
 }
 
 /**
- * The background colour: black (0) whenever the grid holds any black cell (puzzles draw on
- * black far more often than not, and a dense small picture can have more drawn cells than
- * empty ones); otherwise the most frequent colour, the lowest on ties.
+ * The background colour: 0 whenever the grid holds any cell of colour 0 (puzzles draw on 0
+ * far more often than not, and a dense small picture can have more drawn cells than empty
+ * ones); otherwise the most frequent colour, the lowest on ties.
  */
 export function backgroundColour(grid: Grid): number {
   if (grid.backgroundMemo >= 0) return grid.backgroundMemo;

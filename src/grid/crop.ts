@@ -76,7 +76,7 @@ export function cropToObject(g: Grid, o: GridObject): Grid | null {
   return cropGrid(g, top, left, bottom - top, right - left);
 }
 
-/** The object's own cells on a black (0) background, the size of its bounding box. */
+/** The object's own cells on a background of colour 0, the size of its bounding box. */
 export function objectPicture(o: GridObject): Grid {
   const source = o.shape.cells;
   const cells = new Uint8Array(source.length);

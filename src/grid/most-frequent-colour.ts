@@ -14,7 +14,7 @@ export function mostFrequentColour(counts: ArrayLike<number>): number {
 }
 
 /**
- * The background rule on a count table: black (0) whenever any cell is black, otherwise the
+ * The background rule on a count table: 0 whenever any cell is 0, otherwise the
  * most frequent colour (the lowest on ties).
  */
 export function backgroundOfCounts(counts: ArrayLike<number>): number {

@@ -8,7 +8,7 @@ import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { Point } from '../language/point.ts';
 import type { Type } from '../language/types.ts';
-import { drawGrid, type ColourMode } from './terminal-grid.ts';
+import { drawGrid, type ColourMode, type DrawOptions } from './terminal-grid.ts';
 
 /** JSON-ready data: grids as rows (EMPTY cells of object shapes as null). */
 export type ValueData =
@@ -35,21 +35,21 @@ export function valueToData(value: unknown): ValueData {
   return String(value);
 }
 
-function describeObject(o: GridObject, mode: ColourMode): string[] {
-  return [`object at (${o.top}, ${o.left}), ${o.height}x${o.width}, ${o.size} cells, colour #${o.mainColour}`, ...drawGrid(o.shape, mode).map((l) => `  ${l}`)];
+function describeObject(o: GridObject, mode: ColourMode, options: DrawOptions): string[] {
+  return [`object at (${o.top}, ${o.left}), ${o.height}x${o.width}, ${o.size} cells, colour #${o.mainColour}`, ...drawGrid(o.shape, mode, options).map((l) => `  ${l}`)];
 }
 
-/** Lines showing the value; grids and object shapes are drawn. */
-export function describeValue(type: Type, value: unknown, mode: ColourMode): string[] {
+/** Lines showing the value; grids and object shapes are drawn (with a legend line if asked). */
+export function describeValue(type: Type, value: unknown, mode: ColourMode, options: DrawOptions = {}): string[] {
   if (isFailure(value)) return ['FAILURE'];
-  if (value instanceof Grid) return [`grid ${value.height}x${value.width}`, ...drawGrid(value, mode)];
-  if (value instanceof GridObject) return describeObject(value, mode);
+  if (value instanceof Grid) return [`grid ${value.height}x${value.width}`, ...drawGrid(value, mode, options)];
+  if (value instanceof GridObject) return describeObject(value, mode, options);
   if (value instanceof Point) return [`(${value.row}, ${value.column})`];
   if (value instanceof Palette) return [`{${value.pairs().map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`];
   if (Array.isArray(value)) {
     const out = [`${value.length} ${type === 'Objects' ? 'object' : 'grid'}${value.length === 1 ? '' : 's'}`];
     value.forEach((item, i) => {
-      const lines = item instanceof GridObject ? describeObject(item, mode) : describeValue('Grid', item, mode);
+      const lines = item instanceof GridObject ? describeObject(item, mode, options) : describeValue('Grid', item, mode, options);
       out.push(`[${i}] ${lines[0]}`, ...lines.slice(1).map((l) => `    ${l}`));
     });
     return out;

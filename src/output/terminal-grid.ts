@@ -1,7 +1,8 @@
 /**
  * Draws grids in a terminal as coloured blocks, two characters per cell, in pithy's own
- * "harbour at dusk" palette; falls back to plain text (digits, '.' for colour 0) when the
- * output is not a terminal or NO_COLOR is set.
+ * "harbour at dusk" palette (24-bit colour, or the nearest colours of the 256-colour table);
+ * falls back to plain text (digits, '.' for colour 0) when the output is not a terminal or
+ * NO_COLOR is set. A legend line naming the colours can follow a drawing.
  */
 import { EMPTY, type Grid } from '../grid/grid.ts';
 
@@ -15,18 +16,22 @@ export interface PaletteEntry {
   readonly blue: number;
 }
 
-/** Colours 0–9 as pithy draws them: a harbour at dusk. */
+/**
+ * Colours 0–9 as pithy draws them: a harbour at dusk. The ten colours are far apart from each
+ * other, and each keeps its own look in the 256-colour fallback too (tests/terminal-grid.test.ts
+ * checks both).
+ */
 export const HARBOUR_PALETTE: readonly PaletteEntry[] = [
-  { name: 'night water', red: 0x14, green: 0x1c, blue: 0x2e },
-  { name: 'lantern amber', red: 0xf0, green: 0xa2, blue: 0x3b },
-  { name: 'buoy red', red: 0xc8, green: 0x3e, blue: 0x4d },
-  { name: 'kelp green', red: 0x4f, green: 0x8a, blue: 0x52 },
-  { name: 'dusk violet', red: 0x7d, green: 0x5b, blue: 0xa6 },
-  { name: 'fog grey', red: 0x98, green: 0xa2, blue: 0xad },
+  { name: 'sail canvas', red: 0xf4, green: 0xe8, blue: 0xc1 },
   { name: 'rusted hull', red: 0xa8, green: 0x55, blue: 0x2f },
+  { name: 'kelp bed', red: 0x48, green: 0xa4, blue: 0x50 },
+  { name: 'dusk violet', red: 0xa0, green: 0x5a, blue: 0xb4 },
+  { name: 'night water', red: 0x18, green: 0x24, blue: 0x6e },
+  { name: 'lantern amber', red: 0xf0, green: 0xa2, blue: 0x3b },
   { name: 'sea foam', red: 0x8e, green: 0xd6, blue: 0xc9 },
-  { name: 'sail canvas', red: 0xee, green: 0xe4, blue: 0xcc },
-  { name: 'harbour-light blue', red: 0x3a, green: 0x7c, blue: 0xc8 },
+  { name: 'deep channel', red: 0x3a, green: 0x80, blue: 0xd0 },
+  { name: 'signal flare', red: 0xd8, green: 0x20, blue: 0x2c },
+  { name: 'fog bank', red: 0x8a, green: 0x90, blue: 0x98 },
 ];
 
 /** Picks the drawing mode for a stream from its TTY flag and the environment. */
@@ -38,18 +43,43 @@ export function colourModeFor(stream: { isTTY?: boolean }, env: Readonly<Record<
   return '256';
 }
 
-/** The nearest colour in the 6×6×6 cube of the 256-colour table. */
-function cubeIndex(entry: PaletteEntry): number {
-  const step = (v: number): number => (v < 48 ? 0 : v < 115 ? 1 : Math.min(5, Math.floor((v - 35) / 40)));
-  return 16 + 36 * step(entry.red) + 6 * step(entry.green) + step(entry.blue);
+/** The channel levels of the 6×6×6 colour cube (indices 16–231) of the 256-colour table. */
+const CUBE_LEVELS = [0, 95, 135, 175, 215, 255] as const;
+
+/** The colour a terminal shows for an index 16–255 of the 256-colour table (the cube, then the grey ramp). */
+export function colourOfTableIndex(index: number): { red: number; green: number; blue: number } {
+  if (index >= 232) {
+    const grey = 8 + 10 * (index - 232);
+    return { red: grey, green: grey, blue: grey };
+  }
+  const n = index - 16;
+  return { red: CUBE_LEVELS[Math.floor(n / 36)]!, green: CUBE_LEVELS[Math.floor(n / 6) % 6]!, blue: CUBE_LEVELS[n % 6]! };
 }
+
+/** The nearest colour (by distance in red, green, blue) among the cube and the grey ramp of the 256-colour table. */
+export function tableIndexFor(entry: PaletteEntry): number {
+  let best = 16;
+  let bestDistance = Infinity;
+  for (let index = 16; index < 256; index++) {
+    const c = colourOfTableIndex(index);
+    const distance = (c.red - entry.red) ** 2 + (c.green - entry.green) ** 2 + (c.blue - entry.blue) ** 2;
+    if (distance < bestDistance) {
+      bestDistance = distance;
+      best = index;
+    }
+  }
+  return best;
+}
+
+/** The 256-colour fallback of each palette colour, worked out once. */
+export const HARBOUR_TABLE_INDICES: readonly number[] = HARBOUR_PALETTE.map(tableIndexFor);
 
 const RESET = '\u001b[0m';
 
 function backgroundCode(colour: number, mode: ColourMode): string {
   const entry = HARBOUR_PALETTE[colour]!;
   if (mode === 'truecolour') return `\u001b[48;2;${entry.red};${entry.green};${entry.blue}m`;
-  return `\u001b[48;5;${cubeIndex(entry)}m`;
+  return `\u001b[48;5;${HARBOUR_TABLE_INDICES[colour]!}m`;
 }
 
 /** One cell: two spaces on its colour, or a character pair in plain text. */
@@ -62,14 +92,43 @@ function drawCell(colour: number, mode: ColourMode): string {
   return `${backgroundCode(colour, mode)}  ${RESET}`;
 }
 
-/** The lines of a drawing of the grid; every line is `2 × width` columns wide on screen. */
-export function drawGrid(grid: Grid, mode: ColourMode): string[] {
+/** Choices for a drawing. */
+export interface DrawOptions {
+  /** Add a line under the drawing naming each colour it uses (number and palette name). */
+  readonly legend?: boolean;
+}
+
+/** The colours 0–9 that occur in the grids, in increasing order. */
+export function coloursUsed(grids: readonly Grid[]): number[] {
+  const seen = new Array<boolean>(10).fill(false);
+  for (const grid of grids) for (const v of grid.cells) if (v <= 9) seen[v] = true;
+  return seen.flatMap((present, colour) => (present ? [colour] : []));
+}
+
+/**
+ * The legend line: each colour's number and palette name, separated by commas; in a colour mode
+ * each entry starts with a swatch of its colour.
+ */
+export function legendLine(colours: readonly number[], mode: ColourMode): string {
+  const entries = colours.map((colour) => {
+    const text = `${colour} ${HARBOUR_PALETTE[colour]!.name}`;
+    return mode === 'plain' ? text : `${drawCell(colour, mode)} ${text}`;
+  });
+  return `colours: ${entries.length > 0 ? entries.join(', ') : 'none'}`;
+}
+
+/**
+ * The lines of a drawing of the grid; every line is `2 × width` columns wide on screen. With
+ * `legend`, a last line names the colours the grid uses.
+ */
+export function drawGrid(grid: Grid, mode: ColourMode, options: DrawOptions = {}): string[] {
   const lines: string[] = [];
   for (let r = 0; r < grid.height; r++) {
     let line = '';
     for (let c = 0; c < grid.width; c++) line += drawCell(grid.get(r, c), mode);
     lines.push(mode === 'plain' ? line.trimEnd() : line);
   }
+  if (options.legend) lines.push(legendLine(coloursUsed([grid]), mode));
   return lines;
 }
 
@@ -98,10 +157,21 @@ export function sideBySide(blocks: readonly { label: string; lines: readonly str
   return out;
 }
 
-/** Input and output of a pair side by side, with their sizes in the labels. */
-export function drawPair(input: Grid, output: Grid | undefined, mode: ColourMode, labels: { input: string; output: string } = { input: 'input', output: 'output' }): string[] {
+/**
+ * Input and output of a pair side by side, with their sizes in the labels. With `legend`, a
+ * last line names the colours either grid uses.
+ */
+export function drawPair(
+  input: Grid,
+  output: Grid | undefined,
+  mode: ColourMode,
+  labels: { input: string; output: string } = { input: 'input', output: 'output' },
+  options: DrawOptions = {},
+): string[] {
   const blocks = [{ label: `${labels.input} ${input.height}x${input.width}`, lines: drawGrid(input, mode), width: input.width * 2 }];
   if (output) blocks.push({ label: `${labels.output} ${output.height}x${output.width}`, lines: drawGrid(output, mode), width: output.width * 2 });
   else blocks.push({ label: `${labels.output} (not given)`, lines: ['?'], width: 1 });
-  return sideBySide(blocks, '  ->  ');
+  const lines = sideBySide(blocks, '  ->  ');
+  if (options.legend) lines.push(legendLine(coloursUsed(output ? [input, output] : [input]), mode));
+  return lines;
 }

@@ -1,6 +1,6 @@
 /**
  * fast-check generators for grids: small shapes (1..8 × 1..8 by default), colours 0–9 with
- * black (0) drawn about half the time so that objects sit on a background.
+ * colour 0 drawn about half the time so that objects sit on a background.
  */
 import fc from 'fast-check';
 import { Grid } from '../../src/grid/grid.ts';
@@ -12,7 +12,7 @@ export interface GridShapeOptions {
   readonly maxWidth?: number;
 }
 
-/** A colour 0–9, black about half the time. */
+/** A colour 0–9, 0 about half the time. */
 export const arbitraryColour: fc.Arbitrary<number> = fc.oneof(
   { weight: 1, arbitrary: fc.constant(0) },
   { weight: 1, arbitrary: fc.integer({ min: 0, max: 9 }) },

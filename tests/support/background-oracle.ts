@@ -1,6 +1,6 @@
 /**
  * The background rule written out independently of src/grid/components.ts, for tests that
- * must not use the code they check: black whenever a cell is black, otherwise the most
+ * must not use the code they check: 0 whenever a cell is 0, otherwise the most
  * frequent colour (the lowest on ties).
  */
 import type { Grid } from '../../src/grid/grid.ts';
