@@ -5,7 +5,7 @@
  */
 import { backgroundColour, colourCounts } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { Grid, shapeAllowed } from './grid.ts';
+import { Grid, shapeAllowed, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /**
@@ -58,7 +58,7 @@ export function colourHistogram(g: Grid): Grid | null {
   const height = counts[colours[0]!]!;
   const width = colours.length;
   if (!shapeAllowed(height, width)) return null;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   for (let j = 0; j < width; j++) for (let r = 0; r < counts[colours[j]!]!; r++) out[r * width + j] = colours[j]!;
   return new Grid(height, width, out);
 }

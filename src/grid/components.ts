@@ -3,7 +3,7 @@
  * (4 = edges only, 8 = edges and corners), either of one colour or of any non-background
  * colour.
  */
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, newCells } from './grid.ts';
 import { GridObject } from './grid-object.ts';
 import { backgroundOfCounts } from './most-frequent-colour.ts';
 
@@ -91,7 +91,7 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
     }
     const h = bottom - top + 1;
     const w = right - left + 1;
-    const shape = new Uint8Array(h * w).fill(EMPTY);
+    const shape = newCells(h * w).fill(EMPTY);
     for (let i = 0; i < tail; i++) {
       const index = queue[i]!;
       const r = (index / width) | 0;

@@ -4,7 +4,7 @@
  */
 import { forEachBackgroundRun, type BackgroundRunVisitor } from './background-runs.ts';
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /**
  * Along every row (when `rows`), then every column (when `columns`), the background cells
@@ -14,7 +14,7 @@ import { Grid } from './grid.ts';
  */
 export function connectSameColour(g: Grid, paint: number | null, rows: boolean, columns: boolean): Grid {
   const background = backgroundColour(g);
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   let changed = false;
   const connect: BackgroundRunVisitor = (first, step, length, before, after) => {
     if (before < 0 || before !== after) return;

@@ -6,7 +6,7 @@
  */
 import { backgroundColour } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { EMPTY, Grid, shapeAllowed } from './grid.ts';
+import { EMPTY, Grid, shapeAllowed, newCells } from './grid.ts';
 
 /** An inclusive rectangle of cells: rows top..bottom, columns left..right. */
 export interface Bounds {
@@ -39,7 +39,7 @@ export function cellBounds(grid: Grid, colour: number, match: boolean): Bounds |
 /** Copies the rectangle at (top, left) of the given size; the caller keeps it inside the grid. */
 export function cropGrid(grid: Grid, top: number, left: number, height: number, width: number): Grid {
   if (top === 0 && left === 0 && height === grid.height && width === grid.width) return grid;
-  const cells = new Uint8Array(height * width);
+  const cells = newCells(height * width);
   const source = grid.cells;
   for (let r = 0; r < height; r++) {
     const from = (top + r) * grid.width + left;
@@ -79,7 +79,7 @@ export function cropToObject(g: Grid, o: GridObject): Grid | null {
 /** The object's own cells on a background of colour 0, the size of its bounding box. */
 export function objectPicture(o: GridObject): Grid {
   const source = o.shape.cells;
-  const cells = new Uint8Array(source.length);
+  const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? 0 : source[i]!;
   return new Grid(o.height, o.width, cells);
 }
@@ -118,7 +118,7 @@ export function keepMiddleLine(g: Grid, column: boolean): Grid | null {
   const length = column ? width : height;
   if (length % 2 === 0) return null;
   const middle = (length - 1) / 2;
-  const out = new Uint8Array(cells.length).fill(backgroundColour(g));
+  const out = newCells(cells.length).fill(backgroundColour(g));
   if (column) for (let r = 0; r < height; r++) out[r * width + middle] = cells[r * width + middle]!;
   else out.set(cells.subarray(middle * width, (middle + 1) * width), middle * width);
   return new Grid(height, width, out);

@@ -1,6 +1,6 @@
 /** Squares of background cells of a given size, found and filled. */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells, copyCells } from './grid.ts';
 
 /**
  * Squares of k×k background cells take the colour; they are found by their top-left corner in
@@ -20,7 +20,7 @@ export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | nul
       filled[(r + 1) * stride + c + 1] = own + filled[r * stride + c + 1]! + filled[(r + 1) * stride + c]! - filled[r * stride + c]!;
     }
   }
-  const taken = new Uint8Array(height * width);
+  const taken = newCells(height * width);
   let out: Uint8Array | undefined;
   for (let r = 0; r + k <= height; r++) {
     for (let c = 0; c + k <= width; c++) {
@@ -29,7 +29,7 @@ export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | nul
       let free = true;
       for (let dr = 0; dr < k && free; dr++) for (let dc = 0; dc < k; dc++) if (taken[(r + dr) * width + c + dc]) (free = false), (dc = k);
       if (!free) continue;
-      out ??= cells.slice();
+      out ??= copyCells(cells);
       for (let dr = 0; dr < k; dr++) {
         const base = (r + dr) * width + c;
         taken.fill(1, base, base + k);

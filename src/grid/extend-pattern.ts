@@ -3,7 +3,7 @@
  * grow the grid to a new size or to fill the empty columns on its right.
  */
 import { backgroundColour } from './components.ts';
-import { Grid, shapeAllowed } from './grid.ts';
+import { Grid, shapeAllowed, newCells, copyCells } from './grid.ts';
 
 /** Whether column c equals column c + p for every c with c + p < known (rows when `rows`). */
 function linesRepeat(g: Grid, p: number, known: number, rows: boolean): boolean {
@@ -29,7 +29,7 @@ export function extendPatternToSize(g: Grid, height: number, width: number): Gri
   if (!Number.isInteger(height) || !Number.isInteger(width) || !shapeAllowed(height, width)) return null;
   const rowPeriod = smallestPeriod(g, g.height, true);
   const columnPeriod = smallestPeriod(g, g.width, false);
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   for (let r = 0; r < height; r++) {
     const sr = r < g.height ? r : (r - g.height) % rowPeriod + g.height - rowPeriod;
     for (let c = 0; c < width; c++) {
@@ -52,7 +52,7 @@ export function continuePatternRight(g: Grid): Grid {
   if (last < 0 || last === width - 1) return g;
   const period = smallestPeriod(g, last + 1, false);
   if (period > last) return g;
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let c = last + 1; c < width; c++) {
     for (let r = 0; r < height; r++) out[r * width + c] = out[r * width + c - period]!;
   }

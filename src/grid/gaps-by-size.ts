@@ -3,7 +3,7 @@
  * every region of the extreme size (all of them on ties) takes a colour.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 export function fillGapsBySize(g: Grid, colour: number, largest: boolean): Grid {
   const { height, width, cells } = g;
@@ -33,7 +33,7 @@ export function fillGapsBySize(g: Grid, colour: number, largest: boolean): Grid 
   if (sizes.length === 0) return g;
   let best = sizes[0]!;
   for (const s of sizes) if (largest ? s > best : s < best) best = s;
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let i = 0; i < n; i++) if (label[i]! >= 0 && sizes[label[i]!] === best) out[i] = colour;
   return new Grid(height, width, out);
 }

@@ -93,6 +93,48 @@ export class Grid {
   }
 }
 
+/**
+ * Cells come from shared slabs: one ArrayBuffer holds the cells of many grids, each grid a view
+ * into it. A fresh ArrayBuffer per grid costs a native allocation and garbage-collector
+ * bookkeeping for each of the millions of grids a search makes; views into a slab cost neither.
+ * A slab lives while any grid in it does, so the bytes handed out (`cellBytesAllocated`) bound
+ * what the cells can hold.
+ */
+const SLAB_BYTES = 1 << 18;
+/** Larger cell arrays get their own buffer. */
+const LARGEST_SLAB_PIECE = 4096;
+let slab = new ArrayBuffer(SLAB_BYTES);
+let slabOffset = 0;
+let cellBytes = 0;
+
+/** A zeroed cell array of this length, for building a new grid. */
+export function newCells(length: number): Uint8Array {
+  if (length > LARGEST_SLAB_PIECE) {
+    cellBytes += length;
+    return new Uint8Array(length);
+  }
+  if (slabOffset + length > SLAB_BYTES) {
+    slab = new ArrayBuffer(SLAB_BYTES);
+    slabOffset = 0;
+    cellBytes += SLAB_BYTES;
+  }
+  const view = new Uint8Array(slab, slabOffset, length);
+  slabOffset += (length + 7) & ~7;
+  return view;
+}
+
+/** A copy of a cell array, for building a changed grid from an old one. */
+export function copyCells(cells: Uint8Array): Uint8Array {
+  const out = newCells(cells.length);
+  out.set(cells);
+  return out;
+}
+
+/** Bytes of cell storage handed out by {@link newCells} in this process so far (whole slabs). */
+export function cellBytesAllocated(): number {
+  return cellBytes;
+}
+
 /** FNV-1a over the shape and the cells, finished with a murmur-style mix. */
 export function hashCells(height: number, width: number, cells: Uint8Array): number {
   let h = 0x811c9dc5 ^ (height * 31 + width);

@@ -5,7 +5,7 @@
  */
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, newCells, copyCells } from './grid.ts';
 
 /** Marks cells that are in no region; never a colour and never EMPTY. */
 const OUTSIDE = 10;
@@ -35,7 +35,7 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
   const { height, width, cells } = grid;
   const n = cells.length;
   // 0 = not open, 1 = open and enclosed (so far), 2 = open and reached from the border
-  const mark = new Uint8Array(n);
+  const mark = newCells(n);
   const queue = new Int32Array(n);
   let tail = 0;
   for (let i = 0; i < n; i++) {
@@ -73,7 +73,7 @@ export function countEnclosedRegions(grid: Grid, open: number): number {
 export function enclosedRegions(grid: Grid): readonly GridObject[] {
   const background = backgroundColour(grid);
   const enclosed = enclosedCells(grid, background);
-  const cells = new Uint8Array(enclosed.length);
+  const cells = newCells(enclosed.length);
   let any = false;
   for (let i = 0; i < enclosed.length; i++) {
     if (enclosed[i]) {
@@ -90,7 +90,7 @@ export function fillEnclosed(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
   if (colour === background) return g;
   const enclosed = enclosedCells(g, background);
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
   return new Grid(g.height, g.width, out);
 }

@@ -1,11 +1,11 @@
 /** Joining two grids side by side or one above the other. */
-import { Grid, shapeAllowed } from './grid.ts';
+import { Grid, shapeAllowed, newCells } from './grid.ts';
 
 /** The second grid placed right of the first; null unless their heights match and the result fits the size cap. */
 export function joinRight(a: Grid, b: Grid): Grid | null {
   if (a.height !== b.height || !shapeAllowed(a.height, a.width + b.width)) return null;
   const width = a.width + b.width;
-  const out = new Uint8Array(a.height * width);
+  const out = newCells(a.height * width);
   for (let r = 0; r < a.height; r++) {
     out.set(a.cells.subarray(r * a.width, (r + 1) * a.width), r * width);
     out.set(b.cells.subarray(r * b.width, (r + 1) * b.width), r * width + a.width);
@@ -16,7 +16,7 @@ export function joinRight(a: Grid, b: Grid): Grid | null {
 /** The second grid placed below the first; null unless their widths match and the result fits the size cap. */
 export function joinBelow(a: Grid, b: Grid): Grid | null {
   if (a.width !== b.width || !shapeAllowed(a.height + b.height, a.width)) return null;
-  const out = new Uint8Array(a.cells.length + b.cells.length);
+  const out = newCells(a.cells.length + b.cells.length);
   out.set(a.cells, 0);
   out.set(b.cells, a.cells.length);
   return new Grid(a.height + b.height, a.width, out);

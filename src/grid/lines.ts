@@ -3,7 +3,7 @@
  * row and column, and through every cell of a colour.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells, copyCells } from './grid.ts';
 import { isInside, type Position } from './position.ts';
 
 /**
@@ -19,7 +19,7 @@ export function drawLine(g: Grid, from: Position, to: Position, colour: number):
   const steps = Math.max(Math.abs(dr), Math.abs(dc));
   const sr = Math.sign(dr);
   const sc = Math.sign(dc);
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   for (let k = 0; k <= steps; k++) out[(from.row + k * sr) * width + from.column + k * sc] = colour;
   return new Grid(height, width, out);
 }
@@ -27,7 +27,7 @@ export function drawLine(g: Grid, from: Position, to: Position, colour: number):
 /** The outermost ring of cells takes the colour. */
 export function drawBorder(g: Grid, colour: number): Grid {
   const { height, width } = g;
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   for (let c = 0; c < width; c++) {
     out[c] = colour;
     out[(height - 1) * width + c] = colour;
@@ -43,7 +43,7 @@ export function drawBorder(g: Grid, colour: number): Grid {
 export function fillEmptyLines(g: Grid, colour: number): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     let empty = true;
     for (let c = 0; c < width && empty; c++) if (cells[r * width + c] !== background) empty = false;
@@ -60,8 +60,8 @@ export function fillEmptyLines(g: Grid, colour: number): Grid {
 /** Each cell of the colour paints its whole row (when `rows`), its whole column (when `columns`), or both, in the colour, over whatever was there. */
 export function linesThroughColour(g: Grid, colour: number, rows: boolean, columns: boolean): Grid {
   const { height, width, cells } = g;
-  const rowHit = new Uint8Array(height);
-  const columnHit = new Uint8Array(width);
+  const rowHit = newCells(height);
+  const columnHit = newCells(width);
   let any = false;
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
@@ -72,7 +72,7 @@ export function linesThroughColour(g: Grid, colour: number, rows: boolean, colum
     }
   }
   if (!any) return g;
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       if ((rows && rowHit[r]) || (columns && columnHit[c])) out[r * width + c] = colour;

@@ -2,7 +2,7 @@
  * Cell-wise masks of two same-sized grids: a cell is "filled" when it is not 0, and a rule
  * says which pairs of filled and empty cells give the colour.
  */
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 
 /** Which pairs (first filled, second filled) give the colour, as bits: both, first only, second only, neither. */
 export const MASK_RULES = {
@@ -15,7 +15,7 @@ export const MASK_RULES = {
 /** The colour where the rule holds and 0 elsewhere; null unless the sizes match. */
 export function mask(a: Grid, b: Grid, colour: number, rule: number): Grid | null {
   if (a.height !== b.height || a.width !== b.width) return null;
-  const out = new Uint8Array(a.cells.length);
+  const out = newCells(a.cells.length);
   const x = a.cells;
   const y = b.cells;
   for (let i = 0; i < out.length; i++) {

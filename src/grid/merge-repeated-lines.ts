@@ -1,5 +1,5 @@
 /** Merging repeated lines: each run of identical neighbouring rows, then columns, becomes one. */
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 
 /** Runs of equal neighbouring rows become one row, then the same for columns. */
 export function mergeRepeatedLines(g: Grid): Grid {
@@ -17,7 +17,7 @@ export function mergeRepeatedLines(g: Grid): Grid {
     if (!same) keptColumns.push(c);
   }
   if (keptRows.length === height && keptColumns.length === width) return g;
-  const out = new Uint8Array(keptRows.length * keptColumns.length);
+  const out = newCells(keptRows.length * keptColumns.length);
   let i = 0;
   for (const r of keptRows) for (const c of keptColumns) out[i++] = cells[r * width + c]!;
   return new Grid(keptRows.length, keptColumns.length, out);

@@ -2,7 +2,7 @@
  * Mirrored copies: a grid followed by its mirror image to the right, below, or both (a
  * kaleidoscope), and a square grid with its quarter turns around it.
  */
-import { Grid, shapeAllowed } from './grid.ts';
+import { Grid, shapeAllowed, newCells } from './grid.ts';
 import { rotateClockwise, rotateCounterclockwise, rotateHalf } from './rotate-reflect.ts';
 
 /**
@@ -14,7 +14,7 @@ export function mirrorCopies(g: Grid, rowsTwice: boolean, columnsTwice: boolean)
   const outHeight = rowsTwice ? height * 2 : height;
   const outWidth = columnsTwice ? width * 2 : width;
   if (!shapeAllowed(outHeight, outWidth)) return null;
-  const out = new Uint8Array(outHeight * outWidth);
+  const out = newCells(outHeight * outWidth);
   for (let r = 0; r < outHeight; r++) {
     const sr = r < height ? r : 2 * height - 1 - r;
     for (let c = 0; c < outWidth; c++) {
@@ -36,7 +36,7 @@ export function fourRotationsSquare(g: Grid): Grid | null {
   if (g.width !== n || !shapeAllowed(2 * n, 2 * n)) return null;
   const quadrants = [g, rotateClockwise(g), rotateCounterclockwise(g), rotateHalf(g)];
   const size = 2 * n;
-  const out = new Uint8Array(size * size);
+  const out = newCells(size * size);
   for (let q = 0; q < 4; q++) {
     const cells = quadrants[q]!.cells;
     const top = q >= 2 ? n : 0;

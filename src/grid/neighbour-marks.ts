@@ -3,7 +3,7 @@
  * their neighbours take a colour.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /** `source` value meaning any cell that is not the background. */
 export const ANY_DRAWN_CELL = -1;
@@ -30,7 +30,7 @@ export function markBeside(g: Grid, source: number, colour: number, neighbourhoo
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   const steps = STEPS[neighbourhood];
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       if (cells[r * width + c] !== background) continue;

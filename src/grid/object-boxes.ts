@@ -1,6 +1,6 @@
 /** The bounding boxes of the objects of a grid, filled or framed. */
 import { backgroundColour, components } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /**
  * For every object (non-background cells joined through edges and corners, any colours),
@@ -10,7 +10,7 @@ import { Grid } from './grid.ts';
 export function paintObjectBoxes(g: Grid, colour: number, ring: boolean): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (const o of components(g, { diagonal: true, multicolour: true, background })) {
     const top = ring ? o.top - 1 : o.top;
     const left = ring ? o.left - 1 : o.left;

@@ -4,7 +4,7 @@
  */
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 import { paintObjectInto } from './paint-object.ts';
 
 /**
@@ -21,7 +21,7 @@ export function paintObjectsWhere<Other>(
 ): Grid | null {
   const background = backgroundColour(g);
   const objects = components(g, { diagonal: false, multicolour: false, background });
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   let changed = false;
   for (const o of objects) {
     const verdict = test(o);

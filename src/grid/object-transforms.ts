@@ -3,13 +3,13 @@
  * own bounding box.
  */
 import { GridObject } from './grid-object.ts';
-import { EMPTY, Grid, getSizeCap } from './grid.ts';
+import { EMPTY, Grid, getSizeCap, newCells } from './grid.ts';
 import { flipLeftRight, flipUpDown } from './rotate-reflect.ts';
 
 /** The same object with every cell in the colour. */
 export function recolourObject(o: GridObject, colour: number): GridObject {
   const source = o.shape.cells;
-  const cells = new Uint8Array(source.length);
+  const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? EMPTY : colour;
   return new GridObject(o.top, o.left, new Grid(o.height, o.width, cells));
 }

@@ -6,7 +6,7 @@
 import { backgroundColour, components } from './components.ts';
 import { cellBounds, type Bounds } from './crop.ts';
 import type { GridObject } from './grid-object.ts';
-import { EMPTY, type Grid } from './grid.ts';
+import { EMPTY, type Grid, newCells } from './grid.ts';
 
 export interface ObjectsAroundColour {
   readonly background: number;
@@ -31,7 +31,7 @@ export function objectsAroundColour(g: Grid, colour: number): ObjectsAroundColou
   const target = cellBounds(g, colour, true);
   if (!target) return null;
   const objects = components(g, { diagonal: true, multicolour: false, background });
-  const ofTarget = new Uint8Array(objects.length);
+  const ofTarget = newCells(objects.length);
   for (let i = 0; i < objects.length; i++) if (firstCellColour(objects[i]!) === colour) ofTarget[i] = 1;
   return { background, target, objects, ofTarget };
 }

@@ -4,7 +4,7 @@
  */
 import { backgroundColour } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 
 /** For each item, how many items (itself included) are the same as it. */
 function tally<T>(items: readonly T[], same: (a: T, b: T) => boolean): number[] {
@@ -39,7 +39,7 @@ export function uniqueColourObject(objects: readonly GridObject[]): GridObject |
   const n = objects.length;
   if (n < 2) return null;
   const counts = new Uint32Array(10);
-  const colours = new Uint8Array(n);
+  const colours = newCells(n);
   for (let i = 0; i < n; i++) {
     colours[i] = objects[i]!.mainColour;
     counts[colours[i]!]!++;
@@ -56,7 +56,7 @@ export function uniqueColourObject(objects: readonly GridObject[]): GridObject |
 /** The part's filled pattern: 1 where a cell is not the part's background, 0 elsewhere. */
 function filledPattern(g: Grid): Grid {
   const background = backgroundColour(g);
-  const out = new Uint8Array(g.cells.length);
+  const out = newCells(g.cells.length);
   for (let i = 0; i < out.length; i++) out[i] = g.cells[i] === background ? 0 : 1;
   return new Grid(g.height, g.width, out);
 }

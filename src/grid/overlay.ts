@@ -1,11 +1,11 @@
 /** Laying same-sized grids over each other, with one colour see-through. */
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 import { backgroundOfCounts } from './most-frequent-colour.ts';
 
 /** The top grid laid over the bottom one: its cells of `transparent` let the bottom show; null unless the sizes match. */
 export function overlay(bottom: Grid, top: Grid, transparent: number): Grid | null {
   if (bottom.height !== top.height || bottom.width !== top.width) return null;
-  const out = bottom.cells.slice();
+  const out = copyCells(bottom.cells);
   const cells = top.cells;
   for (let i = 0; i < out.length; i++) if (cells[i] !== transparent) out[i] = cells[i]!;
   return new Grid(bottom.height, bottom.width, out);
@@ -25,7 +25,7 @@ export function overlayAll(grids: readonly Grid[]): Grid | null {
     for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
   }
   const background = backgroundOfCounts(counts);
-  const out = grids[0]!.cells.slice();
+  const out = copyCells(grids[0]!.cells);
   for (let k = 1; k < grids.length; k++) {
     const cells = grids[k]!.cells;
     for (let i = 0; i < out.length; i++) if (cells[i] !== background) out[i] = cells[i]!;

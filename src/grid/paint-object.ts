@@ -5,7 +5,7 @@
  */
 import { backgroundColour } from './components.ts';
 import { GridObject } from './grid-object.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, newCells, copyCells } from './grid.ts';
 
 /**
  * Writes the object's cells into `cells` (a height × width buffer), shifted by
@@ -45,7 +45,7 @@ export function paintObjectInto(
  */
 export function moveObjects(grid: Grid, objects: readonly GridObject[], moves: ArrayLike<number>, background: number): Grid {
   const { height, width } = grid;
-  const out = grid.cells.slice();
+  const out = copyCells(grid.cells);
   for (let i = 0; i < objects.length; i++) {
     if (moves[2 * i] !== 0 || moves[2 * i + 1] !== 0) paintObjectInto(out, height, width, objects[i]!, background);
   }
@@ -59,7 +59,7 @@ export function moveObjects(grid: Grid, objects: readonly GridObject[], moves: A
 
 /** The grid with every object painted on it in order; later objects cover earlier ones. */
 export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   for (const o of objects) paintObjectInto(out, g.height, g.width, o);
   return new Grid(g.height, g.width, out);
 }
@@ -67,14 +67,14 @@ export function paintObjects(g: Grid, objects: readonly GridObject[]): Grid {
 /** The grid with the cells under every object turned to the background colour. */
 export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
   const background = backgroundColour(g);
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   for (const o of objects) paintObjectInto(out, g.height, g.width, o, background);
   return new Grid(g.height, g.width, out);
 }
 
 /** The grid with every cell outside the object turned to the background colour. */
 export function keepOnlyObject(g: Grid, object: GridObject): Grid {
-  const out = new Uint8Array(g.cells.length).fill(backgroundColour(g));
+  const out = newCells(g.cells.length).fill(backgroundColour(g));
   paintObjectInto(out, g.height, g.width, object);
   return new Grid(g.height, g.width, out);
 }
@@ -86,7 +86,7 @@ export function keepOnlyObject(g: Grid, object: GridObject): Grid {
  */
 export function mapObjects<Other>(g: Grid, objects: readonly GridObject[], transform: (o: GridObject) => GridObject | Other): Grid | null {
   const background = backgroundColour(g);
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   const moved: GridObject[] = [];
   for (const o of objects) {
     paintObjectInto(out, g.height, g.width, o, background);

@@ -4,14 +4,14 @@
  */
 import { forEachBackgroundRun } from './background-runs.ts';
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /**
  * Rays along every column (or row) in one direction: each background cell takes the colour
  * of the nearest non-background cell behind it, if there is one.
  */
 export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Grid {
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   forEachBackgroundRun(g, backgroundColour(g), !alongColumns, (first, step, length, before, after) => {
     const paint = forwards ? before : after;
     if (paint >= 0) for (let k = 0; k < length; k++) out[first + k * step] = paint;
@@ -26,7 +26,7 @@ export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Gr
 export function shootDiagonalRaysDown(g: Grid, towardsRight: boolean): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   const dc = towardsRight ? -1 : 1;
   for (let r = 1; r < height; r++) {
     for (let c = 0; c < width; c++) {
@@ -42,7 +42,7 @@ export function shootDiagonalRaysDown(g: Grid, towardsRight: boolean): Grid {
 export function shootDiagonalRays(g: Grid): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       const v = cells[r * width + c]!;
@@ -70,7 +70,7 @@ export function extendTowardColour(g: Grid, target: number): Grid | null {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
   if (target === background) return null;
-  const out = cells.slice();
+  const out = copyCells(cells);
   const steps: [number, number][] = [[-1, 0], [1, 0], [0, -1], [0, 1]];
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {

@@ -3,7 +3,7 @@
  * largest and the smallest each in a colour, or every object by the rank of its size.
  */
 import { backgroundColour, components } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 import { paintObjectInto } from './paint-object.ts';
 
 /** The first largest object gets `large`, the first smallest `small`; null with fewer than two objects. */
@@ -17,7 +17,7 @@ export function recolourLargestAndSmallest(g: Grid, large: number, small: number
     if (objects[i]!.size < objects[least]!.size) least = i;
   }
   if (biggest === least) return null;
-  const cells = g.cells.slice();
+  const cells = copyCells(g.cells);
   paintObjectInto(cells, g.height, g.width, objects[biggest]!, large);
   paintObjectInto(cells, g.height, g.width, objects[least]!, small);
   return new Grid(g.height, g.width, cells);
@@ -32,7 +32,7 @@ export function recolourBySizeRank(g: Grid): Grid | null {
   if (objects.length === 0) return null;
   const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
   if (sizes.length > 9) return null;
-  const cells = g.cells.slice();
+  const cells = copyCells(g.cells);
   for (const o of objects) paintObjectInto(cells, g.height, g.width, o, sizes.indexOf(o.size) + 1);
   return new Grid(g.height, g.width, cells);
 }

@@ -3,7 +3,7 @@
  * two colours swapped, everything but one colour (or but the background) made one colour.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells, copyCells } from './grid.ts';
 
 /**
  * The grid with every colour c replaced by `target[c]` (`target` holds an entry for every
@@ -19,14 +19,14 @@ export function mapColours(g: Grid, target: Uint8Array): Grid {
     }
   }
   if (!changed) return g;
-  const cells = new Uint8Array(source.length);
+  const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = target[source[i]!]!;
   return new Grid(g.height, g.width, cells);
 }
 
 /** A colour table that changes nothing. */
 function unchangedTable(): Uint8Array {
-  const target = new Uint8Array(256);
+  const target = newCells(256);
   for (let c = 0; c < 256; c++) target[c] = c;
   return target;
 }
@@ -36,7 +36,7 @@ export function recolour(g: Grid, from: number, to: number): Grid {
   const source = g.cells;
   const first = from === to ? -1 : source.indexOf(from);
   if (first < 0) return g;
-  const cells = source.slice();
+  const cells = copyCells(source);
   for (let i = first; i < cells.length; i++) if (cells[i] === from) cells[i] = to;
   return new Grid(g.height, g.width, cells);
 }
@@ -59,14 +59,14 @@ export function swapColours(g: Grid, a: number, b: number): Grid {
 /** Cells of the colour keep it; every other cell becomes the background. */
 export function keepColour(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
-  const target = new Uint8Array(256).fill(background);
+  const target = newCells(256).fill(background);
   target[colour] = colour;
   return mapColours(g, target);
 }
 
 /** Every cell that is not the background gets the colour. */
 export function recolourAllButBackground(g: Grid, colour: number): Grid {
-  const target = new Uint8Array(256).fill(colour);
+  const target = newCells(256).fill(colour);
   const background = backgroundColour(g);
   target[background] = background;
   return mapColours(g, target);

@@ -4,13 +4,13 @@
  * ends).
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /** Non-background cells whose four edge neighbours are all inside the grid and non-background become background. */
 export function hollow(g: Grid): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 1; r < height - 1; r++) {
     for (let c = 1; c < width - 1; c++) {
       const i = r * width + c;
@@ -27,7 +27,7 @@ export function hollow(g: Grid): Grid {
 export function removeLonelyCells(g: Grid): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       const i = r * width + c;

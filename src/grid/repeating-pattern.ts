@@ -3,7 +3,7 @@
  * rows possibly shifted sideways against the one above, which covers diagonal stripes), agrees
  * with every known cell and tells the colour of every unknown one.
  */
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /** How many known cells the search may compare in all, over every tile it tries. */
 const CHECK_BUDGET = 60_000;
@@ -87,7 +87,7 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
         let covered = true;
         for (let u = 0; u < unknown.length && covered; u++) if (stamp[classOf(unknown[u]!, ph, pw, shift)] !== trial) covered = false;
         if (!covered) continue;
-        const out = cells.slice();
+        const out = copyCells(cells);
         for (let u = 0; u < unknown.length; u++) out[unknown[u]!] = tile[classOf(unknown[u]!, ph, pw, shift)]!;
         return new Grid(height, width, out);
       }

@@ -2,12 +2,12 @@
  * Quarter turns, the half turn and the four mirrors of a grid (left-right, top-bottom and the
  * two diagonals): the grid's cells moved, none changed.
  */
-import { Grid } from './grid.ts';
+import { Grid, newCells, copyCells } from './grid.ts';
 
 /** A quarter turn clockwise. */
 export function rotateClockwise(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   // Result is width × height; result (r, c) = source (height - 1 - c, r).
   let i = 0;
   for (let r = 0; r < width; r++) for (let c = 0; c < height; c++) out[i++] = cells[(height - 1 - c) * width + r]!;
@@ -17,7 +17,7 @@ export function rotateClockwise(g: Grid): Grid {
 /** A quarter turn counterclockwise. */
 export function rotateCounterclockwise(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   // Result (r, c) = source (c, width - 1 - r).
   let i = 0;
   for (let r = 0; r < width; r++) for (let c = 0; c < height; c++) out[i++] = cells[c * width + (width - 1 - r)]!;
@@ -26,7 +26,7 @@ export function rotateCounterclockwise(g: Grid): Grid {
 
 /** Half a turn: upside down and back to front. */
 export function rotateHalf(g: Grid): Grid {
-  const out = g.cells.slice();
+  const out = copyCells(g.cells);
   out.reverse();
   return new Grid(g.height, g.width, out);
 }
@@ -34,7 +34,7 @@ export function rotateHalf(g: Grid): Grid {
 /** Mirrored top to bottom: the first row becomes the last. */
 export function flipUpDown(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   for (let r = 0; r < height; r++) out.set(cells.subarray((height - 1 - r) * width, (height - r) * width), r * width);
   return new Grid(height, width, out);
 }
@@ -42,7 +42,7 @@ export function flipUpDown(g: Grid): Grid {
 /** Mirrored left to right: the first column becomes the last. */
 export function flipLeftRight(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   for (let r = 0; r < height; r++) {
     const base = r * width;
     for (let c = 0; c < width; c++) out[base + c] = cells[base + width - 1 - c]!;
@@ -53,7 +53,7 @@ export function flipLeftRight(g: Grid): Grid {
 /** Rows and columns swapped: mirrored along the main diagonal. */
 export function transposeGrid(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   let i = 0;
   for (let r = 0; r < width; r++) for (let c = 0; c < height; c++) out[i++] = cells[c * width + r]!;
   return new Grid(width, height, out);
@@ -62,7 +62,7 @@ export function transposeGrid(g: Grid): Grid {
 /** Mirror along the anti-diagonal (top-right to bottom-left). */
 export function transposeAntidiagonal(g: Grid): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   // Result (r, c) = source (height - 1 - c, width - 1 - r).
   let i = 0;
   for (let r = 0; r < width; r++) for (let c = 0; c < height; c++) out[i++] = cells[(height - 1 - c) * width + (width - 1 - r)]!;

@@ -1,5 +1,5 @@
 /** Scaling a grid by a whole factor: each cell a block, or each block a cell. */
-import { Grid, shapeAllowed } from './grid.ts';
+import { Grid, shapeAllowed, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
 
@@ -8,7 +8,7 @@ export function scaleUp(g: Grid, k: number): Grid | null {
   if (!isCount(k, MOST_COPIES) || !shapeAllowed(g.height * k, g.width * k)) return null;
   const { height, width, cells } = g;
   const outWidth = width * k;
-  const out = new Uint8Array(height * k * outWidth);
+  const out = newCells(height * k * outWidth);
   for (let r = 0; r < height; r++) {
     const rowStart = r * k * outWidth;
     for (let c = 0; c < width; c++) out.fill(cells[r * width + c]!, rowStart + c * k, rowStart + c * k + k);
@@ -28,7 +28,7 @@ function shrinkBlocks(g: Grid, k: number, blockColour: (corner: number) => numbe
   if (height % k !== 0 || width % k !== 0) return null;
   const h = height / k;
   const w = width / k;
-  const out = new Uint8Array(h * w);
+  const out = newCells(h * w);
   for (let r = 0; r < h; r++) {
     for (let c = 0; c < w; c++) {
       const v = blockColour(r * k * width + c * k);

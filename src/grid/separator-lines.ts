@@ -3,7 +3,7 @@
  * panes of a window), the panes they leave between them, and the colour of each pane.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 export interface SeparatorLines {
@@ -54,8 +54,8 @@ export function findSeparatorLines(grid: Grid): SeparatorLines | undefined {
   let best: SeparatorLines | undefined;
   let bestScore = -1;
   for (let colour = 0; colour < 10; colour++) {
-    const rows = new Uint8Array(height);
-    const columns = new Uint8Array(width);
+    const rows = newCells(height);
+    const columns = newCells(width);
     let lines = 0;
     for (let r = 0; r < height; r++) if (rowColour[r] === colour) (rows[r] = 1), lines++;
     for (let c = 0; c < width; c++) if (columnColour[c] === colour) (columns[c] = 1), lines++;
@@ -82,7 +82,7 @@ export function splitAtSeparatorLines(grid: Grid): Grid[] | null {
     for (const [left, right] of columnRuns) {
       const h = bottom - top;
       const w = right - left;
-      const out = new Uint8Array(h * w);
+      const out = newCells(h * w);
       for (let r = 0; r < h; r++) out.set(cells.subarray((top + r) * width + left, (top + r) * width + right), r * w);
       parts.push(new Grid(h, w, out));
     }
@@ -96,7 +96,7 @@ export function paneColours(g: Grid): Grid | null {
   if (!lines) return null;
   const rowRuns = gaps(lines.rows);
   const columnRuns = gaps(lines.columns);
-  const out = new Uint8Array(rowRuns.length * columnRuns.length);
+  const out = newCells(rowRuns.length * columnRuns.length);
   const counts = new Uint32Array(10);
   const { width, cells } = g;
   let k = 0;

@@ -3,7 +3,7 @@
  * touch the border or a cell already taken, keeping their shapes.
  */
 import { backgroundColour, components } from './components.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, newCells } from './grid.ts';
 
 /**
  * Moves every object (non-background cells joined through edges and corners, any colours)
@@ -21,8 +21,8 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
     return r + c;
   });
   const order = objects.map((_, i) => i).sort((a, b) => reach[b]! - reach[a]! || a - b);
-  const out = new Uint8Array(height * width).fill(background);
-  const taken = new Uint8Array(height * width);
+  const out = newCells(height * width).fill(background);
+  const taken = newCells(height * width);
   for (const index of order) {
     const o = objects[index]!;
     const shape = o.shape;

@@ -4,7 +4,7 @@
  */
 import type { GridObject } from './grid-object.ts';
 import { backgroundColour, components } from './components.ts';
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, copyCells } from './grid.ts';
 import { firstCellColour } from './objects-around-colour.ts';
 
 export function stampObjectOnColour(g: Grid, template: GridObject, colour: number): Grid {
@@ -13,7 +13,7 @@ export function stampObjectOnColour(g: Grid, template: GridObject, colour: numbe
   if (colour === background) return g;
   const markers = components(g, { diagonal: true, multicolour: false, background }).filter((o) => firstCellColour(o) === colour);
   if (markers.length === 0) return g;
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (const m of markers) {
     for (let r = 0; r < m.height; r++) {
       for (let c = 0; c < m.width; c++) {

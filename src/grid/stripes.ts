@@ -2,13 +2,13 @@
  * Stripes: every row (or every column) painted in its most frequent colour, and the choice of
  * the direction that agrees best with the grid.
  */
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Each row (alongRows) or column becomes its most frequent colour, the lowest on ties. */
 export function majorityLines(g: Grid, alongRows: boolean): Grid {
   const { height, width, cells } = g;
-  const out = new Uint8Array(cells.length);
+  const out = newCells(cells.length);
   const counts = new Uint16Array(10);
   const lines = alongRows ? height : width;
   const length = alongRows ? width : height;

@@ -3,7 +3,7 @@
  * completing a symmetric picture whose holes hide some cells.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, copyCells } from './grid.ts';
 
 /** Whether the grid equals its left-right mirror image. */
 export function isSymmetricLeftRight(g: Grid): boolean {
@@ -28,7 +28,7 @@ export function isSymmetricTopBottom(g: Grid): boolean {
 export function symmetrise(g: Grid, leftRight: boolean): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = cells.slice();
+  const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       const i = r * width + c;
@@ -95,7 +95,7 @@ export function completeSymmetry(g: Grid, hole: number): Grid | null {
     if (ok && compared > 0) agreeing.push(map);
   }
   if (agreeing.length === 0) return null;
-  const out = cells.slice();
+  const out = copyCells(cells);
   // Each pass copies known cells into holes; a few passes cover compositions of the maps.
   for (let pass = 0; pass < 4 && holes > 0; pass++) {
     let changed = false;

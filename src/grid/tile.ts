@@ -1,6 +1,6 @@
 /** Tiling: a grid repeated to a size or a number of times, and the grid made of copies of itself where its cells are drawn. */
 import { backgroundColour } from './components.ts';
-import { Grid, getSizeCap, shapeAllowed } from './grid.ts';
+import { Grid, getSizeCap, shapeAllowed, newCells } from './grid.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
 
 /** The grid repeated to fill `height` × `width`, starting at the top-left corner; null for a size outside 1 to the size cap. */
@@ -8,7 +8,7 @@ export function repeatToSize(g: Grid, height: number, width: number): Grid | nul
   const cap = getSizeCap();
   if (!isCount(height, cap) || !isCount(width, cap)) return null;
   const { cells } = g;
-  const out = new Uint8Array(height * width);
+  const out = newCells(height * width);
   for (let r = 0; r < height; r++) {
     const source = (r % g.height) * g.width;
     for (let c = 0; c < width; c++) out[r * width + c] = cells[source + (c % g.width)]!;
@@ -30,7 +30,7 @@ export function fractalTile(g: Grid): Grid | null {
   const outWidth = width * width;
   if (!shapeAllowed(outHeight, outWidth)) return null;
   const background = backgroundColour(g);
-  const out = new Uint8Array(outHeight * outWidth).fill(background);
+  const out = newCells(outHeight * outWidth).fill(background);
   for (let br = 0; br < height; br++) {
     for (let bc = 0; bc < width; bc++) {
       if (cells[br * width + bc] === background) continue;
