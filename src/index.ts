@@ -12,6 +12,7 @@ export type { BaseType, FunctionType, Type, Value } from './language/types.ts';
 export type { Expression, LiteralValue, Program, Step } from './language/ast.ts';
 export { parseProgram, parseExpression, ProgramSyntaxError } from './language/parser.ts';
 export { printProgram, printExpression } from './language/printer.ts';
+export { renameStep, inlineStep, ProgramEditError } from './language/edit-program.ts';
 export { checkProgram, ProgramTypeError, type TypeProblem } from './language/checker.ts';
 export { runProgram, type RunResult, type TraceEntry } from './language/interpreter.ts';
 

@@ -6,7 +6,9 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { Grid } from '../src/grid/grid.ts';
 import { parseTask, readTasks, TaskFileError } from '../src/tasks/read-task.ts';
+import { puzzleOf, type Pair, type TestCase } from '../src/tasks/task.ts';
 
 const folder = mkdtempSync(join(tmpdir(), 'pithy-task-files-'));
 afterAll(() => rmSync(folder, { recursive: true, force: true }));
@@ -91,6 +93,58 @@ describe('bad task files', () => {
     expect(task.name).toBe('good');
     expect(task.train[0]!.output.toRows()).toEqual([[0, 1], [1, 0]]);
     expect(task.test[0]!.output).toBeUndefined();
+  });
+});
+
+// Test files are ES modules, so strict mode: a write to a frozen object throws a TypeError
+// instead of being silently ignored.
+describe('a task once read cannot change', () => {
+  const task = parseTask(JSON.stringify(good), 'good.json');
+  const other = Grid.fromRows([[9]]);
+
+  it('its train list cannot grow or lose a pair', () => {
+    const train = task.train as Pair[];
+    expect(() => train.push({ input: other, output: other })).toThrow(TypeError);
+    expect(() => train.pop()).toThrow(TypeError);
+    expect(task.train).toHaveLength(1);
+  });
+
+  it("a pair's input and output cannot be replaced", () => {
+    const pair = task.train[0] as { input: Grid; output: Grid };
+    expect(() => {
+      pair.input = other;
+    }).toThrow(TypeError);
+    expect(() => {
+      pair.output = other;
+    }).toThrow(TypeError);
+    expect(task.train[0]!.input.toRows()).toEqual([[1, 0], [0, 1]]);
+  });
+
+  it("the test list, a test output and the task's name cannot be changed", () => {
+    expect(() => (task.test as TestCase[]).push({ input: other })).toThrow(TypeError);
+    expect(() => {
+      (task.test[0] as { output?: Grid }).output = other;
+    }).toThrow(TypeError);
+    expect(() => {
+      (task as { name: string }).name = 'quay';
+    }).toThrow(TypeError);
+  });
+
+  it('the puzzle made from it is frozen too and shares its demonstrations', () => {
+    const puzzle = puzzleOf(task);
+    expect(puzzle.train).toBe(task.train);
+    expect(() => (puzzle.testInputs as Grid[]).push(other)).toThrow(TypeError);
+    expect(() => {
+      (puzzle as { name: string }).name = 'quay';
+    }).toThrow(TypeError);
+  });
+
+  it('the grids are left unfrozen (a Uint8Array cannot be frozen) and still work', () => {
+    const input = task.train[0]!.input;
+    expect(Object.isFrozen(input.cells)).toBe(false);
+    expect(input.equals(Grid.fromRows([[1, 0], [0, 1]]))).toBe(true);
+    expect(input.get(0, 1)).toBe(0);
+    expect(task.test[0]!.output!.toRows()).toEqual([[0, 0], [2, 2]]);
   });
 });
 

@@ -1,4 +1,8 @@
-/** What solving one task file gives, in a form that crosses threads and lands in JSON lines. */
+/**
+ * What solving one task file gives, in a form that crosses threads and lands in JSON lines.
+ * Built in one expression and never updated, so immer has nothing to do here (DEVELOPERS.md,
+ * "immer").
+ */
 import type { EnumerationStatistics, StopReason } from '../search/enumerator.ts';
 
 export interface ReportedSolution {

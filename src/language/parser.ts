@@ -2,6 +2,7 @@
  * Parses pithy's program text (see printer.ts for the syntax). Every statement sits on one
  * line; errors name line:column and what was expected there.
  */
+import { freeze } from 'immer';
 import type { Expression, LiteralValue, Program, Step } from './ast.ts';
 
 export class ProgramSyntaxError extends Error {
@@ -19,6 +20,12 @@ export class ProgramSyntaxError extends Error {
 
 const IDENTIFIER = /^[a-z_][a-z0-9_]*/;
 const KEYWORDS = new Set(['with', 'answer', 'true', 'false', '_']);
+
+/** True when `word` can name the input or a step: lower-case letters, digits and `_`, not a keyword. */
+export function isName(word: string): boolean {
+  const match = IDENTIFIER.exec(word);
+  return match !== null && match[0] === word && !KEYWORDS.has(word);
+}
 
 class LineReader {
   position = 0;
@@ -156,6 +163,7 @@ export function parseExpression(text: string, source?: string): Expression {
   return e;
 }
 
+/** Parses a program; the tree comes back deeply frozen (edit it with edit-program.ts). */
 export function parseProgram(text: string, source?: string): Program {
   const lines = text.split(/\r?\n/);
   const programComments: string[] = [];
@@ -200,7 +208,7 @@ export function parseProgram(text: string, source?: string): Program {
           tail.fail("end of program after 'answer'");
         }
       }
-      return { comments: programComments, input, steps, answerComments: pending, answer };
+      return freeze({ comments: programComments, input, steps, answerComments: pending, answer }, true);
     }
     if (KEYWORDS.has(word)) {
       r.position = 0;

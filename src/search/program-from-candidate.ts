@@ -1,8 +1,13 @@
 /**
  * Turns a found candidate into a readable program: every call used as an argument becomes a
- * named step (shared when it appears twice), named after its type; sections stay inline,
- * since a step holds a value, not a function.
+ * named step (shared when it appears twice), named after its type (never the input's name);
+ * sections stay inline, since a step holds a value, not a function.
+ *
+ * This runs once per solution, after the search. The tree is built in one pass, so there is
+ * no nested update for immer's `produce` to make; the finished program is frozen with immer,
+ * like every program tree, so a solution's program cannot drift from its printed text.
  */
+import { freeze } from 'immer';
 import type { Expression, Program, Step } from '../language/ast.ts';
 import { printExpression } from '../language/printer.ts';
 import type { Candidate } from './value-store.ts';
@@ -38,14 +43,18 @@ export function programFromCandidate(candidate: Candidate, inputName: string): P
     const existing = named.get(key);
     if (existing) return { kind: 'variable', name: existing };
     const base = STEP_NAMES[c.type] ?? 'value';
-    const n = (used.get(base) ?? 0) + 1;
+    let n = used.get(base) ?? 0;
+    let name: string;
+    do {
+      n++;
+      name = n === 1 ? base : `${base}_${n}`;
+    } while (name === inputName);
     used.set(base, n);
-    const name = n === 1 ? base : `${base}_${n}`;
     named.set(key, name);
     steps.push({ comments: [], name, expression: e });
     return { kind: 'variable', name };
   };
 
   const answer = visit(candidate, false);
-  return { comments: [], input: inputName, steps, answerComments: [], answer };
+  return freeze({ comments: [], input: inputName, steps, answerComments: [], answer }, true);
 }

@@ -5,7 +5,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { Grid, getSizeCap } from '../grid/grid.ts';
-import type { Pair, Task, TestCase } from './task.ts';
+import { freezeTask, type Pair, type Task, type TestCase } from './task.ts';
 
 export class TaskFileError extends Error {
   constructor(
@@ -65,7 +65,10 @@ function readEntry(value: unknown, file: string, path: string): Record<string, u
   return value as Record<string, unknown>;
 }
 
-/** Parses task JSON text; `file` names the source in error messages. */
+/**
+ * Parses task JSON text; `file` names the source in error messages. The task comes back
+ * deeply frozen (see {@link freezeTask}), so nothing can change a demonstration once read.
+ */
 export function parseTask(text: string, file: string, name = basename(file).replace(/\.json$/i, '')): Task {
   let root: unknown;
   try {
@@ -90,7 +93,7 @@ export function parseTask(text: string, file: string, name = basename(file).repl
     const input = readGrid(e.input, file, `$.test[${i}].input`);
     return e.output === undefined ? { input } : { input, output: readGrid(e.output, file, `$.test[${i}].output`) };
   });
-  return { name, path: file, train, test };
+  return freezeTask({ name, path: file, train, test });
 }
 
 export function readTaskFile(file: string): Task {
