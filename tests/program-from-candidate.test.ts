@@ -13,7 +13,7 @@ import { programFromCandidate } from '../src/search/program-from-candidate.ts';
 import type { Candidate } from '../src/search/value-store.ts';
 
 function leaf(type: Type, expression: Expression): Candidate {
-  return { type, cost: 1, values: [], production: undefined, arguments: [], leaf: expression };
+  return { type, cost: 1, values: [], production: undefined, arguments: [], leaf: expression, typeId: 0, signature: undefined };
 }
 
 const input = (name: string): Candidate => leaf('Grid', { kind: 'variable', name });
@@ -21,7 +21,7 @@ const input = (name: string): Candidate => leaf('Grid', { kind: 'variable', name
 function call(name: string, args: Candidate[]): Candidate {
   const primitive = defaultLibrary.get(name)!;
   const production = { primitive, section: false, argumentTypes: primitive.parameters, result: primitive.result, bits: primitive.bits };
-  return { type: primitive.result, cost: 1, values: [], production, arguments: args, leaf: undefined };
+  return { type: primitive.result, cost: 1, values: [], production, arguments: args, leaf: undefined, typeId: 0, signature: undefined };
 }
 
 /** The section `name(_, args...)`. */
@@ -31,7 +31,7 @@ function section(name: string, args: Candidate[]): Candidate {
   if (!isBaseType(open) || !isBaseType(primitive.result)) throw new Error(`${name} cannot be a section`);
   const result = functionType(open, primitive.result);
   const production = { primitive, section: true, argumentTypes: primitive.parameters.slice(1), result, bits: primitive.bits };
-  return { type: result, cost: 1, values: [], production, arguments: args, leaf: undefined };
+  return { type: result, cost: 1, values: [], production, arguments: args, leaf: undefined, typeId: 0, signature: undefined };
 }
 
 /** The program's text, after checking that it parses back and type-checks. */
