@@ -12,6 +12,7 @@ import { colourAt } from '../src/grid/position.ts';
 import { recolourBySizeRank, recolourLargestAndSmallest } from '../src/grid/recolour-by-size.ts';
 import { applyColourMap, keepColour, recolour, recolourAllButBackground, swapColours } from '../src/grid/recolour.ts';
 import { majorityLines, restoreStripes } from '../src/grid/stripes.ts';
+import { undoColourMap } from '../src/grid/undo.ts';
 import { primitive } from '../src/library/primitive.ts';
 
 export const colourPrimitives = [
@@ -44,6 +45,7 @@ export const colourPrimitives = [
     doc: 'Replaces every colour by what the palette maps it to, all at once.',
     example: { input: [[1, 2], [3, 1]], expression: 'apply_palette(grid, {#1 -> #2, #2 -> #1})', output: [[2, 1], [3, 2]] },
     run: (g, palette) => applyColourMap(g, palette.target),
+    inverse: (wanted, palette) => undoColourMap(wanted, palette.target),
   }),
   primitive({
     name: 'swap_colours',
@@ -54,6 +56,7 @@ export const colourPrimitives = [
     doc: 'Cells of the first colour get the second and cells of the second get the first.',
     example: { input: [[1, 0, 2]], expression: 'swap_colours(grid, #1, #2)', output: [[2, 0, 1]] },
     run: swapColours,
+    inverse: swapColours,
   }),
   primitive({
     name: 'keep_colour',

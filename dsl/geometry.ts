@@ -16,6 +16,7 @@ import { slideTowardColour } from '../src/grid/slide-toward.ts';
 import { splitAcross, splitDown, splitIntoSquares } from '../src/grid/split.ts';
 import { fractalTile, repeatToSize, tile } from '../src/grid/tile.ts';
 import { translate } from '../src/grid/translate.ts';
+import { undoScaleUp, undoTile } from '../src/grid/undo.ts';
 import { primitive } from '../src/library/primitive.ts';
 
 export const geometryPrimitives = [
@@ -38,6 +39,7 @@ export const geometryPrimitives = [
     doc: 'Enlarges the grid: every cell becomes a k×k block (k from 1 to 10).',
     example: { input: [[1, 0], [0, 2]], expression: 'scale_up(grid, 2)', output: [[1, 1, 0, 0], [1, 1, 0, 0], [0, 0, 2, 2], [0, 0, 2, 2]] },
     run: scaleUp,
+    inverse: undoScaleUp,
   }),
   primitive({
     name: 'scale_down',
@@ -68,6 +70,7 @@ export const geometryPrimitives = [
     doc: 'Repeats the grid: copies down, then copies across (each 1 to 10).',
     example: { input: [[1, 2]], expression: 'tile(grid, 2, 2)', output: [[1, 2, 1, 2], [1, 2, 1, 2]] },
     run: tile,
+    inverse: undoTile,
   }),
   primitive({
     name: 'repeat_to_size',

@@ -13,6 +13,7 @@ import {
   transposeGrid,
 } from '../src/grid/rotate-reflect.ts';
 import { completeSymmetry, isSymmetricLeftRight, isSymmetricTopBottom, symmetrise } from '../src/grid/symmetry.ts';
+import { undoFourRotations, undoMirrorCopies } from '../src/grid/undo.ts';
 import { primitive } from '../src/library/primitive.ts';
 
 export const symmetryPrimitives = [
@@ -25,6 +26,7 @@ export const symmetryPrimitives = [
     doc: 'Turns the grid a quarter turn clockwise.',
     example: { input: [[1, 2], [3, 4]], expression: 'rotate_clockwise(grid)', output: [[3, 1], [4, 2]] },
     run: rotateClockwise,
+    inverse: rotateCounterclockwise,
   }),
   primitive({
     name: 'rotate_counterclockwise',
@@ -35,6 +37,7 @@ export const symmetryPrimitives = [
     doc: 'Turns the grid a quarter turn counterclockwise.',
     example: { input: [[1, 2, 3], [4, 5, 6]], expression: 'rotate_counterclockwise(grid)', output: [[3, 6], [2, 5], [1, 4]] },
     run: rotateCounterclockwise,
+    inverse: rotateClockwise,
   }),
   primitive({
     name: 'rotate_half',
@@ -45,6 +48,7 @@ export const symmetryPrimitives = [
     doc: 'Turns the grid half a turn (upside down and back to front).',
     example: { input: [[1, 2, 3], [4, 5, 6]], expression: 'rotate_half(grid)', output: [[6, 5, 4], [3, 2, 1]] },
     run: rotateHalf,
+    inverse: rotateHalf,
   }),
   primitive({
     name: 'reflect_vertically',
@@ -55,6 +59,7 @@ export const symmetryPrimitives = [
     doc: 'Mirrors the grid top to bottom (the first row becomes the last).',
     example: { input: [[1, 2], [3, 4]], expression: 'reflect_vertically(grid)', output: [[3, 4], [1, 2]] },
     run: flipUpDown,
+    inverse: flipUpDown,
   }),
   primitive({
     name: 'reflect_horizontally',
@@ -65,6 +70,7 @@ export const symmetryPrimitives = [
     doc: 'Mirrors the grid left to right (the first column becomes the last).',
     example: { input: [[1, 2], [3, 4]], expression: 'reflect_horizontally(grid)', output: [[2, 1], [4, 3]] },
     run: flipLeftRight,
+    inverse: flipLeftRight,
   }),
   primitive({
     name: 'transpose',
@@ -75,6 +81,7 @@ export const symmetryPrimitives = [
     doc: 'Swaps rows and columns (mirror along the main diagonal).',
     example: { input: [[1, 2], [3, 4]], expression: 'transpose(grid)', output: [[1, 3], [2, 4]] },
     run: transposeGrid,
+    inverse: transposeGrid,
   }),
   primitive({
     name: 'reflect_antidiagonal',
@@ -85,6 +92,7 @@ export const symmetryPrimitives = [
     doc: 'Mirrors the grid along the diagonal from the top-right corner to the bottom-left corner.',
     example: { input: [[1, 2, 3], [4, 5, 6]], expression: 'reflect_antidiagonal(grid)', output: [[6, 3], [5, 2], [4, 1]] },
     run: transposeAntidiagonal,
+    inverse: transposeAntidiagonal,
   }),
   primitive({
     name: 'complete_symmetry',
@@ -109,6 +117,7 @@ export const symmetryPrimitives = [
     doc: 'The grid followed on its right by its left-right mirror image (twice as wide).',
     example: { input: [[1, 2], [3, 0]], expression: 'mirror_right(grid)', output: [[1, 2, 2, 1], [3, 0, 0, 3]] },
     run: (g) => mirrorCopies(g, false, true),
+    inverse: (wanted) => undoMirrorCopies(wanted, false, true),
   }),
   primitive({
     name: 'mirror_down',
@@ -119,6 +128,7 @@ export const symmetryPrimitives = [
     doc: 'The grid followed below by its top-bottom mirror image (twice as tall).',
     example: { input: [[1, 2], [3, 0]], expression: 'mirror_down(grid)', output: [[1, 2], [3, 0], [3, 0], [1, 2]] },
     run: (g) => mirrorCopies(g, true, false),
+    inverse: (wanted) => undoMirrorCopies(wanted, true, false),
   }),
   primitive({
     name: 'mirror_four_ways',
@@ -133,6 +143,7 @@ export const symmetryPrimitives = [
       output: [[1, 2, 2, 1], [3, 0, 0, 3], [3, 0, 0, 3], [1, 2, 2, 1]],
     },
     run: (g) => mirrorCopies(g, true, true),
+    inverse: (wanted) => undoMirrorCopies(wanted, true, true),
   }),
   primitive({
     name: 'four_rotations_square',
@@ -147,6 +158,7 @@ export const symmetryPrimitives = [
       output: [[1, 2, 3, 1], [3, 0, 0, 2], [2, 0, 0, 3], [1, 3, 2, 1]],
     },
     run: fourRotationsSquare,
+    inverse: undoFourRotations,
   }),
   primitive({
     name: 'is_symmetric_left_right',

@@ -8,6 +8,8 @@ import type { EnumerationStatistics, StopReason } from '../search/enumerator.ts'
 export interface ReportedSolution {
   readonly program: string;
   readonly bits: number;
+  /** True when the search met it by working back from the outputs through inverses. */
+  readonly throughGoal?: boolean;
 }
 
 export interface TaskReport {

@@ -57,7 +57,7 @@ function main(): void {
     cpuSeconds += (used.user + used.system) / 1e6;
     candidates += result.statistics.candidates;
     pruned += result.statistics.pruned;
-    lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits })) }));
+    lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits, throughGoal: s.throughGoal })) }));
     process.stderr.write('.');
   }
   process.stderr.write('\n');

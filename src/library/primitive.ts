@@ -44,6 +44,7 @@ export interface WorkedExample {
 }
 
 type ValuesOf<P extends readonly Type[]> = { [K in keyof P]: P[K] extends Type ? ValueOf<P[K]> : never };
+type Rest<P extends readonly Type[]> = P extends readonly [Type, ...infer T extends readonly Type[]] ? T : never;
 
 export interface Primitive extends Operation {
   readonly category: Category;
@@ -51,6 +52,13 @@ export interface Primitive extends Operation {
   readonly bits: number;
   readonly doc: string;
   readonly example: WorkedExample;
+  /**
+   * Running the primitive backwards, where that is possible: from the result a call should
+   * give and its other arguments, the first argument that gives it (or null when none does).
+   * The search uses it to work back from the demonstration outputs (goals, see
+   * src/search/goals.ts). Law: when it returns x, `run(x, ...rest)` equals the wanted result.
+   */
+  readonly inverse?: (wanted: never, ...rest: never[]) => unknown;
 }
 
 /** Declares a primitive with its implementation typed from its signature. */
@@ -63,6 +71,7 @@ export function primitive<const P extends readonly Type[], const R extends Type>
   doc: string;
   example: WorkedExample;
   run: (...args: ValuesOf<P>) => ValueOf<R> | Failure | null;
+  inverse?: (wanted: ValueOf<R>, ...rest: ValuesOf<Rest<P>>) => ValueOf<P[0]> | null;
 }): Primitive {
   return record as unknown as Primitive;
 }

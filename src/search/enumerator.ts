@@ -18,6 +18,8 @@ import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
+import { GoalTable, type Goal } from './goals.ts';
+import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
 import { TypeTable } from './type-table.ts';
 import { ValueStore, type Candidate } from './value-store.ts';
@@ -36,6 +38,8 @@ export interface EnumerationLimits {
   /** After the first solution, how many more bits of cost to search for further attempts. */
   readonly extraBits: number;
   readonly pruning: boolean;
+  /** Most bits the calls of one goal may cost (0: no goals; see goals.ts). */
+  readonly goalBits: number;
 }
 
 export interface EnumerationStatistics {
@@ -51,6 +55,12 @@ export interface EnumerationStatistics {
   failed: number;
   /** Highest cost level finished. */
   costReached: number;
+  /** Goals worked back from the outputs through inverses. */
+  goals: number;
+  /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls). */
+  goalSolutions: number;
+  /** Programs that fit the demonstrations but not the output size they settle on a test input. */
+  sizeRejected: number;
   /** Seconds from the start of the search to the first solution (absent when none). */
   secondsToFirstSolution?: number;
 }
@@ -59,6 +69,8 @@ export interface EnumerationOutcome {
   readonly solutions: readonly Candidate[];
   readonly reason: StopReason;
   readonly statistics: EnumerationStatistics;
+  /** The solutions found by meeting a goal. */
+  readonly throughGoals: ReadonlySet<Candidate>;
 }
 
 class Stop extends Error {
@@ -78,13 +90,19 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, sizeRejected: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
   private readonly store: ValueStore;
   private readonly probes: SectionProbes;
   private readonly solutions: Candidate[] = [];
+  /** Solutions met through goals, held until every cheaper cost level is done (or the budget ends). */
+  private readonly pending: Candidate[] = [];
+  private readonly throughGoals = new Set<Candidate>();
+  private readonly goals: GoalTable | undefined;
+  /** Per test input, the output size the demonstrations settle. */
+  private readonly predictedSizes: readonly PredictedSize[];
   private readonly examples: number;
   private readonly trainCount: number;
   private readonly gridType: number;
@@ -129,6 +147,25 @@ export class Enumerator {
     for (let t = 0; t < this.types.size; t++) names.push(this.types.type(t));
     this.store = new ValueStore(limits.pruning, names, this.types.isFunction);
     this.probes = new SectionProbes(inputs);
+    const pairs = outputs.map((output, i) => ({ input: inputs[i]!, output }));
+    this.predictedSizes = predictOutputSizes(pairs, inputs.slice(this.trainCount));
+    this.goals = limits.goalBits > 0 ? this.buildGoals(limits.goalBits) : undefined;
+    this.statistics.goals = this.goals?.count ?? 0;
+  }
+
+  /** Goals from the outputs through every invertible production, with constant other arguments. */
+  private buildGoals(maxCost: number): GoalTable {
+    const leavesByType = new Map<number, Candidate[]>();
+    for (const leaf of this.leaves) {
+      if (!leaf.leaf || leaf.leaf.kind !== 'literal') continue;
+      const list = leavesByType.get(leaf.typeId);
+      if (list) list.push(leaf);
+      else leavesByType.set(leaf.typeId, [leaf]);
+    }
+    const invertible = this.rules
+      .filter((r) => !r.production.section && r.production.primitive.inverse && r.resultType === this.gridType && r.argumentTypes[0] === this.gridType)
+      .map((r) => ({ production: r.production, restTypes: Array.from(r.argumentTypes.subarray(1)) }));
+    return new GoalTable(this.outputs, invertible, leavesByType, { maxCost, maxGoals: 2000 });
   }
 
   private leaf(type: Type, cost: number, values: readonly unknown[], expression: Expression): Candidate {
@@ -147,6 +184,7 @@ export class Enumerator {
           this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
         }
         this.expandLevel(cost);
+        this.acceptPending(cost);
         this.statistics.costReached = cost;
         this.checkBudget();
       }
@@ -154,8 +192,16 @@ export class Enumerator {
       if (!(error instanceof Stop)) throw error;
       reason = error.reason;
     }
+    if (reason !== 'solved') {
+      // The budget ended (or every cost was tried): what goals met is the best found.
+      try {
+        this.acceptPending(Infinity);
+      } catch (error) {
+        if (!(error instanceof Stop)) throw error;
+      }
+    }
     if (this.solutions.length > 0) reason = 'solved';
-    return { solutions: this.solutions, reason, statistics: this.statistics };
+    return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals };
   }
 
   /** Every production whose bits and cheapest arguments fit in this cost. */
@@ -260,16 +306,65 @@ export class Enumerator {
     };
     store.add(candidate, hash);
     this.statistics.kept++;
-    if (typeId === this.gridType) this.checkSolution(candidate);
+    if (typeId === this.gridType) {
+      this.checkSolution(candidate);
+      if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
+    }
+  }
+
+  /** Wraps a candidate that equals a goal's wanted grids in the goal's calls; keeps the result as a pending solution. */
+  private meetGoal(found: Candidate, goal: Goal): void {
+    let current = found;
+    for (const step of goal.steps) {
+      const operation = step.production.primitive;
+      const values = new Array<unknown>(this.examples);
+      const call = new Array<unknown>(1 + step.rest.length);
+      let cost = current.cost + step.bits;
+      for (const leaf of step.rest) cost += leaf.cost;
+      for (let i = 0; i < this.examples; i++) {
+        call[0] = current.values[i];
+        for (let j = 0; j < step.rest.length; j++) call[j + 1] = step.rest[j]!.values[i];
+        const v = applyOperation(operation, call);
+        if (v === FAILURE) return;
+        values[i] = v;
+      }
+      current = { type: 'Grid', typeId: this.gridType, cost, values, production: step.production, arguments: [current, ...step.rest], leaf: undefined, signature: undefined };
+    }
+    for (let i = 0; i < this.trainCount; i++) if (!(current.values[i] as Grid).equals(this.outputs[i]!)) return;
+    this.pending.push(current);
+  }
+
+  /** Takes pending goal solutions of at most this cost, cheapest first. */
+  private acceptPending(upTo: number): void {
+    if (this.pending.length === 0) return;
+    this.pending.sort((a, b) => a.cost - b.cost);
+    while (this.pending.length > 0 && this.pending[0]!.cost <= upTo) this.accept(this.pending.shift()!, true);
   }
 
   /** A kept grid candidate equal to every demonstration output is a solution. */
   private checkSolution(candidate: Candidate): void {
     const values = candidate.values;
     for (let i = 0; i < this.trainCount; i++) if (!(values[i] as Grid).equals(this.outputs[i]!)) return;
-    // Attempts must differ on the test inputs (pruning guarantees it; without pruning, check).
-    if (!this.limits.pruning && this.solutions.some((s) => sameTestOutputs(s.values, values, this.trainCount))) return;
+    this.acceptPending(candidate.cost - 1);
+    this.accept(candidate, false);
+  }
+
+  /** Takes a program that fits the demonstrations as an attempt, unless it breaks the settled output size or repeats an attempt. */
+  private accept(candidate: Candidate, throughGoal: boolean): void {
+    const values = candidate.values;
+    for (let i = this.trainCount; i < this.examples; i++) {
+      if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
+        this.statistics.sizeRejected++;
+        return;
+      }
+    }
+    // Attempts must differ on the test inputs.
+    if (this.solutions.some((s) => sameTestOutputs(s.values, values, this.trainCount))) return;
     this.solutions.push(candidate);
+    if (throughGoal) {
+      this.throughGoals.add(candidate);
+      this.statistics.goalSolutions++;
+    }
     if (this.solutions.length === 1) {
       this.firstSolutionCost = candidate.cost;
       const now = performance.now();

@@ -28,6 +28,8 @@ export interface SolveOptions {
   readonly pruning?: boolean;
   /** After the first solution, how many more bits to search for further attempts (default 6). */
   readonly extraBits?: number;
+  /** Most bits of calls worked back from the outputs through inverses (default 12; 0 turns goals off). */
+  readonly goalBits?: number;
   readonly library?: Library;
 }
 
@@ -38,6 +40,8 @@ export interface Solution {
   readonly bits: number;
   /** The program's output for each test input, in file order. */
   readonly testOutputs: readonly Grid[];
+  /** True when the search met it by working back from the outputs (a goal, see src/search/goals.ts). */
+  readonly throughGoal: boolean;
 }
 
 export interface SolveResult {
@@ -74,11 +78,12 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     attempts,
     extraBits: options.extraBits ?? 6,
     pruning: options.pruning ?? true,
+    goalBits: options.goalBits ?? 12,
   }, INPUT_NAME);
   const trainCount = outputs.length;
   const solutions: Solution[] = outcome.solutions.slice(0, attempts).map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[] };
+    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c) };
   });
   return { task: puzzle.name, solutions, reason: outcome.reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
 }
