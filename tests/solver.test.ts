@@ -95,6 +95,31 @@ describe('the solver', () => {
     expect(result.reason).toBe('memory');
   });
 
+  it('holds memory to the cap: it stops once the counted bytes reach it, not long after', () => {
+    for (const cap of [50_000, 400_000, 2_000_000]) {
+      const result = solvePuzzle(hard, { maxStoreBytes: cap, maxCandidates: 10_000_000, timeLimitSeconds: 3600 });
+      expect(result.reason).toBe('memory');
+      expect(result.statistics.bytesHeld).toBeGreaterThanOrEqual(cap);
+      // Budgets are checked every 1,024 candidates: what those can add is the only overshoot.
+      expect(result.statistics.bytesHeld).toBeLessThan(cap + 1024 * 4 * 1200);
+    }
+  });
+
+  it('counts the cells of the grids it keeps: a store of 30×30 grids fills sooner than one of 2×2 grids', () => {
+    const wide = (rows: number[][], size: number): Grid => Grid.fromRows(Array.from({ length: size }, (_, r) => Array.from({ length: size }, (_, c) => rows[r % rows.length]![c % rows[0]!.length]!)));
+    const task = (size: number): Puzzle => ({
+      name: `size-${size}`,
+      train: hard.train.map((p) => ({ input: wide(p.input.toRows(), size), output: Grid.fromRows([[1, 2], [3, 4], [5, 6], [7, 8], [9, 0]]) })),
+      testInputs: [wide([[1]], size)],
+    });
+    const options = { maxStoreBytes: 3_000_000, maxCandidates: 10_000_000, timeLimitSeconds: 3600 };
+    const big = solvePuzzle(task(30), options);
+    const small = solvePuzzle(task(2), options);
+    expect(big.reason).toBe('memory');
+    // Same cap: the big grids' cells use it up after far fewer kept candidates.
+    expect(big.statistics.kept * 3).toBeLessThan(small.statistics.kept);
+  });
+
   it('reports an exhausted search when every program up to the cost cap was tried', () => {
     const result = solvePuzzle(hard, { maxBits: 6 });
     expect(result.reason).toBe('exhausted');

@@ -61,6 +61,8 @@ export interface EnumerationStatistics {
   goalSolutions: number;
   /** Programs that fit the demonstrations but not the output size they settle on a test input. */
   sizeRejected: number;
+  /** Bytes the search held when it stopped: kept values (cells counted) and memoised analyses. */
+  bytesHeld: number;
   /** Seconds from the start of the search to the first solution (absent when none). */
   secondsToFirstSolution?: number;
 }
@@ -90,7 +92,7 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, sizeRejected: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, sizeRejected: 0, bytesHeld: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
@@ -201,6 +203,7 @@ export class Enumerator {
       }
     }
     if (this.solutions.length > 0) reason = 'solved';
+    this.statistics.bytesHeld = this.bytesHeld;
     return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals };
   }
 
