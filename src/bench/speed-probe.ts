@@ -6,7 +6,11 @@
  * every run, so the figure compares two versions of the search, and the programs found can be
  * compared too (`--programs FILE` writes them as JSON lines: task, program text, bits).
  *
- *   npm run bench:speed -- [--tasks N] [--candidates N] [--dataset DIR] [--programs FILE]
+ * With `--pruning-at BITS` it also runs every task of the sample to that cost level (every
+ * program up to BITS, no candidate cap) with observational-equivalence pruning on and then
+ * off, so the two are compared at the same depth rather than in the same time.
+ *
+ *   npm run bench:speed -- [--tasks N] [--candidates N] [--dataset DIR] [--programs FILE] [--pruning-at BITS]
  */
 import { existsSync, writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
@@ -37,8 +41,9 @@ function main(): void {
     .option('--candidates <n>', 'candidate cap per task', positiveNumber('--candidates', true), 300_000)
     .option('--dataset <dir>', 'task directory', defaultDataset)
     .option('--programs <file>', 'write each task\'s programs as JSON lines')
+    .option('--pruning-at <bits>', 'also compare pruning on and off, running every task to this cost level', positiveNumber('--pruning-at', true))
     .parse(process.argv);
-  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string }>();
+  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number }>();
   if (!existsSync(options.dataset)) {
     process.stderr.write(`${options.dataset}: not found; the speed probe needs the public training set there (see ../shared/datasets/arc-agi-1-training/SOURCE.md)\n`);
     process.exitCode = 2;
@@ -69,6 +74,45 @@ function main(): void {
       `CPU seconds: ${cpuSeconds.toFixed(2)}`,
       `candidate evaluations per CPU second: ${Math.round(candidates / cpuSeconds)}`,
       `share pruned as equivalent: ${((100 * pruned) / Math.max(1, candidates)).toFixed(1)}%`,
+    ].join('\n') + '\n',
+  );
+  if (options.pruningAt !== undefined) comparePruning(files, options.pruningAt);
+}
+
+/** Every task to the same cost level, pruning on then off: candidates, kept, CPU seconds. */
+function comparePruning(files: readonly string[], bits: number): void {
+  const totals = { on: { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, seconds: 0 }, off: { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, seconds: 0 } };
+  for (const file of files) {
+    const puzzle = puzzleOf(readTaskFile(file));
+    for (const pruning of [true, false]) {
+      const before = process.cpuUsage();
+      // Attempts beyond reach, so every task runs to the same level whether or not it is solved.
+      const result = solvePuzzle(puzzle, { maxBits: bits, pruning, attempts: 1000, extraBits: 1000, goalBits: 0, timeLimitSeconds: 3600, maxCandidates: 1e12, maxStoreBytes: 8e9 });
+      const used = process.cpuUsage(before);
+      const t = pruning ? totals.on : totals.off;
+      t.candidates += result.statistics.candidates;
+      t.kept += result.statistics.kept;
+      t.pruned += result.statistics.pruned;
+      t.sectionsPruned += result.statistics.sectionsPruned;
+      t.seconds += (used.user + used.system) / 1e6;
+    }
+    process.stderr.write(':');
+  }
+  process.stderr.write('\n');
+  const { on, off } = totals;
+  const ratio = (a: number, b: number) => (b === 0 ? 'n/a' : (a / b).toFixed(2));
+  process.stdout.write(
+    [
+      '',
+      `every program up to ${bits} bits, pruning on and off, the same ${files.length} tasks:`,
+      '',
+      '| figure | pruning on | pruning off | on / off |',
+      '| --- | ---: | ---: | ---: |',
+      `| candidates evaluated | ${on.candidates} | ${off.candidates} | ${ratio(on.candidates, off.candidates)} |`,
+      `| candidates kept | ${on.kept} | ${off.kept} | ${ratio(on.kept, off.kept)} |`,
+      `| share pruned as equivalent | ${((100 * on.pruned) / Math.max(1, on.candidates)).toFixed(1)}% | ${((100 * off.pruned) / Math.max(1, off.candidates)).toFixed(1)}% | n/a |`,
+      `| of which sections pruned by signature | ${on.sectionsPruned} | ${off.sectionsPruned} | n/a |`,
+      `| CPU seconds | ${on.seconds.toFixed(2)} | ${off.seconds.toFixed(2)} | ${ratio(on.seconds, off.seconds)} |`,
     ].join('\n') + '\n',
   );
 }
