@@ -56,11 +56,14 @@ export function applyOperation(operation: Operation, args: readonly unknown[]): 
  * others bound. Applying it goes through {@link applyOperation} like any call.
  */
 export function sectionOf(operation: Operation, bound: readonly unknown[]): (argument: unknown) => unknown {
-  const args = new Array<unknown>(bound.length + 1);
-  for (let j = 0; j < bound.length; j++) args[j + 1] = bound[j];
+  // One argument array per section, reused for every call: a section's bound arguments are
+  // never functions, so a call cannot re-enter the same section while the array is in use.
+  const call = new Array<unknown>(bound.length + 1);
+  for (let j = 0; j < bound.length; j++) call[j + 1] = bound[j];
   return (argument: unknown) => {
-    const call = args.slice();
     call[0] = argument;
-    return applyOperation(operation, call);
+    const result = applyOperation(operation, call);
+    call[0] = undefined;
+    return result;
   };
 }

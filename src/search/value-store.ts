@@ -99,12 +99,13 @@ export class ValueStore {
     const slot = this.byHash[typeId]!.get(hash);
     if (slot === undefined) return false;
     const type = this.typeNames[typeId]!;
-    const same = (c: Candidate): boolean => (isFunction ? SectionProbes.equal(type, c.signature!, signature!) : sameValues(type as BaseType, c.values, values));
-    if (Array.isArray(slot)) {
-      for (const c of slot) if (same(c)) return true;
-      return false;
-    }
-    return same(slot as Candidate);
+    if (!Array.isArray(slot)) return this.same(type, isFunction, slot as Candidate, values, signature);
+    for (let k = 0; k < slot.length; k++) if (this.same(type, isFunction, slot[k]!, values, signature)) return true;
+    return false;
+  }
+
+  private same(type: Type, isFunction: boolean, kept: Candidate, values: readonly unknown[], signature: readonly unknown[] | undefined): boolean {
+    return isFunction ? SectionProbes.equal(type, kept.signature!, signature!) : sameValues(type as BaseType, kept.values, values);
   }
 
   add(candidate: Candidate, hash: number): void {
