@@ -55,14 +55,23 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
   const queue = queueBuffer;
   seen.fill(0, 0, cells.length);
   const objects: GridObject[] = [];
+  const { background, multicolour, diagonal } = options;
   for (let start = 0; start < cells.length; start++) {
-    if (seen[start] || cells[start] === options.background) continue;
+    if (seen[start] || cells[start] === background) continue;
     const colour = cells[start]!;
     let head = 0;
     let tail = 0;
     queue[tail++] = start;
     seen[start] = 1;
     let top = height, left = width, bottom = -1, right = -1;
+    // Visits neighbour n: joins the object when unseen, not background and (one colour) the same colour.
+    const visit = (n: number): void => {
+      if (seen[n]) return;
+      const v = cells[n]!;
+      if (v === background || (!multicolour && v !== colour)) return;
+      seen[n] = 1;
+      queue[tail++] = n;
+    };
     while (head < tail) {
       const index = queue[head++]!;
       const r = (index / width) | 0;
@@ -71,22 +80,19 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
       if (r > bottom) bottom = r;
       if (c < left) left = c;
       if (c > right) right = c;
-      for (let dr = -1; dr <= 1; dr++) {
-        const nr = r + dr;
-        if (nr < 0 || nr >= height) continue;
-        for (let dc = -1; dc <= 1; dc++) {
-          if (dr === 0 && dc === 0) continue;
-          if (!options.diagonal && dr !== 0 && dc !== 0) continue;
-          const nc = c + dc;
-          if (nc < 0 || nc >= width) continue;
-          const n = nr * width + nc;
-          if (seen[n]) continue;
-          const v = cells[n]!;
-          if (v === options.background) continue;
-          if (!options.multicolour && v !== colour) continue;
-          seen[n] = 1;
-          queue[tail++] = n;
-        }
+      const up = r > 0;
+      const down = r < height - 1;
+      const leftOpen = c > 0;
+      const rightOpen = c < width - 1;
+      if (up) visit(index - width);
+      if (down) visit(index + width);
+      if (leftOpen) visit(index - 1);
+      if (rightOpen) visit(index + 1);
+      if (diagonal) {
+        if (up && leftOpen) visit(index - width - 1);
+        if (up && rightOpen) visit(index - width + 1);
+        if (down && leftOpen) visit(index + width - 1);
+        if (down && rightOpen) visit(index + width + 1);
       }
     }
     const h = bottom - top + 1;
