@@ -41,9 +41,10 @@ function main(): void {
     .option('--candidates <n>', 'candidate cap per task', positiveNumber('--candidates', true), 300_000)
     .option('--dataset <dir>', 'task directory', defaultDataset)
     .option('--programs <file>', 'write each task\'s programs as JSON lines')
+    .option('--no-goals', 'switch off working back from the outputs (goals)')
     .option('--pruning-at <bits>', 'also compare pruning on and off, running every task to this cost level', positiveNumber('--pruning-at', true))
     .parse(process.argv);
-  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number }>();
+  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number; goals: boolean }>();
   if (!existsSync(options.dataset)) {
     process.stderr.write(`${options.dataset}: not found; the speed probe needs the public training set there (see ../shared/datasets/arc-agi-1-training/SOURCE.md)\n`);
     process.exitCode = 2;
@@ -53,15 +54,24 @@ function main(): void {
   let candidates = 0;
   let cpuSeconds = 0;
   let pruned = 0;
+  let solved = 0;
+  let throughGoals = 0;
   const lines: string[] = [];
   for (const file of files) {
-    const puzzle = puzzleOf(readTaskFile(file));
+    const task = readTaskFile(file);
+    const puzzle = puzzleOf(task);
     const before = process.cpuUsage();
-    const result = solvePuzzle(puzzle, { maxCandidates: options.candidates, timeLimitSeconds: 3600 });
+    const result = solvePuzzle(puzzle, { maxCandidates: options.candidates, timeLimitSeconds: 3600, ...(options.goals ? {} : { goalBits: 0 }) });
     const used = process.cpuUsage(before);
     cpuSeconds += (used.user + used.system) / 1e6;
     candidates += result.statistics.candidates;
     pruned += result.statistics.pruned;
+    // Scoring only, after the search: the test outputs were never shown to it.
+    const right = task.test.every((t, i) => t.output !== undefined && result.solutions.some((s) => s.testOutputs[i]!.equals(t.output!)));
+    if (right) {
+      solved++;
+      if (result.solutions.some((s, k) => s.throughGoal && task.test.every((t, i) => result.solutions[k]!.testOutputs[i]!.equals(t.output!)))) throughGoals++;
+    }
     lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits, throughGoal: s.throughGoal })) }));
     process.stderr.write('.');
   }
@@ -74,6 +84,7 @@ function main(): void {
       `CPU seconds: ${cpuSeconds.toFixed(2)}`,
       `candidate evaluations per CPU second: ${Math.round(candidates / cpuSeconds)}`,
       `share pruned as equivalent: ${((100 * pruned) / Math.max(1, candidates)).toFixed(1)}%`,
+      `tasks solved (every test output among the attempts): ${solved} / ${files.length}, ${throughGoals} of them by a program met through a goal${options.goals ? '' : ' (goals off)'}`,
     ].join('\n') + '\n',
   );
   if (options.pruningAt !== undefined) comparePruning(files, options.pruningAt);
