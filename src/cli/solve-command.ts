@@ -43,7 +43,7 @@ export function stopWords(reason: TaskReport['reason']): string {
     case 'candidates':
       return 'candidate cap reached';
     case 'memory':
-      return 'value store full';
+      return 'memory cap reached';
     case 'exhausted':
       return 'every program up to the cost cap tried';
     case 'solved':
