@@ -88,7 +88,10 @@ export class ResultsWriter {
   }
 
   appendText(text: string): void {
-    writeSync(this.descriptor, text);
+    const bytes = Buffer.from(text, 'utf8');
+    // A write may take fewer bytes than given (a nearly full disk); go on until all are written
+    // or the write fails with an error, which stops the run.
+    for (let written = 0; written < bytes.length; ) written += writeSync(this.descriptor, bytes, written, bytes.length - written);
     fsyncSync(this.descriptor);
   }
 
