@@ -6,38 +6,47 @@
 import { basename, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { runResumable, type ResumableRunOutcome } from '../batch/resumable-run.ts';
+import { selectShard, shardLabel } from '../batch/shard.ts';
+import { taskNameOf } from '../batch/solve-file.ts';
 import { summarise, summaryLines } from '../batch/summary.ts';
 import { ProgressBar } from '../output/progress-bar.ts';
 import { catchInterruptions } from './interrupt.ts';
 import { reportRunProblem } from './run-problems.ts';
+import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
 import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
-interface EvalFlags extends SharedSolveFlags {
+interface EvalFlags extends SharedSolveFlags, ShardFlags {
   results?: string;
   json?: boolean;
   verbose?: boolean;
 }
 
 export function registerEvalCommand(program: Command): void {
-  addSolveFlags(
-    program
-      .command('eval')
-      .description('solve every task in a directory with test outputs hidden, then score the attempts against them')
-      .argument('<dir>', 'directory of task JSON files'),
+  addShardFlags(
+    addSolveFlags(
+      program
+        .command('eval')
+        .description('solve every task in a directory with test outputs hidden, then score the attempts against them')
+        .argument('<dir>', 'directory of task JSON files'),
+    ),
   )
-    .option('--results <file>', 'JSON-lines file of per-task results; an existing one made with the same settings is resumed (default: eval-<dir>.jsonl)')
+    .option('--results <file>', 'JSON-lines file of per-task results; an existing one made with the same settings is resumed (default: eval-<dir>.jsonl, or eval-<dir>-shard-I-of-N.jsonl for a shard)')
     .option('--verbose', 'print a line per task as it finishes')
     .option('--json', 'print the summary as JSON')
     .action(async (dir: string, flags: EvalFlags) => {
-      const { files, problems } = expandTaskPaths([dir]);
+      const shard = resolveShard(flags);
+      if (shard === null) return;
+      const { files: allFiles, problems } = expandTaskPaths([dir]);
       for (const p of problems) writeError(p);
       if (problems.length > 0) {
         process.exitCode = 1;
         return;
       }
-      const resultsPath = flags.results ?? `eval-${basename(resolve(dir))}.jsonl`;
+      const files = selectShard(allFiles, taskNameOf, shard);
+      if (shard !== undefined) announceShard(shard, files.length, allFiles.length);
+      const resultsPath = flags.results ?? `eval-${basename(resolve(dir))}${shard ? `-shard-${shard.index}-of-${shard.count}` : ''}.jsonl`;
       const interruption = catchInterruptions();
       let bar: ProgressBar | undefined;
       let solvedNow = 0;
@@ -47,6 +56,7 @@ export function registerEvalCommand(program: Command): void {
           files,
           resultsFile: resultsPath,
           settings: settingsFrom(flags),
+          ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
           retry: flags.retry,
           score: true,
           batch: { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal },

@@ -8,15 +8,18 @@ import type { Command } from 'commander';
 import { recordPathFor } from '../batch/predictions.ts';
 import { replaceFile } from '../batch/results-file.ts';
 import { runResumable } from '../batch/resumable-run.ts';
+import { selectShard, shardLabel } from '../batch/shard.ts';
+import { taskNameOf } from '../batch/solve-file.ts';
 import { solveFiles } from '../batch/solve-files.ts';
 import type { TaskReport } from '../batch/task-report.ts';
 import { catchInterruptions } from './interrupt.ts';
 import { reportRunProblem } from './run-problems.ts';
+import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
 import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
-interface SolveFlags extends SharedSolveFlags {
+interface SolveFlags extends SharedSolveFlags, ShardFlags {
   json?: boolean;
   predictions?: string;
   force?: boolean;
@@ -54,18 +57,24 @@ export function stopWords(reason: TaskReport['reason']): string {
 }
 
 export function registerSolveCommand(program: Command): void {
-  addSolveFlags(
-    program
-      .command('solve')
-      .description('find the shortest program for each task (files or directories); test outputs are never read')
-      .argument('<paths...>', 'task JSON files or directories of them'),
+  addShardFlags(
+    addSolveFlags(
+      program
+        .command('solve')
+        .description('find the shortest program for each task (files or directories); test outputs are never read')
+        .argument('<paths...>', 'task JSON files or directories of them'),
+    ),
   )
     .option('--predictions <file>', 'append one JSON line per task, as each finishes, with the attempts for each test input; an existing file made with the same settings is resumed')
     .option('--force', 'let --predictions replace an existing file instead of resuming it')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
-      const { files, problems } = expandTaskPaths(paths);
+      const shard = resolveShard(flags);
+      if (shard === null) return;
+      const { files: allFiles, problems } = expandTaskPaths(paths);
       for (const p of problems) writeError(p);
+      const files = selectShard(allFiles, taskNameOf, shard);
+      if (shard !== undefined) announceShard(shard, files.length, allFiles.length);
       const predictions = flags.predictions;
       const record = predictions !== undefined ? recordPathFor(predictions) : undefined;
       if (predictions !== undefined && record !== undefined) {
@@ -91,6 +100,7 @@ export function registerSolveCommand(program: Command): void {
             resultsFile: record,
             predictionsFile: predictions,
             settings: settingsFrom(flags),
+            ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
             retry: flags.retry,
             batch,
             onPlan: (plan) => {
