@@ -38,7 +38,8 @@ export async function solveFiles(files: readonly string[], options: BatchOptions
   const jobs = Math.max(1, Math.min(options.jobs ?? 1, files.length || 1));
   const memory = workerMemory(options.memoryCapMb ?? DEFAULT_MEMORY_CAP_MB);
   const solve: Omit<SolveOptions, 'library'> = { ...options.solve, maxStoreBytes: memory.maxStoreBytes };
-  const graceMs = ((solve.timeLimitSeconds ?? 20) + 30) * 1000;
+  // Timers take at most 2^31 - 1 ms (about 24 days); a longer wait would fire at once.
+  const graceMs = Math.min(((solve.timeLimitSeconds ?? 20) + 30) * 1000, 2 ** 31 - 1);
   const reports = new Array<TaskReport | undefined>(files.length);
   const stop = new AbortController();
   const outer = options.signal;
