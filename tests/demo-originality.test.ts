@@ -24,9 +24,18 @@ const datasetFolder = resolve(repoRoot, '../shared/datasets/arc-agi-1-training')
 const demoFolder = join(repoRoot, 'tasks-demo');
 const datasetPresent = existsSync(datasetFolder);
 
-if (!datasetPresent) {
+/** Set by .ci/run: there the check must run, so a missing dataset fails instead of skipping. */
+const datasetRequired = process.env.PITHY_REQUIRE_DATASETS === '1';
+
+if (!datasetPresent && !datasetRequired) {
   console.log(`demo-originality: skipped, the public training set is not at ${datasetFolder}`);
 }
+
+describe.runIf(datasetRequired)('the public training set, required here (PITHY_REQUIRE_DATASETS=1)', () => {
+  it('is present beside the repository', () => {
+    expect(datasetPresent, `the public training set is not at ${datasetFolder}; place it there or unset PITHY_REQUIRE_DATASETS`).toBe(true);
+  });
+});
 
 /** Every program the text gives when each colour literal `#d` takes every colour 0–9. */
 function colourVariants(text: string): string[] {

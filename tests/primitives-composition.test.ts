@@ -2,7 +2,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { compositionPrimitives } from '../dsl/composition.ts';
-import { backgroundColour, components } from '../src/grid/components.ts';
+import { components } from '../src/grid/components.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 import { EMPTY, Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { GridObject } from '../src/grid/grid-object.ts';
@@ -37,7 +38,7 @@ const G = Grid.fromRows;
 /** Objects of the grid under one of the four extraction rules. */
 const arbitraryGridAndObjects = fc
   .tuple(arbitraryGrid(), fc.boolean(), fc.boolean())
-  .map(([g, diagonal, multicolour]) => [g, components(g, { diagonal, multicolour, background: backgroundColour(g) })] as const);
+  .map(([g, diagonal, multicolour]) => [g, components(g, { diagonal, multicolour, background: backgroundOf(g) })] as const);
 
 describe('composition laws', () => {
   it('painting an object taken from the grid leaves the grid unchanged', () => {
@@ -52,7 +53,7 @@ describe('composition laws', () => {
   it('erasing then painting an object restores the grid; erasing leaves only background under it', () => {
     fc.assert(
       fc.property(arbitraryGridAndObjects, ([g, objects]) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         for (const o of objects) {
           const erased = grid('erase_object', g, o);
           expect(grid('paint_object', erased, o).equals(g)).toBe(true);
@@ -71,7 +72,7 @@ describe('composition laws', () => {
     fc.assert(
       fc.property(arbitraryGridAndObjects, ([g, objects]) => {
         const erased = grid('erase_objects', g, objects);
-        expect(erased.equals(Grid.filled(g.height, g.width, backgroundColour(g)))).toBe(true);
+        expect(erased.equals(Grid.filled(g.height, g.width, backgroundOf(g)))).toBe(true);
       }),
     );
   });

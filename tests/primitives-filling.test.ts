@@ -2,7 +2,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fillingPrimitives } from '../dsl/filling.ts';
-import { backgroundColour } from '../src/grid/components.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { evaluateExpression } from '../src/language/interpreter.ts';
@@ -49,7 +49,7 @@ describe('filling laws', () => {
   it('the filling primitives never change a non-background cell', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         for (const [name, takesColour] of ONLY_PAINT_BACKGROUND) {
           const out = takesColour ? grid(name, g, colour) : grid(name, g);
           for (let i = 0; i < g.cells.length; i++) if (g.cells[i] !== background) expect(out.cells[i]).toBe(g.cells[i]);
@@ -65,8 +65,8 @@ describe('filling laws', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
         const once = grid('fill_enclosed', g, colour);
-        const after = backgroundColour(once);
-        if (after !== backgroundColour(g) && after !== colour) return;
+        const after = backgroundOf(once);
+        if (after !== backgroundOf(g) && after !== colour) return;
         expect(grid('fill_enclosed', once, colour).equals(once)).toBe(true);
       }),
     );
@@ -88,7 +88,7 @@ describe('filling laws', () => {
   it('hollow never adds a non-background cell, and keeps every cell on the border', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid('hollow', g);
         for (let r = 0; r < g.height; r++) {
           for (let c = 0; c < g.width; c++) {
@@ -105,10 +105,10 @@ describe('filling laws', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const down = grid('shoot_rays_down', g);
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         for (const name of ['shoot_rays_down', 'shoot_rays_up', 'shoot_rays_left', 'shoot_rays_right']) {
           const once = grid(name, g);
-          if (backgroundColour(once) === background) expect(grid(name, once).equals(once)).toBe(true);
+          if (backgroundOf(once) === background) expect(grid(name, once).equals(once)).toBe(true);
         }
         for (let c = 0; c < g.width; c++) {
           let seen = false;
@@ -139,7 +139,7 @@ describe('filling laws', () => {
   it('surround paints exactly the background cells next to non-background ones', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         if (colour === background) return;
         const out = grid('surround', g, colour);
         for (let r = 0; r < g.height; r++) {
@@ -168,7 +168,7 @@ describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal 
   it('connect_same_colour_with paints exactly the gaps connect_same_colour fills, in the given colour', () => {
     fc.assert(
       fc.property(arbitraryGrid(), colour, (g, c) => {
-        if (c === backgroundColour(g)) return;
+        if (c === backgroundOf(g)) return;
         const plain = grid('connect_same_colour', g);
         const painted = grid('connect_same_colour_with', g, c);
         expect(changed(g, painted)).toEqual(changed(g, plain));
@@ -180,7 +180,7 @@ describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal 
   it('surround_colour changes only cells that surround changes, and exactly those next to the first colour', () => {
     fc.assert(
       fc.property(arbitraryGrid(), colour, colour, (g, source, c) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         if (c === background || source === background) return;
         const out = grid('surround_colour', g, source, c);
         const all = grid('surround', g, c);
@@ -220,7 +220,7 @@ describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal 
   it('fill_empty_lines fills exactly the rows and columns that are all background', () => {
     fc.assert(
       fc.property(arbitraryGrid(), colour, (g, c) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid('fill_empty_lines', g, c);
         const emptyRow = (r: number) => g.toRows()[r]!.every((v) => v === background);
         const emptyColumn = (col: number) => g.toRows().every((row) => row[col] === background);
@@ -234,7 +234,7 @@ describe('connecting, surrounding, borders, empty lines, lonely cells, diagonal 
   it('remove_lonely_cells keeps a cell exactly when two or more edge neighbours share its colour', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid('remove_lonely_cells', g);
         for (let r = 0; r < g.height; r++) {
           for (let col = 0; col < g.width; col++) {
@@ -357,7 +357,7 @@ describe('filling hand-worked cases', () => {
       [4, 4, 4, 4],
     ]);
     // Colour 1 has 9 cells and colour 4 has 7, so the background is 1.
-    expect(backgroundColour(g)).toBe(1);
+    expect(backgroundOf(g)).toBe(1);
     // Colour 4 cells are the non-background ones; none has four non-background neighbours inside the grid.
     expect(rows(apply('hollow', g))).toEqual(g.toRows());
     const block = G([
@@ -418,20 +418,101 @@ describe('filling worked examples', () => {
   }
 });
 
+/**
+ * A wallpaper: a tile of 1-3 × 1-3 colours from 1-9, laid over a grid at least twice its size
+ * each way (rows optionally shifted one step per row, for diagonal stripes), then punched with
+ * holes of colour 0. `recoverable` when every tile cell keeps a known cell somewhere.
+ */
+const punchedWallpaper = fc
+  .record({
+    tileHeight: fc.integer({ min: 1, max: 3 }),
+    tileWidth: fc.integer({ min: 1, max: 3 }),
+    extraHeight: fc.integer({ min: 0, max: 4 }),
+    extraWidth: fc.integer({ min: 0, max: 4 }),
+    diagonal: fc.boolean(),
+  })
+  .chain(({ tileHeight, tileWidth, extraHeight, extraWidth, diagonal }) => {
+    const ph = diagonal ? 1 : tileHeight;
+    const height = 2 * ph + extraHeight;
+    const width = 2 * tileWidth + extraWidth;
+    return fc
+      .tuple(
+        fc.array(fc.integer({ min: 1, max: 9 }), { minLength: ph * tileWidth, maxLength: ph * tileWidth }),
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: height * width, maxLength: height * width }),
+        fc.double({ min: 0.05, max: 0.4, noNaN: true }),
+      )
+      .map(([tile, draws, share]) => {
+        const cells = new Uint8Array(height * width);
+        const seen = new Set<number>();
+        for (let r = 0; r < height; r++) {
+          for (let c = 0; c < width; c++) {
+            const column = (((c - (diagonal ? r : 0)) % tileWidth) + tileWidth) % tileWidth;
+            const t = (r % ph) * tileWidth + column;
+            const hole = draws[r * width + c]! < share;
+            cells[r * width + c] = hole ? 0 : tile[t]!;
+            if (!hole) seen.add(t);
+          }
+        }
+        const holes = cells.some((v) => v === 0) && cells.some((v) => v !== 0);
+        return { grid: new Grid(height, width, cells), hole: 0, recoverable: holes && seen.size === ph * tileWidth };
+      });
+  });
+
+const anyGridWithHoles = fc
+  .tuple(arbitraryGrid({ minHeight: 2, minWidth: 2 }), fc.integer({ min: 0, max: 9 }))
+  .map(([grid, hole]) => ({ grid, hole, recoverable: false }));
+
+/**
+ * Whether a grid is a wallpaper of a tile at most half its area (rows of a one-row tile may be
+ * shifted against each other): every cell equals the first cell of its tile position. Brute
+ * force over every tile, written independently of src/grid/repeating-pattern.ts.
+ */
+function repeatsWithSomeTile(g: Grid): boolean {
+  for (let ph = 1; ph <= g.height; ph++) {
+    for (let pw = 1; pw <= g.width; pw++) {
+      if (2 * ph * pw > g.height * g.width) continue;
+      for (let shift = 0; shift < (ph === 1 ? pw : 1); shift++) {
+        const first = new Map<number, number>();
+        let fits = true;
+        for (let r = 0; r < g.height && fits; r++) {
+          for (let c = 0; c < g.width && fits; c++) {
+            const key = (r % ph) * pw + ((((c - shift * Math.floor(r / ph)) % pw) + pw) % pw);
+            const v = g.get(r, c);
+            if (!first.has(key)) first.set(key, v);
+            else if (first.get(key) !== v) fits = false;
+          }
+        }
+        if (fits) return true;
+      }
+    }
+  }
+  return false;
+}
+
 describe('repeating patterns, empty squares, diagonal rays and neighbours, extending toward a colour', () => {
-  it('complete_repeating_pattern keeps every known cell and leaves no hole behind', () => {
+  it('complete_repeating_pattern keeps every known cell, leaves no hole, and gives a grid that repeats; a punched wallpaper is always completed', () => {
+    let checked = 0;
+    let runs = 0;
     fc.assert(
-      fc.property(arbitraryGrid({ minHeight: 2, minWidth: 2 }), fc.integer({ min: 0, max: 9 }), (g, hole) => {
+      fc.property(fc.oneof({ arbitrary: punchedWallpaper, weight: 4 }, { arbitrary: anyGridWithHoles, weight: 1 }), ({ grid: g, hole, recoverable }) => {
+        runs++;
         const out = apply('complete_repeating_pattern', g, hole);
+        // Every tile cell is seen somewhere, so the wallpaper's own tile fits: the call must not fail.
+        if (recoverable) expect(out).not.toBe(FAILURE);
         if (out === FAILURE) return;
+        checked++;
         expect(out).toBeInstanceOf(Grid);
         const cells = (out as Grid).cells;
         for (let i = 0; i < g.cells.length; i++) {
           if (g.cells[i] !== hole) expect(cells[i]).toBe(g.cells[i]);
           else expect(cells[i]).not.toBe(hole);
         }
+        expect(repeatsWithSomeTile(out as Grid), (out as Grid).toString()).toBe(true);
       }),
+      { numRuns: 200 },
     );
+    // The generator makes completable grids on purpose: most samples are checked, not skipped.
+    expect(checked / runs).toBeGreaterThan(0.6);
   });
 
   it('complete_repeating_pattern restores a punched two-by-two wallpaper and a diagonal one (worked by hand)', () => {
@@ -456,7 +537,7 @@ describe('repeating patterns, empty squares, diagonal rays and neighbours, exten
   it('fill_empty_squares with side 1 paints every background cell', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid('fill_empty_squares', g, 1, colour);
         for (let i = 0; i < g.cells.length; i++) expect(out.cells[i]).toBe(g.cells[i] === background ? colour : g.cells[i]);
       }),
@@ -476,7 +557,7 @@ describe('repeating patterns, empty squares, diagonal rays and neighbours, exten
   it('shoot_diagonal_rays and surround_diagonally only paint background cells', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), (g, colour) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         for (const out of [grid('shoot_diagonal_rays', g), grid('surround_diagonally', g, colour)]) {
           for (let i = 0; i < g.cells.length; i++) if (g.cells[i] !== background) expect(out.cells[i]).toBe(g.cells[i]);
         }
@@ -487,7 +568,7 @@ describe('repeating patterns, empty squares, diagonal rays and neighbours, exten
   it('surround_diagonally paints exactly the background cells with a non-background corner neighbour', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (g, colour) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid('surround_diagonally', g, colour);
         const filled = (r: number, c: number) => r >= 0 && c >= 0 && r < g.height && c < g.width && g.get(r, c) !== background;
         for (let r = 0; r < g.height; r++) {
@@ -546,7 +627,7 @@ describe('marks beside cells, lines through cells, one-way connections and gaps 
       fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), fc.integer({ min: 1, max: 9 }), (g, source, colour) => {
         fc.pre(source !== colour && g.cells.includes(0));
         const edges = grid('surround_colour_edges', g, source, colour);
-        fc.pre(backgroundColour(edges) === 0);
+        fc.pre(backgroundOf(edges) === 0);
         expect(grid('surround_colour_corners', edges, source, colour).equals(grid('surround_colour', g, source, colour))).toBe(true);
       }),
     );
@@ -594,7 +675,7 @@ describe('marks beside cells, lines through cells, one-way connections and gaps 
   it('filling gaps changes only background cells', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 0, max: 9 }), fc.boolean(), (g, colour, largest) => {
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         const out = grid(largest ? 'fill_largest_gaps' : 'fill_smallest_gaps', g, colour);
         for (let i = 0; i < g.cells.length; i++) if (g.cells[i] !== background) expect(out.cells[i]).toBe(g.cells[i]);
       }),

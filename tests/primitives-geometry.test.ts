@@ -12,6 +12,7 @@ import { defaultLibrary } from '../dsl/index.ts';
 import { Library } from '../src/library/library.ts';
 import { applyOperation } from '../src/language/operation.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 import { callPrimitive } from './support/run-primitive.ts';
 
 const library = new Library(geometryPrimitives);
@@ -40,6 +41,48 @@ function columnColours(g: Grid, column: number, background: number): number[] {
   for (let r = 0; r < g.height; r++) if (g.get(r, column) !== background) out.push(g.get(r, column));
   return out;
 }
+
+/** Which cells of a part are filled (not its background, by the independent oracle), as text. */
+function filledPatternOf(g: Grid): string {
+  const background = backgroundOf(g);
+  let text = `${g.height}x${g.width}:`;
+  for (const v of g.cells) text += v === background ? '.' : '#';
+  return text;
+}
+
+/** 2 × 2 parts drawn from four cell patterns, each filled cell in colour `colour` on 0. */
+const PATTERNS = [
+  [1, 0, 0, 1],
+  [1, 1, 0, 1],
+  [0, 1, 1, 1],
+  [1, 0, 0, 0],
+];
+const partOf = (pattern: number, colour: number): Grid => new Grid(2, 2, Uint8Array.from(PATTERNS[pattern]!, (v) => v * colour));
+
+/**
+ * Lists of parts with one odd part planted at a drawn place: either by cells (one or two
+ * repeated parts, each twice or more, and one other), or by pattern (every part in its own
+ * colour, so cells never repeat, one or two patterns repeated and one pattern once).
+ */
+const partsWithOddOne = fc
+  .record({
+    byPattern: fc.boolean(),
+    patterns: fc.shuffledSubarray([0, 1, 2, 3], { minLength: 2, maxLength: 3 }),
+    copies: fc.array(fc.integer({ min: 2, max: 3 }), { minLength: 2, maxLength: 2 }),
+    colours: fc.shuffledSubarray([1, 2, 3, 4, 5, 6, 7, 8, 9], { minLength: 9, maxLength: 9 }),
+    keys: fc.array(fc.nat(), { minLength: 8, maxLength: 8 }),
+  })
+  .map(({ byPattern, patterns, copies, colours, keys }) => {
+    const [odd, ...common] = patterns;
+    const kinds = [odd!, ...common.flatMap((p, i) => Array.from({ length: copies[i]! }, () => p))];
+    const order = kinds.map((_, i) => i).sort((a, b) => keys[a]! - keys[b]! || a - b);
+    const parts = order.map((k, slot) => partOf(kinds[k]!, byPattern ? colours[slot]! : 5));
+    return { parts, planted: order.indexOf(0) as number | undefined };
+  });
+
+const anyParts = fc
+  .array(fc.constantFrom(G([[1, 0]]), G([[0, 1]]), G([[2, 0]]), G([[3, 3]])), { minLength: 0, maxLength: 6 })
+  .map((parts) => ({ parts, planted: undefined as number | undefined }));
 
 describe('geometry laws', () => {
   it('tile multiplies the size and repeats the grid', () => {
@@ -258,15 +301,34 @@ describe('majority_scale_down and parts', () => {
   });
 
   it('odd_one_out_part, when it succeeds, picks a part that has no twin while every other part has one', () => {
-    const part = fc.constantFrom(G([[1, 0]]), G([[0, 1]]), G([[2, 0]]), G([[3, 3]]));
+    let checked = 0;
+    let runs = 0;
     fc.assert(
-      fc.property(fc.array(part, { minLength: 0, maxLength: 6 }), (parts) => {
+      fc.property(fc.oneof({ arbitrary: partsWithOddOne, weight: 4 }, { arbitrary: anyParts, weight: 1 }), ({ parts, planted }) => {
+        runs++;
         const odd = apply('odd_one_out_part', parts);
+        // Planted by hand: one part unlike the others, which all have a twin (by cells, or, when
+        // every part has its own colour, by the pattern of filled cells).
+        if (planted !== undefined) expect(odd).toBe(parts[planted]);
         if (odd === FAILURE) return;
-        expect(parts).toContain(odd);
+        checked++;
         expect(parts.length).toBeGreaterThanOrEqual(3);
+        const index = parts.indexOf(odd as Grid);
+        expect(index).toBeGreaterThanOrEqual(0);
+        const twinsByCells = parts.map((p, i) => parts.filter((q, j) => j !== i && q.equals(p)).length);
+        if (twinsByCells[index] === 0 && twinsByCells.every((n, i) => i === index || n > 0)) return;
+        // Otherwise every part differs cell by cell, and the filled patterns decide.
+        expect(twinsByCells.every((n) => n === 0)).toBe(true);
+        const patterns = parts.map(filledPatternOf);
+        const twinsByPattern = patterns.map((p, i) => patterns.filter((q, j) => j !== i && q === p).length);
+        expect(twinsByPattern[index]).toBe(0);
+        twinsByPattern.forEach((n, i) => {
+          if (i !== index) expect(n).toBeGreaterThan(0);
+        });
       }),
+      { numRuns: 300 },
     );
+    expect(checked / runs).toBeGreaterThan(0.6);
   });
 
   it('most_common_part picks the part with the most copies, the first on ties', () => {

@@ -1,7 +1,7 @@
 // Object rules: recolour, erase or keep the one-colour objects that pass a test.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { backgroundColour } from '../src/grid/components.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 import { evaluateGrid } from './support/run-primitive.ts';
@@ -14,7 +14,7 @@ describe('object rules, laws', () => {
       fc.property(arbitraryGrid(), fc.constantFrom(...tests), (g, test) => {
         const erased = evaluateGrid(`erase_objects_where(grid, ${test})`, g);
         const kept = evaluateGrid(`keep_objects_where(grid, ${test})`, g);
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         for (let i = 0; i < g.cells.length; i++) {
           const inErased = erased.cells[i] !== background;
           const inKept = kept.cells[i] !== background;
@@ -33,7 +33,7 @@ describe('object rules, laws', () => {
       fc.property(arbitraryGrid(), fc.constantFrom(...tests), fc.integer({ min: 0, max: 9 }), (g, test, colour) => {
         const recoloured = evaluateGrid(`recolour_objects_where(grid, ${test}, #${colour})`, g);
         const kept = evaluateGrid(`keep_objects_where(grid, ${test})`, g);
-        const background = backgroundColour(g);
+        const background = backgroundOf(g);
         expect([recoloured.height, recoloured.width]).toEqual([g.height, g.width]);
         for (let i = 0; i < g.cells.length; i++) {
           const selected = g.cells[i] !== background && kept.cells[i] !== background;

@@ -19,6 +19,38 @@ const arbitraryObjects = fc.tuple(arbitraryGrid(), fc.constantFrom(...EXTRACTORS
 const KEYS = ['object_size', 'object_height', 'object_width', 'colour_count', 'object_top', 'object_left', 'object_colour', 'hole_count'] as const;
 const keyFunction = (name: string) => (o: GridObject) => callPrimitive(name, o) as number;
 
+/**
+ * Grids with repeated objects on purpose: solid blocks (1-3 × 1-3, colours 1-9) in slots of a
+ * 4 × 4 layout, one cell of background between slots so no two blocks touch. One or two kinds
+ * are placed two or three times each, and one other kind once: `planted` is its top-left corner.
+ */
+const plantedOddOne = fc
+  .record({
+    kinds: fc.uniqueArray(fc.tuple(fc.integer({ min: 1, max: 3 }), fc.integer({ min: 1, max: 3 }), fc.integer({ min: 1, max: 9 })), {
+      minLength: 2,
+      maxLength: 3,
+      selector: ([h, w, colour]) => `${h}x${w}:${colour}`,
+    }),
+    copies: fc.array(fc.integer({ min: 2, max: 3 }), { minLength: 2, maxLength: 2 }),
+    order: fc.array(fc.nat(), { minLength: 16, maxLength: 16 }),
+  })
+  .map(({ kinds, copies, order }) => {
+    const [odd, ...common] = kinds as [number, number, number][];
+    const placements: [number, number, number][] = [odd!, ...common.flatMap((k, i) => Array.from({ length: copies[i]! }, () => k))];
+    // Shuffle the 16 slots by the drawn keys, and put the blocks in the first ones.
+    const slots = Array.from({ length: 16 }, (_, i) => i).sort((a, b) => order[a]! - order[b]! || a - b);
+    const cells = new Uint8Array(16 * 16);
+    let planted: [number, number] = [0, 0];
+    placements.forEach(([h, w, colour], i) => {
+      const top = Math.floor(slots[i]! / 4) * 4;
+      const left = (slots[i]! % 4) * 4;
+      if (i === 0) planted = [top, left];
+      for (let r = 0; r < h; r++) for (let c = 0; c < w; c++) cells[(top + r) * 16 + left + c] = colour;
+    });
+    const grid = new Grid(16, 16, cells);
+    return { grid, objects: objectsOf(grid), planted };
+  });
+
 describe('selection laws', () => {
   it('largest_object is at least as big as every object, and the first such; smallest_object likewise', () => {
     fc.assert(
@@ -127,11 +159,20 @@ describe('selection laws', () => {
     );
   });
 
-  it('odd_one_out, when it succeeds, gives an object no other object looks like while all others have a twin', () => {
+  it('odd_one_out, when it succeeds, gives an object no other object looks like while all others have a twin; a planted odd one is found', () => {
+    let checked = 0;
+    let runs = 0;
     fc.assert(
-      fc.property(arbitraryObjects, ({ objects }) => {
+      fc.property(fc.oneof({ arbitrary: plantedOddOne, weight: 4 }, { arbitrary: arbitraryObjects.map((a) => ({ ...a, planted: undefined })), weight: 1 }), ({ objects, planted }) => {
+        runs++;
         const odd = callPrimitive('odd_one_out', objects);
+        if (planted !== undefined) {
+          // Built by hand: one block of its own kind, every other kind placed at least twice.
+          expect(odd).not.toBe(FAILURE);
+          expect([(odd as GridObject).top, (odd as GridObject).left]).toEqual(planted);
+        }
         if (odd === FAILURE) return;
+        checked++;
         const same = (a: GridObject, b: GridObject) => a.shape.equals(b.shape);
         for (const o of objects) {
           const twins = objects.filter((p) => p !== o && same(o, p)).length;
@@ -139,7 +180,9 @@ describe('selection laws', () => {
           else expect(twins).toBeGreaterThan(0);
         }
       }),
+      { numRuns: 200 },
     );
+    expect(checked / runs).toBeGreaterThan(0.6);
   });
 });
 

@@ -23,8 +23,8 @@ describe.each(names)('solving tasks-demo/%s', (name) => {
     const puzzle = puzzleOf(task);
     const reference = parseProgram(readFileSync(join(folder, `${name}.pithy`), 'utf8'));
     const referenceBits = programBits(reference, defaultLibrary, taskConstants(puzzle));
-    // A generous limit: the bound that matters is the reference's length, not the clock.
-    const result = solvePuzzle(puzzle, { timeLimitSeconds: 120, maxBits: referenceBits });
+    // No time limit: the bound is the reference's length in bits, the same on any machine.
+    const result = solvePuzzle(puzzle, { timeLimitSeconds: 1e6, maxBits: referenceBits });
     expect(result.solutions.length, `nothing found (${result.reason})`).toBeGreaterThan(0);
     expect(result.solutions[0]!.bits).toBeLessThanOrEqual(referenceBits);
     task.test.forEach((t, i) => {

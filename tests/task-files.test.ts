@@ -29,8 +29,18 @@ describe('bad task files', () => {
   it('not JSON', () => {
     const e = rejection('{"train": [', 'broken/quay.json');
     expect(e.message).toContain('broken/quay.json');
-    expect(e.jsonPath).toBe('$');
+    // The text ends where a value should start: column 12 of line 1 (worked out by hand).
+    expect(e.jsonPath).toBe('line 1, column 12');
     expect(e.message).toMatch(/not valid JSON/);
+  });
+
+  it('not JSON: the line and column of the first character that breaks the grammar', () => {
+    const e = rejection('{"train": [\n  [1, 2],,\n]}');
+    expect(e.jsonPath).toBe('line 2, column 10');
+  });
+
+  it('a byte-order mark before the JSON is not an error', () => {
+    expect(parseTask('\uFEFF' + JSON.stringify(good), 'harbour.json').train.length).toBe(1);
   });
 
   it('rows of different lengths', () => {

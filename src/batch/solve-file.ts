@@ -6,14 +6,19 @@ import { solvePuzzle, type SolveOptions } from '../search/solve.ts';
 import { readTaskFile, TaskFileError } from '../tasks/read-task.ts';
 import { puzzleOf } from '../tasks/task.ts';
 import { basename } from 'node:path';
-import type { TaskReport } from './task-report.ts';
+import type { FailureKind, TaskReport } from './task-report.ts';
 
 export function taskNameOf(file: string): string {
   return basename(file).replace(/\.json$/i, '');
 }
 
-export function errorReport(file: string, message: string, seconds = 0): TaskReport {
-  return { task: taskNameOf(file), file, status: 'error', error: message, solutions: [], attempts: [], reason: 'error', seconds };
+export function errorReport(file: string, message: string, failure: FailureKind, seconds = 0): TaskReport {
+  return { task: taskNameOf(file), file, status: 'error', error: message, failure, solutions: [], attempts: [], reason: 'error', seconds };
+}
+
+/** A task whose worker ran out of heap: the memory cap stopped it (see memory-cap.ts). */
+export function outOfMemoryReport(file: string, message: string, seconds: number): TaskReport {
+  return { task: taskNameOf(file), file, status: 'not found', error: message, solutions: [], attempts: [], reason: 'memory', seconds };
 }
 
 export function solveFile(file: string, options: SolveOptions): TaskReport {
@@ -21,7 +26,7 @@ export function solveFile(file: string, options: SolveOptions): TaskReport {
   try {
     puzzle = puzzleOf(readTaskFile(file));
   } catch (error) {
-    if (error instanceof TaskFileError) return errorReport(file, error.message);
+    if (error instanceof TaskFileError) return errorReport(file, error.message, 'unreadable task');
     throw error;
   }
   const result = solvePuzzle(puzzle, options);

@@ -17,7 +17,7 @@ parentPort!.on('message', (request: WorkerRequest) => {
   try {
     report = solveFile(request.file, request.options);
   } catch (error) {
-    report = errorReport(request.file, `${request.file}: the solver stopped with an internal error: ${(error as Error).message}`);
+    report = errorReport(request.file, `${request.file}: the solver stopped with an internal error: ${(error as Error).message}`, 'internal error');
   }
   parentPort!.postMessage({ id: request.id, report });
 });

@@ -5,6 +5,13 @@
  */
 import type { EnumerationStatistics, StopReason } from '../search/enumerator.ts';
 
+export type FailureKind = 'unreadable task' | 'internal error' | 'worker crashed' | 'overran';
+
+/** Failures that may not happen again: a resumed run solves their tasks again (unless --no-retry). */
+export function isRetryable(report: Pick<TaskReport, 'status' | 'failure'>): boolean {
+  return report.status === 'error' && (report.failure === 'worker crashed' || report.failure === 'overran');
+}
+
 export interface ReportedSolution {
   readonly program: string;
   readonly bits: number;
@@ -18,8 +25,13 @@ export interface TaskReport {
   readonly file: string;
   /** 'found': at least one program fits every demonstration; 'error': the task could not be read or the solver crashed. */
   readonly status: 'found' | 'not found' | 'error';
-  /** For 'error': what went wrong, naming the file. */
+  /** For 'error' (and a worker that ran out of heap): what went wrong, naming the file. */
   readonly error?: string;
+  /**
+   * For 'error', what kind: the task file could not be read, the solver threw, or its worker
+   * died or overran the time limit. The last two are retried when a run resumes.
+   */
+  readonly failure?: FailureKind;
   /** Cheapest first. */
   readonly solutions: readonly ReportedSolution[];
   /** Per test input in file order: the attempted output grids as rows. */

@@ -1,17 +1,25 @@
 /**
  * `pithy solve PATH...`: per task, the cheapest program, its cost in bits, the time, and the
- * candidates tried and kept. Never reads test outputs.
+ * candidates tried and kept. Never reads test outputs. With `--predictions FILE`, each task's
+ * line is appended as it finishes, and running again with the same file resumes.
  */
-import { closeSync, existsSync, openSync, writeSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import type { Command } from 'commander';
-import { predictionLine } from '../batch/predictions.ts';
+import { recordPathFor } from '../batch/predictions.ts';
+import { replaceFile } from '../batch/results-file.ts';
+import { runResumable } from '../batch/resumable-run.ts';
+import { selectShard, shardLabel } from '../batch/shard.ts';
+import { taskNameOf } from '../batch/solve-file.ts';
 import { solveFiles } from '../batch/solve-files.ts';
 import type { TaskReport } from '../batch/task-report.ts';
-import { addSolveFlags, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
+import { catchInterruptions } from './interrupt.ts';
+import { reportRunProblem } from './run-problems.ts';
+import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
+import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
-interface SolveFlags extends SharedSolveFlags {
+interface SolveFlags extends SharedSolveFlags, ShardFlags {
   json?: boolean;
   predictions?: string;
   force?: boolean;
@@ -19,7 +27,8 @@ interface SolveFlags extends SharedSolveFlags {
 
 export function reportLines(report: TaskReport): string[] {
   if (report.status === 'error') return [`${report.task}: error: ${report.error}`];
-  const s = report.statistics!;
+  const s = report.statistics;
+  if (s === undefined) return [`${report.task}: no program found (${stopWords(report.reason)}${report.error ? `: ${report.error}` : ''})`];
   const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidates tried, ${s.kept.toLocaleString('en')} kept`;
   if (report.status === 'not found') return [`${report.task}: no program found (${stopWords(report.reason)}; ${figures})`];
   const lines = [`${report.task}: ${report.solutions[0]!.bits} bits (${figures})`];
@@ -37,7 +46,7 @@ export function stopWords(reason: TaskReport['reason']): string {
     case 'candidates':
       return 'candidate cap reached';
     case 'memory':
-      return 'value store full';
+      return 'memory cap reached';
     case 'exhausted':
       return 'every program up to the cost cap tried';
     case 'solved':
@@ -48,37 +57,78 @@ export function stopWords(reason: TaskReport['reason']): string {
 }
 
 export function registerSolveCommand(program: Command): void {
-  addSolveFlags(
-    program
-      .command('solve')
-      .description('find the shortest program for each task (files or directories); test outputs are never read')
-      .argument('<paths...>', 'task JSON files or directories of them'),
+  addShardFlags(
+    addSolveFlags(
+      program
+        .command('solve')
+        .description('find the shortest program for each task (files or directories); test outputs are never read')
+        .argument('<paths...>', 'task JSON files or directories of them'),
+    ),
   )
-    .option('--predictions <file>', 'write one JSON line per task with the attempts for each test input')
-    .option('--force', 'allow --predictions to replace an existing file')
+    .option('--predictions <file>', 'append one JSON line per task, as each finishes, with the attempts for each test input; an existing file made with the same settings is resumed')
+    .option('--force', 'let --predictions replace an existing file instead of resuming it')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
-      const { files, problems } = expandTaskPaths(paths);
+      const shard = resolveShard(flags);
+      if (shard === null) return;
+      const { files: allFiles, problems } = expandTaskPaths(paths);
       for (const p of problems) writeError(p);
-      if (flags.predictions && existsSync(flags.predictions) && !flags.force) {
-        writeError(`${flags.predictions}: already exists; pithy will not overwrite it (choose another name or pass --force)`);
-        process.exitCode = 2;
-        return;
+      const files = selectShard(allFiles, taskNameOf, shard);
+      if (shard !== undefined) announceShard(shard, files.length, allFiles.length);
+      const predictions = flags.predictions;
+      const record = predictions !== undefined ? recordPathFor(predictions) : undefined;
+      if (predictions !== undefined && record !== undefined) {
+        if (flags.force) {
+          for (const f of [predictions, record]) if (existsSync(f)) replaceFile(f, '');
+        } else if (existsSync(predictions) && !existsSync(record)) {
+          writeError(`${predictions}: already exists without the record pithy keeps beside its predictions (${record}), so it cannot be resumed; pithy will not overwrite it (choose another name or pass --force)`);
+          process.exitCode = 2;
+          return;
+        }
       }
-      const predictions = flags.predictions ? openSync(flags.predictions, 'w') : undefined;
+      const interruption = catchInterruptions();
+      const batch = { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal };
+      const show = (report: TaskReport) => {
+        if (!flags.json) writeLines(reportLines(report));
+      };
+      let reports: TaskReport[];
+      let interrupted: boolean;
       try {
-        const reports = await solveFiles(files, {
-          jobs: flags.jobs,
-          solve: solveOptionsFrom(flags),
-          onReport: (report) => {
-            if (!flags.json) writeLines(reportLines(report));
-          },
-        });
-        if (predictions !== undefined) for (const r of reports) writeSync(predictions, predictionLine(r) + '\n');
-        if (flags.json) writeJson(reports);
-        if (problems.length > 0 || reports.some((r) => r.status === 'error')) process.exitCode = 1;
+        if (predictions !== undefined && record !== undefined) {
+          const outcome = await runResumable({
+            files,
+            resultsFile: record,
+            predictionsFile: predictions,
+            settings: settingsFrom(flags),
+            ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
+            retry: flags.retry,
+            batch,
+            onPlan: (plan) => {
+              if (plan.done.length > 0) writeError(`resuming ${predictions}: ${plan.done.length} of ${files.length} tasks already done`);
+              if (plan.retried.length > 0) writeError(`solving again (worker crashed or overran): ${plan.retried.join(', ')}`);
+              for (const line of plan.done) show(line);
+            },
+            onLine: show,
+          });
+          reports = outcome.lines;
+          interrupted = outcome.interrupted;
+        } else {
+          reports = await solveFiles(files, { ...batch, onReport: show });
+          interrupted = reports.length < files.length;
+        }
+      } catch (error) {
+        if (reportRunProblem(error, record ?? '')) return;
+        throw error;
       } finally {
-        if (predictions !== undefined) closeSync(predictions);
+        interruption.dispose();
       }
+      if (flags.json) writeJson(reports);
+      if (interrupted) {
+        writeError(
+          `interrupted: ${reports.length} of ${files.length} tasks finished` +
+            (predictions !== undefined ? `, every one kept in ${predictions}; run the same command again to resume` : ''),
+        );
+        process.exitCode = interruption.exitCode ?? 130;
+      } else if (problems.length > 0 || reports.some((r) => r.status === 'error')) process.exitCode = 1;
     });
 }

@@ -1,5 +1,7 @@
 /** Options that `solve` and `eval` share, and their checking. */
 import { InvalidArgumentError, type Command } from 'commander';
+import { DEFAULT_MEMORY_CAP_MB } from '../batch/memory-cap.ts';
+import { runSettings, type RunSettings } from '../batch/run-settings.ts';
 import type { SolveOptions } from '../search/solve.ts';
 
 export function positiveNumber(name: string, whole: boolean) {
@@ -18,6 +20,8 @@ export interface SharedSolveFlags {
   jobs: number;
   maxCandidates?: number;
   pruning: boolean;
+  memoryCap: number;
+  retry: boolean;
 }
 
 export function addSolveFlags(command: Command): Command {
@@ -26,6 +30,8 @@ export function addSolveFlags(command: Command): Command {
     .option('--attempts <n>', 'attempts per test input, from the cheapest programs with distinct outputs', positiveNumber('--attempts', true), 2)
     .option('--jobs <n>', 'tasks solved in parallel (worker threads)', positiveNumber('--jobs', true), 1)
     .option('--max-candidates <n>', 'cap on candidate programs evaluated per task', positiveNumber('--max-candidates', true))
+    .option('--memory-cap <MB>', 'memory cap per worker in megabytes: the search stops a task with the reason memory when it holds this much', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
+    .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')
     .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)');
 }
 
@@ -36,4 +42,16 @@ export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'l
     pruning: flags.pruning,
     ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
   };
+}
+
+/** The settings recorded on every results line (a `priors` flag, where the command has one, is read too). */
+export function settingsFrom(flags: SharedSolveFlags & { priors?: string }): RunSettings {
+  return runSettings({
+    timeLimitSeconds: flags.timeLimit,
+    attempts: flags.attempts,
+    pruning: flags.pruning,
+    ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
+    memoryCapMb: flags.memoryCap,
+    ...(flags.priors !== undefined ? { priorsFile: flags.priors } : {}),
+  });
 }

@@ -100,7 +100,10 @@ class LineReader {
   }
 }
 
-function parseLiteralOrExpression(r: LineReader): Expression {
+/** Calls nest at most this deep (deeper text is refused, never a stack overflow). */
+export const MAXIMUM_NESTING = 100;
+
+function parseLiteralOrExpression(r: LineReader, depth = 0): Expression {
   const c = r.peek();
   if (c === '#') return { kind: 'literal', literal: { type: 'Colour', value: r.colour() } };
   if (c === '-' || (c >= '0' && c <= '9')) return { kind: 'literal', literal: { type: 'Int', value: r.integer('a whole number') } };
@@ -139,11 +142,12 @@ function parseLiteralOrExpression(r: LineReader): Expression {
   const name = r.identifier("an expression (a name, a call, or a literal such as #3, 2, true, (0, 1), {#1 -> #2})");
   if (name === 'true' || name === 'false') return { kind: 'literal', literal: { type: 'Bool', value: name === 'true' } };
   if (r.peek() !== '(') return { kind: 'variable', name };
+  if (depth >= MAXIMUM_NESTING) r.fail(`at most ${MAXIMUM_NESTING} nested calls (name some of them as steps)`);
   r.expect('(');
   const args: Expression[] = [];
   if (r.peek() !== ')') {
     for (;;) {
-      args.push(parseLiteralOrExpression(r));
+      args.push(parseLiteralOrExpression(r, depth + 1));
       if (r.peek() === ',') {
         r.expect(',');
         continue;

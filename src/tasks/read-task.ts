@@ -5,6 +5,7 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { Grid, getSizeCap } from '../grid/grid.ts';
+import { jsonErrorIndex, linePlace } from './json-error-place.ts';
 import { freezeTask, type Pair, type Task, type TestCase } from './task.ts';
 
 export class TaskFileError extends Error {
@@ -65,16 +66,24 @@ function readEntry(value: unknown, file: string, path: string): Record<string, u
   return value as Record<string, unknown>;
 }
 
+/** Where JSON text first breaks the grammar ("line L, column C"), or the root when it cannot tell. */
+function syntaxErrorPlace(text: string): string {
+  const index = jsonErrorIndex(text);
+  return index < 0 ? '$' : linePlace(text, index);
+}
+
 /**
  * Parses task JSON text; `file` names the source in error messages. The task comes back
  * deeply frozen (see {@link freezeTask}), so nothing can change a demonstration once read.
  */
 export function parseTask(text: string, file: string, name = basename(file).replace(/\.json$/i, '')): Task {
   let root: unknown;
+  // A byte-order mark, which some editors write, is not part of the JSON.
+  const json = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   try {
-    root = JSON.parse(text);
+    root = JSON.parse(json);
   } catch (error) {
-    throw new TaskFileError(file, '$', `not valid JSON (${(error as Error).message})`);
+    throw new TaskFileError(file, syntaxErrorPlace(json), `not valid JSON (${(error as Error).message})`);
   }
   if (typeof root !== 'object' || root === null || Array.isArray(root)) {
     throw new TaskFileError(file, '$', `expected an object with "train" and "test", found ${describe(root)}`);
