@@ -4,8 +4,8 @@
  */
 import type { Command } from 'commander';
 import { defaultLibrary } from '../../dsl/index.ts';
-import { describeValue, valueToData } from '../output/describe-value.ts';
-import { drawPair } from '../output/terminal-grid.ts';
+import { traceEntryData, traceEntryLines } from '../output/describe-trace.ts';
+import { drawComparison } from '../output/terminal-grid.ts';
 import { readTasks } from '../tasks/read-task.ts';
 import { describeDifference, runOnTask, type PairResult } from '../tasks/run-on-task.ts';
 import { formatProblem, loadProgramFile, ProgramFileError, type LoadedProgram } from './program-file.ts';
@@ -17,8 +17,9 @@ function pairData(r: PairResult): Record<string, unknown> {
     index: r.index,
     passed: r.passed,
     ...(r.difference ? { difference: r.difference } : {}),
+    ...(r.failedStep ? { failedStep: r.failedStep } : {}),
     output: r.got ? r.got.toRows() : 'FAILURE',
-    ...(r.trace ? { trace: r.trace.map((t) => ({ name: t.name, type: t.type, value: valueToData(t.value) })) } : {}),
+    ...(r.trace ? { trace: r.trace.map(traceEntryData) } : {}),
   };
 }
 
@@ -26,13 +27,11 @@ function pairLines(r: PairResult, trace: boolean, legend: boolean): string[] {
   const mode = stdoutColourMode();
   const label = `${r.set} ${r.index}`.padEnd(9);
   const lines = [r.passed ? `  ${label} pass` : `  ${label} FAIL  ${describeDifference(r.difference!)}`];
+  if (r.failedStep) lines.push(`      step '${r.failedStep.step}' failed: ${r.failedStep.why}`);
   if (trace && r.trace) {
-    for (const entry of r.trace) {
-      const shown = describeValue(entry.type, entry.value, mode, { legend });
-      lines.push(`      ${entry.name} : ${entry.type} = ${shown[0]}`, ...shown.slice(1).map((l) => `        ${l}`));
-    }
-    if (!r.passed && r.got) lines.push(...drawPair(r.expected, r.got, mode, { input: 'expected', output: 'got' }, { legend }).map((l) => `      ${l}`));
+    for (const entry of r.trace) lines.push(...traceEntryLines(entry, mode, { legend, calls: true }).map((l) => `      ${l}`));
   }
+  if (!r.passed && r.got) lines.push(...drawComparison(r.expected, r.got, mode).map((l) => `      ${l}`));
   return lines;
 }
 
