@@ -13,6 +13,7 @@ import { registerCheckCommand } from './check-command.ts';
 import { registerEvalCommand } from './eval-command.ts';
 import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
+import { registerReportCommand } from './report-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
 
@@ -40,6 +41,7 @@ export function buildProgram(): Command {
   registerPrimitivesCommand(program);
   registerSolveCommand(program);
   registerEvalCommand(program);
+  registerReportCommand(program);
   return program;
 }
 
