@@ -9,12 +9,16 @@ import { solveFiles } from '../batch/solve-files.ts';
 import type { TaskReport } from '../batch/task-report.ts';
 import { addSolveFlags, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
-import { writeError, writeJson, writeLines } from './output.ts';
+import { stdoutColourMode, writeError, writeJson, writeLines } from './output.ts';
+import { explainLines } from './explain.ts';
+import { existingProgramFiles, writeProgramFile } from './program-files.ts';
 
 interface SolveFlags extends SharedSolveFlags {
   json?: boolean;
   predictions?: string;
   force?: boolean;
+  explain?: boolean;
+  programs?: string;
 }
 
 export function reportLines(report: TaskReport): string[] {
@@ -55,13 +59,21 @@ export function registerSolveCommand(program: Command): void {
       .argument('<paths...>', 'task JSON files or directories of them'),
   )
     .option('--predictions <file>', 'write one JSON line per task with the attempts for each test input')
-    .option('--force', 'allow --predictions to replace an existing file')
+    .option('--programs <dir>', 'write each program found as DIR/<task>.pithy, ready for pithy run and pithy check')
+    .option('--explain', "draw every step's value on the first demonstration and the predicted test outputs")
+    .option('--force', 'allow --predictions and --programs to replace existing files')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
       const { files, problems } = expandTaskPaths(paths);
       for (const p of problems) writeError(p);
       if (flags.predictions && existsSync(flags.predictions) && !flags.force) {
         writeError(`${flags.predictions}: already exists; pithy will not overwrite it (choose another name or pass --force)`);
+        process.exitCode = 2;
+        return;
+      }
+      const clashes = flags.programs && !flags.force ? existingProgramFiles(flags.programs, files) : [];
+      if (clashes.length > 0) {
+        writeError(`${clashes.join(', ')}: already exist${clashes.length === 1 ? 's' : ''}; pithy will not overwrite ${clashes.length === 1 ? 'it' : 'them'} (choose another folder or pass --force)`);
         process.exitCode = 2;
         return;
       }
@@ -72,6 +84,8 @@ export function registerSolveCommand(program: Command): void {
           solve: solveOptionsFrom(flags),
           onReport: (report) => {
             if (!flags.json) writeLines(reportLines(report));
+            if (flags.explain && !flags.json) writeLines(explainLines(report, stdoutColourMode()));
+            if (flags.programs) writeProgramFile(flags.programs, report);
           },
         });
         if (predictions !== undefined) for (const r of reports) writeSync(predictions, predictionLine(r) + '\n');
