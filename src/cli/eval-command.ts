@@ -34,7 +34,7 @@ export function registerEvalCommand(program: Command): void {
       const { files, problems } = expandTaskPaths([dir]);
       for (const p of problems) writeError(p);
       if (problems.length > 0) {
-        process.exitCode = 1;
+        process.exitCode = 2;
         return;
       }
       const resultsPath = flags.results ?? `eval-${basename(resolve(dir))}.jsonl`;

@@ -38,13 +38,18 @@ function pairLines(r: PairResult, trace: boolean, legend: boolean): string[] {
 export function registerRunCommand(program: Command): void {
   program
     .command('run')
-    .description('run a program on every pair of a task that has an output; exit code 1 when any pair fails')
-    .argument('<program>', 'file with the program text')
-    .argument('<task>', 'task JSON file or directory of them')
+    .description('run a program on every pair of a task that has an output; exit code 1 when any pair fails, 2 on bad input')
+    .argument('<program>', "file with the program text ('-' reads standard input)")
+    .argument('<task>', "task JSON file or folder of them ('-' reads one task from standard input)")
     .option('--trace', "print every step's value")
     .option('--legend', 'with --trace, name the colours under every drawn grid (number and palette name)')
     .option('--json', 'print the results as JSON')
     .action((programFile: string, taskPath: string, options: { trace?: boolean; legend?: boolean; json?: boolean }) => {
+      if (programFile === '-' && taskPath === '-') {
+        writeError("error: only one of the program and the task can come from standard input ('-')");
+        process.exitCode = 2;
+        return;
+      }
       let loaded: LoadedProgram;
       try {
         loaded = loadProgramFile(programFile, defaultLibrary);
@@ -52,17 +57,18 @@ export function registerRunCommand(program: Command): void {
         if (!(error instanceof ProgramFileError)) throw error;
         if (options.json) writeJson({ program: programFile, ok: false, problems: error.problems });
         else writeError(error.problems.map(formatProblem).join('\n'));
-        process.exitCode = 1;
+        process.exitCode = 2;
         return;
       }
       const entries = readTasks([taskPath]);
       let allPassed = true;
+      let badInput = false;
       let tasksPassed = 0;
       const tasks: unknown[] = [];
       const errors: ReturnType<typeof taskErrorData>[] = [];
       for (const entry of entries) {
         if (!entry.ok) {
-          allPassed = false;
+          badInput = true;
           errors.push(taskErrorData(entry.error));
           if (!options.json) writeError(entry.error.message);
           continue;
@@ -79,14 +85,16 @@ export function registerRunCommand(program: Command): void {
         writeLines([
           `${entry.task.name} (${entry.task.path})`,
           ...results.flatMap((r) => pairLines(r, options.trace === true, options.legend === true)),
-          `  ${count}/${results.length} pairs passed`,
+          `  ${count}/${results.length} ${results.length === 1 ? 'pair' : 'pairs'} passed`,
         ]);
       }
-      if (options.json) writeJson({ program: programFile, ok: true, passed: allPassed, tasks, errors });
+      if (options.json) writeJson({ program: programFile, ok: true, passed: allPassed && !badInput, tasks, errors });
       else if (entries.length > 1) {
         const bad = entries.filter((e) => !e.ok).length;
-        writeLines([`${entries.length - bad} tasks run, ${tasksPassed} passed every pair${bad > 0 ? `; ${bad} bad task file${bad === 1 ? '' : 's'}` : ''}`]);
+        const run = entries.length - bad;
+        writeLines([`${run} ${run === 1 ? 'task' : 'tasks'} run, ${tasksPassed} passed every pair${bad > 0 ? `; ${bad} bad task file${bad === 1 ? '' : 's'}` : ''}`]);
       }
-      if (!allPassed) process.exitCode = 1;
+      if (badInput) process.exitCode = 2;
+      else if (!allPassed) process.exitCode = 1;
     });
 }

@@ -24,7 +24,7 @@ interface SolveFlags extends SharedSolveFlags {
 export function reportLines(report: TaskReport): string[] {
   if (report.status === 'error') return [`${report.task}: error: ${report.error}`];
   const s = report.statistics!;
-  const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidates tried, ${s.kept.toLocaleString('en')} kept`;
+  const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidate${s.candidates === 1 ? '' : 's'} tried, ${s.kept.toLocaleString('en')} kept`;
   if (report.status === 'not found') return [`${report.task}: no program found (${stopWords(report.reason)}; ${figures})`];
   const lines = [`${report.task}: ${report.solutions[0]!.bits} bits (${figures})`];
   report.solutions.forEach((solution, i) => {
@@ -90,7 +90,8 @@ export function registerSolveCommand(program: Command): void {
         });
         if (predictions !== undefined) for (const r of reports) writeSync(predictions, predictionLine(r) + '\n');
         if (flags.json) writeJson(reports);
-        if (problems.length > 0 || reports.some((r) => r.status === 'error')) process.exitCode = 1;
+        if (problems.length > 0) process.exitCode = 2;
+        else if (reports.some((r) => r.status === 'error')) process.exitCode = 1;
       } finally {
         if (predictions !== undefined) closeSync(predictions);
       }
