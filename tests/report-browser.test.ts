@@ -8,7 +8,7 @@
 //   4. typing one task's name in the filter leaves exactly that task, and opening it draws its grids
 //      (one canvas per demonstration input and output at least), with differences marked nowhere
 //      for a solved task,
-//   5. the screenshot of the opened task is not blank: it has many distinct colours, among them
+//   5. a screenshot of the window showing the opened task is not blank: it has many distinct colours, among them
 //      colours of the harbour palette,
 //   6. the page asked for nothing over the network,
 // and that `report` refuses to overwrite its output without --force.
@@ -168,7 +168,8 @@ describe.skipIf(!existsSync(CHROMIUM))('the HTML report in Chromium', () => {
     // Demonstration inputs and outputs, test inputs and at least one attempt each, and the step table.
     expect(await article.locator('.drawings canvas').count()).toBeGreaterThanOrEqual(2 * task.train.length + 2 * task.test.length);
     expect(await article.locator('table.steps tr').count()).toBeGreaterThan(1);
-    await article.screenshot({ path: shot });
+    // What the reader sees after opening it: the window, scrolled to the task.
+    await tab.screenshot({ path: shot });
     const colours = pngColours(readFileSync(shot));
     expect(colours.size).toBeGreaterThan(20);
     const harbour = HARBOUR_PALETTE.map((e) => (e.red << 16) | (e.green << 8) | e.blue);
