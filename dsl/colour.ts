@@ -79,13 +79,13 @@ export const colourPrimitives = [
     run: (g, colour) => recolour(g, colour, backgroundColour(g)),
   }),
   primitive({
-    name: 'most_common_colour',
+    name: 'most_common_non_background_colour',
     category: 'colour',
     parameters: ['Grid'],
     result: 'Colour',
     bits: 5,
     doc: 'The non-background colour with the most cells (the lowest on ties); fails when there is none.',
-    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'most_common_colour(grid)', output: 4 },
+    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'most_common_non_background_colour(grid)', output: 4 },
     run: (g) => colourByCount(g, true, true),
   }),
   primitive({
@@ -99,13 +99,13 @@ export const colourPrimitives = [
     run: (g) => colourByCount(g, false, false),
   }),
   primitive({
-    name: 'majority_colour',
+    name: 'most_common_colour_with_background',
     category: 'colour',
     parameters: ['Grid'],
     result: 'Colour',
     bits: 6,
     doc: 'The colour with the most cells, background included (the lowest on ties).',
-    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'majority_colour(grid)', output: 0 },
+    example: { input: [[0, 3, 0], [4, 4, 0]], expression: 'most_common_colour_with_background(grid)', output: 0 },
     run: (g) => colourByCount(g, true, false),
   }),
   primitive({

@@ -264,13 +264,13 @@ export const selectionPrimitives = [
     run: (o) => o.width,
   }),
   primitive({
-    name: 'colour_count',
+    name: 'object_number_of_colours',
     category: 'selection',
     parameters: ['Object'],
     result: 'Int',
     bits: 6,
     doc: 'How many different colours the object has.',
-    example: { input: [[1, 2, 1], [0, 0, 0]], expression: 'colour_count(first_object(objects_multicolour(grid)))', output: 2 },
+    example: { input: [[1, 2, 1], [0, 0, 0]], expression: 'object_number_of_colours(first_object(objects_multicolour(grid)))', output: 2 },
     run: colourCount,
   }),
   primitive({

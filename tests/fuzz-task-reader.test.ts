@@ -40,7 +40,9 @@ function outcome(text: string, file = FILE): 'task' | 'error' {
   } catch (error) {
     if (!(error instanceof TaskFileError)) throw new Error(`an exception other than TaskFileError escaped: ${String(error)}`);
     expect(error.file).toBe(file);
-    expect(error.message.startsWith(`${file}: at `)).toBe(true);
+    // "file: at $.train[0]: ..." for a wrong value, "file:3:14: ..." for broken JSON.
+    const place = error.position ? `${file}:${error.position.line}:${error.position.column}: ` : `${file}: at `;
+    expect(error.message.startsWith(place)).toBe(true);
     expect(error.jsonPath).toMatch(/^(\$.*|line \d+, column \d+)$/);
     expect(error.problem.length).toBeGreaterThan(0);
     return 'error';
@@ -64,7 +66,9 @@ describe('fuzzing the task reader', () => {
           readTaskFile(file);
         } catch (error) {
           expect(error).toBeInstanceOf(TaskFileError);
-          expect((error as TaskFileError).message.startsWith(`${file}: at `)).toBe(true);
+          const e = error as TaskFileError;
+          const place = e.position ? `${file}:${e.position.line}:${e.position.column}: ` : `${file}: at `;
+          expect(e.message.startsWith(place)).toBe(true);
         }
       }),
       { numRuns: 300 },

@@ -85,12 +85,12 @@ describe('colour laws', () => {
     );
   });
 
-  it('most_common_colour has the most cells among non-background colours; least_common_colour the fewest among present ones', () => {
+  it('most_common_non_background_colour has the most cells among non-background colours; least_common_colour the fewest among present ones', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const counts = countsOf(g);
         const background = backgroundOf(g);
-        const most = callPrimitive('most_common_colour', g);
+        const most = callPrimitive('most_common_non_background_colour', g);
         const others = counts.map((n, c) => (c === background ? 0 : n));
         if (Math.max(...others) === 0) expect(most).toBe(FAILURE);
         else {
@@ -105,17 +105,17 @@ describe('colour laws', () => {
     );
   });
 
-  it('majority_colour is the lowest colour with the most cells, background included', () => {
+  it('most_common_colour_with_background is the lowest colour with the most cells, background included', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const counts = countsOf(g);
-        expect(callPrimitive('majority_colour', g)).toBe(counts.indexOf(Math.max(...counts)));
+        expect(callPrimitive('most_common_colour_with_background', g)).toBe(counts.indexOf(Math.max(...counts)));
       }),
     );
     // Worked by hand: 0 (3 cells) beats 4 (2 cells) and 3 (1 cell), though 0 is the background.
-    expect(callPrimitive('majority_colour', G([[0, 3, 0], [4, 4, 0]]))).toBe(0);
+    expect(callPrimitive('most_common_colour_with_background', G([[0, 3, 0], [4, 4, 0]]))).toBe(0);
     // 6 and 2 tie with two cells each: the lower, 2.
-    expect(callPrimitive('majority_colour', G([[6, 2], [2, 6], [1, 0]]))).toBe(2);
+    expect(callPrimitive('most_common_colour_with_background', G([[6, 2], [2, 6], [1, 0]]))).toBe(2);
   });
 
   it('recolour_object keeps position and shape and uses only the new colour', () => {
@@ -174,9 +174,9 @@ describe('colour, hand-worked cases', () => {
   });
 
   it('colour ranks', () => {
-    expect(callPrimitive('most_common_colour', g)).toBe(1);
+    expect(callPrimitive('most_common_non_background_colour', g)).toBe(1);
     expect(callPrimitive('least_common_colour', g)).toBe(2);
-    expect(callPrimitive('most_common_colour', Grid.filled(2, 2, 4))).toBe(FAILURE);
+    expect(callPrimitive('most_common_non_background_colour', Grid.filled(2, 2, 4))).toBe(FAILURE);
     expect(callPrimitive('least_common_colour', Grid.filled(2, 2, 4))).toBe(4);
   });
 

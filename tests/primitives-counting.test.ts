@@ -12,21 +12,21 @@ const rows = (value: unknown): unknown => (value instanceof Grid ? value.toRows(
 const small = fc.integer({ min: -50, max: 50 });
 
 describe('counting laws', () => {
-  it('count_colour summed over the colours is the number of cells', () => {
+  it('count_cells_of_colour summed over the colours is the number of cells', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         let total = 0;
-        for (let c = 0; c < 10; c++) total += callPrimitive('count_colour', g, c) as number;
+        for (let c = 0; c < 10; c++) total += callPrimitive('count_cells_of_colour', g, c) as number;
         expect(total).toBe(g.height * g.width);
       }),
     );
   });
 
-  it('count_colours is the number of distinct colours other than the background', () => {
+  it('count_non_background_colours is the number of distinct colours other than the background', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const background = backgroundOf(g);
-        expect(callPrimitive('count_colours', g)).toBe(new Set([...g.cells].filter((v) => v !== background)).size);
+        expect(callPrimitive('count_non_background_colours', g)).toBe(new Set([...g.cells].filter((v) => v !== background)).size);
       }),
     );
   });
@@ -35,7 +35,7 @@ describe('counting laws', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
         const background = backgroundOf(g);
-        expect((callPrimitive('count_cells', g) as number) + (callPrimitive('count_colour', g, background) as number)).toBe(g.cells.length);
+        expect((callPrimitive('count_cells', g) as number) + (callPrimitive('count_cells_of_colour', g, background) as number)).toBe(g.cells.length);
       }),
     );
   });
@@ -78,15 +78,15 @@ describe('counting, hand-worked cases', () => {
 
   it('counts of objects, one colour, colours and cells', () => {
     expect(evaluate('count_objects(objects_by_colour(grid))', g)).toBe(4);
-    expect(callPrimitive('count_colour', g, 4)).toBe(3);
-    expect(callPrimitive('count_colour', g, 9)).toBe(0);
-    expect(callPrimitive('count_colours', g)).toBe(2);
+    expect(callPrimitive('count_cells_of_colour', g, 4)).toBe(3);
+    expect(callPrimitive('count_cells_of_colour', g, 9)).toBe(0);
+    expect(callPrimitive('count_non_background_colours', g)).toBe(2);
     expect(callPrimitive('count_cells', g)).toBe(5);
   });
 
   it('choose picks by the condition', () => {
-    expect(rows(evaluate('choose(is_greater(count_colour(grid, #4), count_colour(grid, #7)), top_half(grid), bottom_half(grid))', g))).toEqual([[0, 4, 0, 4]]);
-    expect(rows(evaluate('choose(is_equal(count_colour(grid, #4), 2), top_half(grid), bottom_half(grid))', g))).toEqual([[7, 0, 0, 7]]);
+    expect(rows(evaluate('choose(is_greater(count_cells_of_colour(grid, #4), count_cells_of_colour(grid, #7)), top_half(grid), bottom_half(grid))', g))).toEqual([[0, 4, 0, 4]]);
+    expect(rows(evaluate('choose(is_equal(count_cells_of_colour(grid, #4), 2), top_half(grid), bottom_half(grid))', g))).toEqual([[7, 0, 0, 7]]);
   });
 
   it('arithmetic beyond the bound fails rather than growing without limit', () => {

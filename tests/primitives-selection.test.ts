@@ -16,7 +16,7 @@ const size = (o: GridObject) => callPrimitive('object_size', o) as number;
 const EXTRACTORS = ['objects_by_colour', 'objects_multicolour_diagonal', 'colour_groups'] as const;
 const arbitraryObjects = fc.tuple(arbitraryGrid(), fc.constantFrom(...EXTRACTORS)).map(([g, e]) => ({ grid: g, objects: objectsOf(g, e) }));
 
-const KEYS = ['object_size', 'object_height', 'object_width', 'colour_count', 'object_top', 'object_left', 'object_colour', 'hole_count'] as const;
+const KEYS = ['object_size', 'object_height', 'object_width', 'object_number_of_colours', 'object_top', 'object_left', 'object_colour', 'hole_count'] as const;
 const keyFunction = (name: string) => (o: GridObject) => callPrimitive(name, o) as number;
 
 /**
@@ -143,7 +143,7 @@ describe('selection laws', () => {
           const colours = new Set<number>();
           for (const v of o.shape.cells) if (v !== EMPTY) (cells++, colours.add(v));
           expect(size(o)).toBe(cells);
-          expect(callPrimitive('colour_count', o)).toBe(colours.size);
+          expect(callPrimitive('object_number_of_colours', o)).toBe(colours.size);
           expect(callPrimitive('is_single_colour', o)).toBe(colours.size === 1);
           expect(callPrimitive('is_solid_rectangle', o)).toBe(cells === o.height * o.width);
           expect(callPrimitive('object_height', o)).toBe(o.shape.height);

@@ -26,12 +26,16 @@ function rejection(text: string, file = 'harbour.json'): TaskFileError {
 }
 
 describe('bad task files', () => {
-  it('not JSON', () => {
+  it('not JSON: the message gives the line and column where the text stops being JSON', () => {
     const e = rejection('{"train": [', 'broken/quay.json');
     expect(e.message).toContain('broken/quay.json');
     // The text ends where a value should start: column 12 of line 1 (worked out by hand).
     expect(e.jsonPath).toBe('line 1, column 12');
-    expect(e.message).toMatch(/not valid JSON/);
+    expect(e.message).toMatch(/^broken\/quay\.json:1:12: not valid JSON/);
+    // Line 2, column 19: two spaces, then {"input": [[1]], takes columns 3 to 18; the second comma is 19.
+    const second = rejection('{"train": [\n  {"input": [[1]],, "output": [[1]]}\n]}', 'quay.json');
+    expect(second.position).toEqual({ line: 2, column: 19 });
+    expect(second.message).toMatch(/^quay\.json:2:19: not valid JSON/);
   });
 
   it('not JSON: the line and column of the first character that breaks the grammar', () => {
@@ -203,12 +207,13 @@ describe('the command line on bad input', () => {
     expect(result.stderr).toContain('$.train[0].input[0][1]');
   });
 
-  it('check exits non-zero on an ill-typed program, naming file:line:column and the expected type', () => {
+  it('check exits 2 on an ill-typed program, naming file:line:column of the offending argument and the expected type', () => {
     const ill = join(folder, 'ill.pithy');
     writeFileSync(ill, 'with deck\nboats = objects_by_colour(deck)\nanswer reflect_vertically(boats)\n');
     const result = pithy('check', ill);
-    expect(result.status).toBe(1);
-    expect(result.stderr).toContain(`${ill}:3:1`);
+    expect(result.status).toBe(2);
+    // 'boats' starts at column 27 of line 3: 'answer reflect_vertically(' is 26 characters.
+    expect(result.stderr).toContain(`${ill}:3:27`);
     expect(result.stderr).toContain('expected Grid, found Objects');
   });
 });

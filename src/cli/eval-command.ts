@@ -41,7 +41,7 @@ export function registerEvalCommand(program: Command): void {
       const { files: allFiles, problems } = expandTaskPaths([dir]);
       for (const p of problems) writeError(p);
       if (problems.length > 0) {
-        process.exitCode = 1;
+        process.exitCode = 2;
         return;
       }
       const files = selectShard(allFiles, taskNameOf, shard);

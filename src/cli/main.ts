@@ -2,7 +2,7 @@
  * The `pithy` command line: builds the commander program and registers one command per
  * file. Each command is a thin layer over library functions.
  */
-import { realpathSync } from 'node:fs';
+import { readFileSync, realpathSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
@@ -14,13 +14,25 @@ import { registerEvalCommand } from './eval-command.ts';
 import { registerMergeCommand } from './merge-command.ts';
 import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
+import { registerReportCommand } from './report-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
 
+/** The version in package.json. */
+export function pithyVersion(): string {
+  return (JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+}
+
 export function buildProgram(): Command {
   const program = new Command();
+  // Exit codes (README, "Exit codes"): help and --version 0, bad usage 2. Subcommands inherit this.
+  program.exitOverride((error) => {
+    const ok = error.exitCode === 0 || error.code === 'commander.helpDisplayed' || error.code === 'commander.version';
+    process.exit(ok ? 0 : 2);
+  });
   program
     .name('pithy')
+    .version(pithyVersion(), '--version', 'print the version of pithy')
     .description('finds the shortest program in a typed grid language that maps every demonstration input of a grid puzzle to its output')
     .showHelpAfterError()
     .option('--size-cap <n>', 'largest grid height and width accepted and built (default 30)', positiveNumber('--size-cap', true))
@@ -42,6 +54,7 @@ export function buildProgram(): Command {
   registerSolveCommand(program);
   registerEvalCommand(program);
   registerMergeCommand(program);
+  registerReportCommand(program);
   return program;
 }
 

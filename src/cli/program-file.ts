@@ -8,6 +8,7 @@ import { checkProgram, ProgramTypeError } from '../language/checker.ts';
 import { parseProgram, ProgramSyntaxError } from '../language/parser.ts';
 import type { Type } from '../language/types.ts';
 import type { Library } from '../library/library.ts';
+import { fileProblem } from '../tasks/read-task.ts';
 
 export interface ProgramProblem {
   readonly file: string;
@@ -31,7 +32,9 @@ export class ProgramFileError extends Error {
 export function formatProblem(p: ProgramProblem): string {
   const where = p.step === undefined ? '' : p.step === 'answer' ? 'in the answer: ' : `in step '${p.step}': `;
   const detail = p.expected !== undefined ? ` (expected ${p.expected}${p.found !== undefined ? `, found ${p.found}` : ''})` : '';
-  return `${p.file}:${p.line}:${p.column}: ${where}${p.message}${detail}`;
+  // Line 0: a problem of the file itself (no such file, a folder), which has no place in the text.
+  const place = p.line > 0 ? `${p.file}:${p.line}:${p.column}` : p.file;
+  return `${place}: ${where}${p.message}${detail}`;
 }
 
 /** Line and column (1-based) where a step (or `answer`) starts in the text. */
@@ -66,18 +69,26 @@ export function loadProgramText(text: string, file: string, library: Library): L
   } catch (error) {
     if (!(error instanceof ProgramTypeError)) throw error;
     throw new ProgramFileError(
-      error.problems.map((p) => ({ file, ...locateStep(text, p.step), step: p.step, message: p.message, expected: p.expected, found: p.found })),
+      error.problems.map((p) => ({
+        file,
+        ...(p.line !== undefined && p.column !== undefined ? { line: p.line, column: p.column } : locateStep(text, p.step)),
+        step: p.step,
+        message: p.message,
+        expected: p.expected,
+        found: p.found,
+      })),
     );
   }
 }
 
+/** Reads, parses and checks a program file; '-' reads the program from standard input. */
 export function loadProgramFile(file: string, library: Library): LoadedProgram {
+  const name = file === '-' ? 'standard input' : file;
   let text: string;
   try {
-    text = readFileSync(file, 'utf8');
+    text = readFileSync(file === '-' ? 0 : file, 'utf8');
   } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code ?? (error as Error).message;
-    throw new ProgramFileError([{ file, line: 1, column: 1, message: `cannot read the program file (${code})` }]);
+    throw new ProgramFileError([{ file: name, line: 0, column: 0, message: fileProblem(error) }]);
   }
-  return loadProgramText(text, file, library);
+  return loadProgramText(text, name, library);
 }

@@ -8,7 +8,7 @@ export function registerShowCommand(program: Command): void {
   program
     .command('show')
     .description('draw the pairs of a task file (or of every task file in a directory)')
-    .argument('<task>', 'task JSON file or directory of them')
+    .argument('<task>', "task JSON file or folder of them ('-' reads one task from standard input)")
     .option('--legend', 'name the colours under every drawn pair (number and palette name)')
     .option('--json', 'print the tasks as JSON (grids as lists of rows)')
     .action((path: string, options: { legend?: boolean; json?: boolean }) => {
@@ -19,7 +19,7 @@ export function registerShowCommand(program: Command): void {
       for (const entry of entries) {
         if (!entry.ok) {
           writeError(entry.error.message);
-          process.exitCode = 1;
+          process.exitCode = 2;
           continue;
         }
         const task = entry.task;

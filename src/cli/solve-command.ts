@@ -17,19 +17,23 @@ import { reportRunProblem } from './run-problems.ts';
 import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
 import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
-import { writeError, writeJson, writeLines } from './output.ts';
+import { stdoutColourMode, writeError, writeJson, writeLines } from './output.ts';
+import { explainLines } from './explain.ts';
+import { existingProgramFiles, writeProgramFile } from './program-files.ts';
 
 interface SolveFlags extends SharedSolveFlags, ShardFlags {
   json?: boolean;
   predictions?: string;
   force?: boolean;
+  explain?: boolean;
+  programs?: string;
 }
 
 export function reportLines(report: TaskReport): string[] {
   if (report.status === 'error') return [`${report.task}: error: ${report.error}`];
   const s = report.statistics;
   if (s === undefined) return [`${report.task}: no program found (${stopWords(report.reason)}${report.error ? `: ${report.error}` : ''})`];
-  const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidates tried, ${s.kept.toLocaleString('en')} kept`;
+  const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidate${s.candidates === 1 ? '' : 's'} tried, ${s.kept.toLocaleString('en')} kept`;
   if (report.status === 'not found') return [`${report.task}: no program found (${stopWords(report.reason)}; ${figures})`];
   const lines = [`${report.task}: ${report.solutions[0]!.bits} bits (${figures})`];
   report.solutions.forEach((solution, i) => {
@@ -66,7 +70,9 @@ export function registerSolveCommand(program: Command): void {
     ),
   )
     .option('--predictions <file>', 'append one JSON line per task, as each finishes, with the attempts for each test input; an existing file made with the same settings is resumed')
-    .option('--force', 'let --predictions replace an existing file instead of resuming it')
+    .option('--programs <dir>', 'write each program found as DIR/<task>.pithy, ready for pithy run and pithy check')
+    .option('--explain', "draw every step's value on the first demonstration and the predicted test outputs")
+    .option('--force', 'let --predictions replace an existing file instead of resuming it, and --programs replace existing programs')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
       const shard = resolveShard(flags);
@@ -86,10 +92,18 @@ export function registerSolveCommand(program: Command): void {
           return;
         }
       }
+      const clashes = flags.programs && !flags.force ? existingProgramFiles(flags.programs, files) : [];
+      if (clashes.length > 0) {
+        writeError(`${clashes.join(', ')}: already exist${clashes.length === 1 ? 's' : ''}; pithy will not overwrite ${clashes.length === 1 ? 'it' : 'them'} (choose another folder or pass --force)`);
+        process.exitCode = 2;
+        return;
+      }
       const interruption = catchInterruptions();
       const batch = { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal };
       const show = (report: TaskReport) => {
         if (!flags.json) writeLines(reportLines(report));
+        if (flags.explain && !flags.json) writeLines(explainLines(report, stdoutColourMode()));
+        if (flags.programs) writeProgramFile(flags.programs, report);
       };
       let reports: TaskReport[];
       let interrupted: boolean;
@@ -129,6 +143,7 @@ export function registerSolveCommand(program: Command): void {
             (predictions !== undefined ? `, every one kept in ${predictions}; run the same command again to resume` : ''),
         );
         process.exitCode = interruption.exitCode ?? 130;
-      } else if (problems.length > 0 || reports.some((r) => r.status === 'error')) process.exitCode = 1;
+      } else if (problems.length > 0) process.exitCode = 2;
+      else if (reports.some((r) => r.status === 'error')) process.exitCode = 1;
     });
 }

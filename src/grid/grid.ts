@@ -149,7 +149,19 @@ export function hashCells(height: number, width: number, cells: Uint8Array): num
   return h >>> 0;
 }
 
+/**
+ * The last shape refused for being over the cap, and how many were refused so far: a traced run
+ * reads it to say that a step failed because of the cap. Written only on a refusal.
+ */
+export const shapesOverCap = { height: 0, width: 0, count: 0 };
+
 /** True when a grid of this shape is allowed (non-empty and within the cap). */
 export function shapeAllowed(height: number, width: number): boolean {
-  return height >= 1 && width >= 1 && height <= sizeCap && width <= sizeCap;
+  if (height >= 1 && width >= 1 && height <= sizeCap && width <= sizeCap) return true;
+  if (height > sizeCap || width > sizeCap) {
+    shapesOverCap.height = height;
+    shapesOverCap.width = width;
+    shapesOverCap.count++;
+  }
+  return false;
 }

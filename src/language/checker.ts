@@ -4,6 +4,8 @@
  */
 import type { Expression, Program } from './ast.ts';
 import type { OperationLookup } from './operation.ts';
+import { nearestNames } from './nearest-names.ts';
+import { positionOf } from './parser.ts';
 import { functionType, isBaseType, splitFunctionType, type BaseType, type Type } from './types.ts';
 
 export interface TypeProblem {
@@ -12,6 +14,9 @@ export interface TypeProblem {
   readonly message: string;
   readonly expected?: string;
   readonly found?: string;
+  /** Where the offending expression starts (1-based), when the program came from text. */
+  readonly line?: number;
+  readonly column?: number;
 }
 
 export class ProgramTypeError extends Error {
@@ -37,9 +42,22 @@ class Problem extends Error {
     message: string,
     readonly expected?: string,
     readonly found?: string,
+    /** The offending expression, to point at its column. */
+    readonly at?: Expression,
   ) {
     super(message);
   }
+}
+
+function problemOf(step: string, error: Problem): TypeProblem {
+  const where = error.at ? positionOf(error.at) : undefined;
+  return {
+    step,
+    message: error.message,
+    ...(error.expected !== undefined ? { expected: error.expected } : {}),
+    ...(error.found !== undefined ? { found: error.found } : {}),
+    ...(where ? { line: where.line, column: where.column } : {}),
+  };
 }
 
 function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: OperationLookup): Type {
@@ -47,7 +65,10 @@ function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Operat
     case 'variable': {
       const t = scope.get(e.name);
       if (t === (BROKEN as Type)) throw new Problem(BROKEN);
-      if (!t) throw new Problem(`unknown name '${e.name}'`, 'a step defined above or the input', `'${e.name}'`);
+      if (!t) {
+        const near = nearestNames(e.name, [...scope.keys()].filter((k) => scope.get(k) !== (BROKEN as Type)));
+        throw new Problem(`unknown name '${e.name}'${near.length > 0 ? `; did you mean ${near.join(', ')}?` : ''}`, 'a step defined above or the input', `'${e.name}'`, e);
+      }
       return t;
     }
     case 'literal':
@@ -56,12 +77,16 @@ function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Operat
       throw new Problem("'_' may only stand as the first argument of a call passed to another primitive");
     case 'call': {
       const p = library.get(e.primitive);
-      if (!p) throw new Problem(`unknown primitive '${e.primitive}'`, 'a primitive listed by `pithy primitives`', `'${e.primitive}'`);
+      if (!p) {
+        const near = library.names ? nearestNames(e.primitive, library.names()) : [];
+        throw new Problem(`unknown primitive '${e.primitive}'${near.length > 0 ? `; did you mean ${near.join(', ')}?` : ''}`, 'a primitive listed by `pithy primitives`', `'${e.primitive}'`, e);
+      }
       if (e.arguments.length !== p.parameters.length) {
         throw new Problem(
           `${p.name} takes ${p.parameters.length} argument${p.parameters.length === 1 ? '' : 's'}, got ${e.arguments.length}`,
           `${p.name}(${p.parameters.join(', ')})`,
-          `${e.arguments.length} arguments`,
+          `${e.arguments.length} argument${e.arguments.length === 1 ? '' : 's'}`,
+          e,
         );
       }
       const isSection = e.arguments.length > 0 && e.arguments[0]!.kind === 'hole';
@@ -70,13 +95,13 @@ function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Operat
         const arg = e.arguments[i]!;
         const got = typeOfArgument(arg, want, scope, library);
         if (got !== want) {
-          throw new Problem(`argument ${i + 1} of ${p.name} has the wrong type`, want, got);
+          throw new Problem(`argument ${i + 1} of ${p.name} has the wrong type`, want, got, arg);
         }
       }
       if (isSection) {
         const open = p.parameters[0]!;
         if (!isBaseType(open) || !isBaseType(p.result)) {
-          throw new Problem(`${p.name} cannot be used as a section: its open argument and result must be base types`);
+          throw new Problem(`${p.name} cannot be used as a section: its open argument and result must be base types`, undefined, undefined, e);
         }
         return functionType(open, p.result as BaseType);
       }
@@ -87,7 +112,7 @@ function typeOf(e: Expression, scope: ReadonlyMap<string, Type>, library: Operat
 
 function typeOfArgument(arg: Expression, want: Type, scope: ReadonlyMap<string, Type>, library: OperationLookup): Type {
   if (arg.kind === 'call' && arg.arguments.length > 0 && arg.arguments[0]!.kind === 'hole' && splitFunctionType(want) === undefined) {
-    throw new Problem('a section (a call with _) is only allowed where a function is expected', want, 'a section');
+    throw new Problem('a section (a call with _) is only allowed where a function is expected', want, 'a section', arg);
   }
   return typeOf(arg, scope, library);
 }
@@ -107,7 +132,7 @@ export function checkProgram(program: Program, library: OperationLookup): { step
     } catch (error) {
       if (!(error instanceof Problem)) throw error;
       scope.set(step.name, BROKEN as Type);
-      if (error.message !== BROKEN) problems.push({ step: step.name, message: error.message, expected: error.expected, found: error.found });
+      if (error.message !== BROKEN) problems.push(problemOf(step.name, error));
     }
   }
   let answer: Type = 'Grid';
@@ -116,7 +141,7 @@ export function checkProgram(program: Program, library: OperationLookup): { step
     if (answer !== 'Grid') problems.push({ step: 'answer', message: 'the answer must be a grid', expected: 'Grid', found: answer });
   } catch (error) {
     if (!(error instanceof Problem)) throw error;
-    if (error.message !== BROKEN) problems.push({ step: 'answer', message: error.message, expected: error.expected, found: error.found });
+    if (error.message !== BROKEN) problems.push(problemOf('answer', error));
   }
   if (problems.length > 0) throw new ProgramTypeError(problems);
   return { steps: scope, answer };
@@ -127,7 +152,7 @@ export function checkExpression(e: Expression, scope: ReadonlyMap<string, Type>,
   try {
     return typeOf(e, scope, library);
   } catch (error) {
-    if (error instanceof Problem) throw new ProgramTypeError([{ step: 'answer', message: error.message, expected: error.expected, found: error.found }]);
+    if (error instanceof Problem) throw new ProgramTypeError([problemOf('answer', error)]);
     throw error;
   }
 }

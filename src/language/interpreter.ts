@@ -6,17 +6,31 @@
 import { Grid } from '../grid/grid.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 import { checkProgram } from './checker.ts';
-import { FAILURE, type Failure } from './failure.ts';
+import { FAILURE, isFailure, type Failure } from './failure.ts';
+import { explainApplication, type FailureOrigin } from './failure-reason.ts';
 import { applyOperation, sectionOf, type OperationLookup } from './operation.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
+import { printExpression } from './printer.ts';
 import type { Type } from './types.ts';
+
+/** A call nested inside a step's expression, with the value it gave (traced runs only). */
+export interface CallTrace {
+  /** The call as program text. */
+  readonly call: string;
+  readonly type: Type;
+  readonly value: unknown;
+}
 
 export interface TraceEntry {
   /** The step's name, or 'answer'. */
   readonly name: string;
   readonly type: Type;
   readonly value: unknown;
+  /** When the value is FAILURE: the call where the failure started, and why. */
+  readonly failure?: FailureOrigin;
+  /** The calls nested inside the step's expression, innermost first, each with its value. */
+  readonly calls?: readonly CallTrace[];
 }
 
 export interface RunResult {
@@ -61,6 +75,60 @@ export function evaluateExpression(e: Expression, env: ReadonlyMap<string, unkno
 }
 
 /**
+ * Evaluates like {@link evaluateExpression} but records every nested call's value in `calls`
+ * and, when the value is FAILURE, where and why the failure started. Only traced runs use it,
+ * so the search's path keeps no reasons.
+ */
+function evaluateTraced(
+  e: Expression,
+  env: ReadonlyMap<string, unknown>,
+  library: OperationLookup,
+  calls: CallTrace[],
+  nested: boolean,
+): { value: unknown; origin?: FailureOrigin } {
+  switch (e.kind) {
+    case 'variable':
+      return env.has(e.name) ? { value: env.get(e.name) } : { value: FAILURE, origin: { call: e.name, reason: { kind: 'no value', name: e.name } } };
+    case 'literal':
+      return { value: literalValue(e.literal) };
+    case 'hole':
+      return { value: FAILURE, origin: { call: '_', reason: { kind: 'no value', name: '_' } } };
+    case 'call': {
+      const text = printExpression(e);
+      const p = library.get(e.primitive);
+      if (!p) return { value: FAILURE, origin: { call: text, reason: { kind: 'no value', name: e.primitive } } };
+      const isSection = e.arguments.length > 0 && e.arguments[0]!.kind === 'hole';
+      const args: unknown[] = [];
+      const names: (string | undefined)[] = [];
+      let inner: FailureOrigin | undefined;
+      for (let i = isSection ? 1 : 0; i < e.arguments.length; i++) {
+        const a = e.arguments[i]!;
+        const r = evaluateTraced(a, env, library, calls, true);
+        args.push(r.value);
+        names.push(a.kind === 'variable' ? a.name : undefined);
+        if (inner === undefined && r.origin !== undefined) inner = r.origin;
+      }
+      if (isSection) {
+        if (inner !== undefined) return { value: FAILURE, origin: inner };
+        return { value: sectionOf(p, args) };
+      }
+      let value: unknown;
+      let origin: FailureOrigin | undefined;
+      if (inner !== undefined) {
+        value = FAILURE;
+        origin = inner;
+      } else {
+        const applied = explainApplication(p, args, names);
+        value = applied.value;
+        if (applied.reason !== undefined) origin = { call: text, reason: applied.reason };
+      }
+      if (nested) calls.push({ call: text, type: p.result, value });
+      return origin === undefined ? { value } : { value, origin };
+    }
+  }
+}
+
+/**
  * Runs `program` on `input`. The program is type-checked first (a ProgramTypeError is thrown
  * for an ill-typed one); after that, running never throws.
  */
@@ -68,13 +136,19 @@ export function runProgram(program: Program, input: Grid, library: OperationLook
   const types = checkProgram(program, library);
   const env = new Map<string, unknown>([[program.input, input]]);
   const trace: TraceEntry[] = [];
-  for (const step of program.steps) {
-    const value = evaluateExpression(step.expression, env, library);
-    env.set(step.name, value);
-    if (options.trace) trace.push({ name: step.name, type: types.steps.get(step.name)!, value });
+  if (!options.trace) {
+    for (const step of program.steps) env.set(step.name, evaluateExpression(step.expression, env, library));
+    const answer = evaluateExpression(program.answer, env, library);
+    return { output: answer instanceof Grid ? answer : FAILURE, trace };
   }
-  const answer = evaluateExpression(program.answer, env, library);
-  const output = answer instanceof Grid ? answer : FAILURE;
-  if (options.trace) trace.push({ name: 'answer', type: 'Grid', value: output });
-  return { output, trace };
+  const traceStep = (name: string, type: Type, expression: Expression): unknown => {
+    const calls: CallTrace[] = [];
+    const { value, origin } = evaluateTraced(expression, env, library, calls, false);
+    const failure = isFailure(value) ? (origin ?? { call: printExpression(expression), reason: { kind: 'cannot apply' as const } }) : undefined;
+    trace.push({ name, type, value, ...(failure ? { failure } : {}), ...(calls.length > 0 ? { calls } : {}) });
+    return value;
+  };
+  for (const step of program.steps) env.set(step.name, traceStep(step.name, types.steps.get(step.name)!, step.expression));
+  const answer = traceStep('answer', 'Grid', program.answer);
+  return { output: answer instanceof Grid ? answer : FAILURE, trace };
 }

@@ -24,6 +24,8 @@ export interface Operation {
 /** Finds operations by name: what the checker and the interpreter look calls up in. */
 export interface OperationLookup {
   get(name: string): Operation | undefined;
+  /** Every name, for suggesting the nearest ones to a name that is not known. */
+  names?(): readonly string[];
 }
 
 /**

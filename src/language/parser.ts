@@ -103,7 +103,23 @@ class LineReader {
 /** Calls nest at most this deep (deeper text is refused, never a stack overflow). */
 export const MAXIMUM_NESTING = 100;
 
+/** Where each parsed expression starts in the text (1-based); kept beside the tree, not in it. */
+const positions = new WeakMap<Expression, { readonly line: number; readonly column: number }>();
+
+/** Line and column where a parsed expression starts, when it came from the parser. */
+export function positionOf(e: Expression): { readonly line: number; readonly column: number } | undefined {
+  return positions.get(e);
+}
+
 function parseLiteralOrExpression(r: LineReader, depth = 0): Expression {
+  r.skipSpaces();
+  const at = { line: r.lineNumber, column: r.offset + r.position + 1 };
+  const e = parseExpressionAt(r, depth);
+  positions.set(e, at);
+  return e;
+}
+
+function parseExpressionAt(r: LineReader, depth: number): Expression {
   const c = r.peek();
   if (c === '#') return { kind: 'literal', literal: { type: 'Colour', value: r.colour() } };
   if (c === '-' || (c >= '0' && c <= '9')) return { kind: 'literal', literal: { type: 'Int', value: r.integer('a whole number') } };

@@ -18,6 +18,10 @@ export class Library {
     return this.byName.get(name);
   }
 
+  names(): readonly string[] {
+    return this.primitives.map((p) => p.name);
+  }
+
   /** A copy without the named primitives (for ablations and tests). */
   without(names: readonly string[]): Library {
     const drop = new Set(names);

@@ -82,20 +82,42 @@ function backgroundCode(colour: number, mode: ColourMode): string {
   return `\u001b[48;5;${HARBOUR_TABLE_INDICES[colour]!}m`;
 }
 
-/** One cell: two spaces on its colour, or a character pair in plain text. */
-function drawCell(colour: number, mode: ColourMode): string {
+/** Light or dark text, whichever reads better on the colour. */
+function markCode(colour: number, mode: ColourMode): string {
+  const e = HARBOUR_PALETTE[colour]!;
+  const light = 0.299 * e.red + 0.587 * e.green + 0.114 * e.blue > 140;
+  if (mode === 'truecolour') return light ? '\u001b[38;2;0;0;0m' : '\u001b[38;2;255;255;255m';
+  return light ? '\u001b[38;5;16m' : '\u001b[38;5;231m';
+}
+
+/**
+ * One cell: two spaces on its colour, or a character pair in plain text. A marked cell (one
+ * that differs from the grid it is compared with) shows '><' on its colour, or its digit
+ * followed by '<' in plain text.
+ */
+function drawCell(colour: number, mode: ColourMode, marked = false): string {
   if (mode === 'plain') {
-    if (colour === EMPTY) return '  ';
-    return colour === 0 ? '. ' : `${colour} `;
+    if (colour === EMPTY) return marked ? ' <' : '  ';
+    return `${colour === 0 ? '.' : colour}${marked ? '<' : ' '}`;
   }
-  if (colour === EMPTY || colour > 9) return '  ';
-  return `${backgroundCode(colour, mode)}  ${RESET}`;
+  if (colour === EMPTY || colour > 9) return marked ? '><' : '  ';
+  return `${backgroundCode(colour, mode)}${marked ? `${markCode(colour, mode)}><` : '  '}${RESET}`;
 }
 
 /** Choices for a drawing. */
 export interface DrawOptions {
   /** Add a line under the drawing naming each colour it uses (number and palette name). */
   readonly legend?: boolean;
+  /** Mark the cells that differ from this grid (when both have the same size). */
+  readonly compareWith?: Grid;
+}
+
+/** How many cells differ between two grids of the same size (undefined when the sizes differ). */
+export function countDifferingCells(a: Grid, b: Grid): number | undefined {
+  if (a.height !== b.height || a.width !== b.width) return undefined;
+  let n = 0;
+  for (let i = 0; i < a.cells.length; i++) if (a.cells[i] !== b.cells[i]) n++;
+  return n;
 }
 
 /** The colours 0–9 that occur in the grids, in increasing order. */
@@ -123,9 +145,11 @@ export function legendLine(colours: readonly number[], mode: ColourMode): string
  */
 export function drawGrid(grid: Grid, mode: ColourMode, options: DrawOptions = {}): string[] {
   const lines: string[] = [];
+  const other = options.compareWith;
+  const compare = other !== undefined && other.height === grid.height && other.width === grid.width;
   for (let r = 0; r < grid.height; r++) {
     let line = '';
-    for (let c = 0; c < grid.width; c++) line += drawCell(grid.get(r, c), mode);
+    for (let c = 0; c < grid.width; c++) line += drawCell(grid.get(r, c), mode, compare && other.get(r, c) !== grid.get(r, c));
     lines.push(mode === 'plain' ? line.trimEnd() : line);
   }
   if (options.legend) lines.push(legendLine(coloursUsed([grid]), mode));
@@ -173,5 +197,25 @@ export function drawPair(
   else blocks.push({ label: `${labels.output} (not given)`, lines: ['?'], width: 1 });
   const lines = sideBySide(blocks, '  ->  ');
   if (options.legend) lines.push(legendLine(coloursUsed(output ? [input, output] : [input]), mode));
+  return lines;
+}
+
+/**
+ * The expected grid beside the one a program gave, each with the cells that differ marked, and
+ * a line saying how many differ (or that the sizes differ).
+ */
+export function drawComparison(expected: Grid, got: Grid, mode: ColourMode, labels: { expected: string; got: string } = { expected: 'expected', got: 'got' }): string[] {
+  const blocks = [
+    { label: `${labels.expected} ${expected.height}x${expected.width}`, lines: drawGrid(expected, mode, { compareWith: got }), width: expected.width * 2 },
+    { label: `${labels.got} ${got.height}x${got.width}`, lines: drawGrid(got, mode, { compareWith: expected }), width: got.width * 2 },
+  ];
+  const lines = sideBySide(blocks, '   ');
+  const n = countDifferingCells(expected, got);
+  const marker = mode === 'plain' ? "'<'" : "'><'";
+  lines.push(
+    n === undefined
+      ? `the sizes differ: expected ${expected.height}x${expected.width}, got ${got.height}x${got.width}`
+      : `${n} cell${n === 1 ? '' : 's'} differ${n === 1 ? 's' : ''} (marked ${marker})`,
+  );
   return lines;
 }

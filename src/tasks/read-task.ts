@@ -8,16 +8,52 @@ import { Grid, getSizeCap } from '../grid/grid.ts';
 import { jsonErrorIndex, linePlace } from './json-error-place.ts';
 import { freezeTask, type Pair, type Task, type TestCase } from './task.ts';
 
+/**
+ * A task file that cannot be used. `jsonPath` names the place in the JSON ('$.train[0].input');
+ * it is empty for problems of the file itself (no such file, a folder) and for JSON syntax
+ * errors, which carry the line and column instead.
+ */
 export class TaskFileError extends Error {
   constructor(
     readonly file: string,
     readonly jsonPath: string,
     readonly problem: string,
+    readonly position?: { readonly line: number; readonly column: number },
   ) {
-    super(`${file}: at ${jsonPath}: ${problem}`);
+    super(position ? `${file}:${position.line}:${position.column}: ${problem}` : jsonPath === '' ? `${file}: ${problem}` : `${file}: at ${jsonPath}: ${problem}`);
     this.name = 'TaskFileError';
   }
 }
+
+/** Plain words for a file-system error code. */
+export function fileProblem(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  switch (code) {
+    case 'ENOENT':
+      return 'no such file';
+    case 'EISDIR':
+      return 'is a folder, not a file';
+    case 'EACCES':
+    case 'EPERM':
+      return 'permission denied';
+    default:
+      return `cannot be read (${code ?? (error as Error).message})`;
+  }
+}
+
+/** Line and column (1-based) of a character offset in a text. */
+function lineAndColumn(text: string, offset: number): { line: number; column: number } {
+  const before = text.slice(0, offset).split('\n');
+  return { line: before.length, column: before[before.length - 1]!.length + 1 };
+}
+
+/** Where JSON.parse stopped: from 'position N' in its message, or the end of the text. */
+function syntaxErrorPosition(text: string, message: string): { line: number; column: number } {
+  const match = /position (\d+)/.exec(message);
+  return lineAndColumn(text, match ? Number(match[1]) : text.length);
+}
+
+const SIZE_CAP_HINT = 'raise it with pithy --size-cap N';
 
 function describe(value: unknown): string {
   if (value === null) return 'null';
@@ -31,7 +67,7 @@ function readGrid(value: unknown, file: string, path: string): Grid {
   const cap = getSizeCap();
   if (!Array.isArray(value)) throw new TaskFileError(file, path, `expected a grid (a list of rows), found ${describe(value)}`);
   if (value.length === 0) throw new TaskFileError(file, path, 'expected a grid with at least one row, found an empty list');
-  if (value.length > cap) throw new TaskFileError(file, path, `grid has ${value.length} rows, over the size cap of ${cap}`);
+  if (value.length > cap) throw new TaskFileError(file, path, `grid has ${value.length} rows, over the size cap of ${cap} (${SIZE_CAP_HINT})`);
   let width = -1;
   const rows: number[][] = [];
   for (let r = 0; r < value.length; r++) {
@@ -39,7 +75,7 @@ function readGrid(value: unknown, file: string, path: string): Grid {
     const rowPath = `${path}[${r}]`;
     if (!Array.isArray(row)) throw new TaskFileError(file, rowPath, `expected a row (a list of colours), found ${describe(row)}`);
     if (row.length === 0) throw new TaskFileError(file, rowPath, 'expected a row with at least one cell, found an empty row');
-    if (row.length > cap) throw new TaskFileError(file, rowPath, `row has ${row.length} cells, over the size cap of ${cap}`);
+    if (row.length > cap) throw new TaskFileError(file, rowPath, `row has ${row.length} cells, over the size cap of ${cap} (${SIZE_CAP_HINT})`);
     if (width < 0) width = row.length;
     else if (row.length !== width) throw new TaskFileError(file, rowPath, `row has ${row.length} cells but row 0 has ${width}: rows must be equally long`);
     for (let c = 0; c < row.length; c++) {
@@ -83,7 +119,11 @@ export function parseTask(text: string, file: string, name = basename(file).repl
   try {
     root = JSON.parse(json);
   } catch (error) {
-    throw new TaskFileError(file, syntaxErrorPlace(json), `not valid JSON (${(error as Error).message})`);
+    const message = (error as Error).message;
+    const reason = message.replace(/\s*\(line \d+ column \d+\)/, '').replace(/ in JSON at position \d+/, '');
+    const index = jsonErrorIndex(json);
+    const position = index >= 0 ? lineAndColumn(json, index) : syntaxErrorPosition(json, message);
+    throw new TaskFileError(file, syntaxErrorPlace(json), `not valid JSON: ${reason}`, position);
   }
   if (typeof root !== 'object' || root === null || Array.isArray(root)) {
     throw new TaskFileError(file, '$', `expected an object with "train" and "test", found ${describe(root)}`);
@@ -108,26 +148,32 @@ export function parseTask(text: string, file: string, name = basename(file).repl
 export function readTaskFile(file: string): Task {
   let text: string;
   try {
-    text = readFileSync(file, 'utf8');
+    text = file === '-' ? readFileSync(0, 'utf8') : readFileSync(file, 'utf8');
   } catch (error) {
-    throw new TaskFileError(file, '$', `cannot read the file (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})`);
+    throw new TaskFileError(file === '-' ? 'standard input' : file, '', fileProblem(error));
   }
-  return parseTask(text, file);
+  return file === '-' ? parseTask(text, 'standard input', 'stdin') : parseTask(text, file);
 }
 
-/** The task files a path names: the file itself, or every *.json in a directory, sorted. */
+/**
+ * The task files a path names: the file itself, or every *.json in a folder, sorted; '-' is
+ * standard input. A folder without task files is an error, not an empty run.
+ */
 export function taskFiles(path: string): string[] {
+  if (path === '-') return [path];
   let stats;
   try {
     stats = statSync(path);
-  } catch {
-    throw new TaskFileError(path, '$', 'no such file or directory');
+  } catch (error) {
+    throw new TaskFileError(path, '', (error as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file or folder' : fileProblem(error));
   }
   if (!stats.isDirectory()) return [path];
-  return readdirSync(path)
+  const files = readdirSync(path)
     .filter((f) => f.toLowerCase().endsWith('.json'))
     .sort()
     .map((f) => join(path, f));
+  if (files.length === 0) throw new TaskFileError(path, '', 'the folder holds no task files (*.json)');
+  return files;
 }
 
 export type TaskOrError = { readonly ok: true; readonly task: Task } | { readonly ok: false; readonly file: string; readonly error: TaskFileError };

@@ -6,6 +6,7 @@ import type { Grid } from '../grid/grid.ts';
 import type { OperationLookup } from '../language/operation.ts';
 import type { Program } from '../language/ast.ts';
 import { isFailure } from '../language/failure.ts';
+import { describeFailure } from '../language/failure-reason.ts';
 import { runProgram, type TraceEntry } from '../language/interpreter.ts';
 import type { Task } from './task.ts';
 
@@ -26,6 +27,14 @@ export interface PairResult {
   readonly difference?: Difference;
   /** Present when a trace was asked for. */
   readonly trace?: readonly TraceEntry[];
+  /** When the program failed: the first step that failed and why, in plain words. */
+  readonly failedStep?: { readonly step: string; readonly why: string };
+}
+
+/** The first step of a trace whose value is FAILURE, and why (in plain words). */
+export function firstFailedStep(trace: readonly TraceEntry[]): { step: string; why: string } | undefined {
+  const entry = trace.find((t) => t.failure !== undefined);
+  return entry ? { step: entry.name, why: describeFailure(entry.failure!) } : undefined;
 }
 
 /** The first difference in reading order, or undefined when the grids are equal. */
@@ -69,6 +78,8 @@ export function runOnTask(program: Program, task: Task, library: OperationLookup
     const { output, trace } = runProgram(program, input, library, { trace: options.trace });
     const got = isFailure(output) ? undefined : output;
     const difference: Difference | undefined = got ? firstDifference(expected, got) : { kind: 'failure' };
+    // A failed run is run again with a trace (off the hot path) to say which step failed and why.
+    const failedStep = got ? undefined : firstFailedStep(options.trace ? trace : runProgram(program, input, library, { trace: true }).trace);
     return {
       set,
       index,
@@ -78,6 +89,7 @@ export function runOnTask(program: Program, task: Task, library: OperationLookup
       passed: difference === undefined,
       ...(difference ? { difference } : {}),
       ...(options.trace ? { trace } : {}),
+      ...(failedStep ? { failedStep } : {}),
     };
   });
 }
