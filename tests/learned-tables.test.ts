@@ -3,12 +3,14 @@
  * demonstrations, fail cleanly on a key they lack, print and parse back exactly, cost what the
  * README's formula says (worked out by hand below), and are found by the solver.
  */
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultLibrary } from '../dsl/index.ts';
 import { Grid } from '../src/grid/grid.ts';
 import type { LiteralValue } from '../src/language/ast.ts';
 import { FAILURE } from '../src/language/failure.ts';
+import { checkProgram } from '../src/language/checker.ts';
 import { runProgram } from '../src/language/interpreter.ts';
 import { parseExpression, parseProgram, ProgramSyntaxError } from '../src/language/parser.ts';
 import { printLiteral, printProgram } from '../src/language/printer.ts';
@@ -263,5 +265,29 @@ describe('the solver with learned tables', () => {
     const result = solvePuzzle(tide, { maxCandidates: 30_000, timeLimitSeconds: 600, maxBits: 38 });
     expect(result.solutions.every((s) => s.bits <= 38)).toBe(true);
     expect(result.solutions.some((s) => s.text.includes('cell_rule'))).toBe(false);
+  });
+});
+
+describe("the README's table examples", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const blocks = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)].map((m) => m[1]!).filter((b) => b.includes('_rule['));
+
+  it('are the lantern and dusk-boat programs, and reproduce those tasks', () => {
+    expect(blocks.length).toBe(2);
+    const cases: [string, Puzzle][] = [
+      [lanternRule, lanterns],
+      [duskRule, dusk],
+    ];
+    cases.forEach(([rule, puzzle], i) => {
+      const program = parseProgram(blocks[i]!, 'README.md');
+      checkProgram(program, defaultLibrary);
+      expect(printProgram(program)).toBe(blocks[i]);
+      expect(blocks[i]).toContain(rule);
+      for (const pair of puzzle.train) expect((runProgram(program, pair.input, defaultLibrary).output as Grid).equals(pair.output)).toBe(true);
+    });
+  });
+
+  it('state the bits the formula gives', () => {
+    expect(readme).toContain('the lantern rule above costs 31 bits, the dusk-boat\n  rule 23');
   });
 });
