@@ -31,6 +31,17 @@ describe('featureOfCells', () => {
   });
 });
 
+describe('featureOfCells: enclosed and on_border', () => {
+  it('marks background cells walled in by other colours, and the cells of the border', () => {
+    //   2 2 2 0
+    //   2 0 2 0
+    //   2 2 2 0
+    const g = G([[2, 2, 2, 0], [2, 0, 2, 0], [2, 2, 2, 0]]);
+    expect(Array.from(featureOfCells(g, { name: 'enclosed' }))).toEqual([0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0]);
+    expect(Array.from(featureOfCells(g, { name: 'on_border' }))).toEqual([1, 1, 1, 1, 1, 0, 0, 1, 1, 1, 1, 1]);
+  });
+});
+
 describe('applyCellRule', () => {
   // A cell of colour 0 whose left neighbour is 1 becomes 2; everything else keeps its colour.
   const rule = new CellRule(

@@ -50,10 +50,10 @@ describe.skipIf(!datasetPresent)('outside check: learned tables on the ARC-AGI-1
       `outside-learned-tables: a learned table reproduces train and test outputs of ${any.size} tasks ` +
         `(cell rules ${solved.cell.length}, object rules ${solved.object.length}, colour maps ${solved.palette.length})`,
     );
-    // Lower bounds measured by this test when the learners were written (cell rules 21, object
-    // rules 10, colour maps 4, tables of any kind 28); a change that loses tasks should be noticed.
-    expect(solved.cell.length).toBeGreaterThanOrEqual(21);
+    // Lower bounds measured by this test when the learners were written (cell rules 24, object
+    // rules 10, colour maps 4, tables of any kind 31); a change that loses tasks should be noticed.
+    expect(solved.cell.length).toBeGreaterThanOrEqual(24);
     expect(solved.object.length).toBeGreaterThanOrEqual(10);
-    expect(any.size).toBeGreaterThanOrEqual(28);
+    expect(any.size).toBeGreaterThanOrEqual(31);
   });
 });

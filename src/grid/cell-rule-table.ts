@@ -1,13 +1,16 @@
 /**
  * Cell rules: a table that gives every output cell's colour from a few features of the input
  * cell and its neighbourhood (its colour, a neighbour's colour, how many neighbours have a
- * colour, whether its row or column holds a colour, the parity of its row or column).
+ * colour, whether its row or column holds a colour, the parity of its row or column, whether
+ * it is a background cell enclosed by other colours, whether it lies on the grid's border).
  *
  * A rule is a list of features, the first always the cell's own colour, and a table from keys
  * (one value per feature) to colours. Applying it to a grid looks every cell's key up; a key the
  * table does not hold makes the whole application fail (null): a rule never guesses.
  */
+import { backgroundColour } from './components.ts';
 import { Grid } from './grid.ts';
+import { enclosedCells } from './holes.ts';
 
 /** The value a neighbour feature takes for a position outside the grid. */
 export const EDGE = 10;
@@ -28,6 +31,8 @@ export const CELL_FEATURE_NAMES = [
   'column_holds',
   'row_parity',
   'column_parity',
+  'enclosed',
+  'on_border',
 ] as const;
 export type CellFeatureName = (typeof CELL_FEATURE_NAMES)[number];
 
@@ -40,7 +45,8 @@ export interface CellFeature {
 /**
  * What values a feature takes: a colour; a colour or EDGE (a neighbour); a count of the 8
  * surrounding cells (0-8) or of the 4 edge neighbours (0-4); yes (1) or no (0); even (0) or
- * odd (1).
+ * odd (1). `enclosed` is yes for a cell of the grid's background colour that cannot reach the
+ * border through edge steps over background cells.
  */
 export type CellFeatureValues = 'colour' | 'neighbour' | 'count of 8' | 'count of 4' | 'yes or no' | 'parity';
 
@@ -81,6 +87,8 @@ export function featureValues(name: CellFeatureName): CellFeatureValues {
       return 'count of 4';
     case 'row_holds':
     case 'column_holds':
+    case 'enclosed':
+    case 'on_border':
       return 'yes or no';
     case 'row_parity':
     case 'column_parity':
@@ -127,6 +135,13 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
       return out;
     case 'row_parity':
       for (let r = 0; r < height; r++) out.fill(r & 1, r * width, (r + 1) * width);
+      return out;
+    case 'enclosed':
+      return enclosedCells(g, backgroundColour(g));
+    case 'on_border':
+      for (let r = 0; r < height; r++) {
+        for (let c = 0; c < width; c++) out[r * width + c] = r === 0 || c === 0 || r === height - 1 || c === width - 1 ? 1 : 0;
+      }
       return out;
     case 'column_parity':
       for (let i = 0; i < cells.length; i++) out[i] = (i % width) & 1;

@@ -7,8 +7,9 @@
  *
  * Cell rules: every demonstration pair must keep its shape. The features tried are the cell's
  * colour plus one or two of: a neighbour's colour (8 directions), how many of the 8 or 4
- * neighbours have a colour, whether the cell's row or column holds a colour, the parity of its
- * row or column (for each colour of the task); and the colour plus all 4 or all 8 neighbours.
+ * neighbours have a colour, whether the cell's row or column holds a colour (for each colour of
+ * the task), the parity of its row or column, whether it is enclosed, whether it lies on the
+ * border; and the colour plus all 4 or all 8 neighbours.
  *
  * Object rules: every demonstration pair must keep its shape. For each way of cutting into
  * objects and each property, each object of a demonstration input is matched to what the output
@@ -79,7 +80,7 @@ function compareKeys(a: readonly number[], b: readonly number[]): number {
 function cellAtoms(colours: readonly number[]): CellFeature[] {
   const atoms: CellFeature[] = NEIGHBOURS_8.map((name) => ({ name }));
   for (const name of ['around', 'beside', 'row_holds', 'column_holds'] as const) for (const colour of colours) atoms.push({ name, colour });
-  atoms.push({ name: 'row_parity' }, { name: 'column_parity' });
+  atoms.push({ name: 'row_parity' }, { name: 'column_parity' }, { name: 'enclosed' }, { name: 'on_border' });
   return atoms;
 }
 

@@ -33,7 +33,7 @@ export function colourBits(k: number): number {
   return Math.max(1, Math.ceil(Math.log2(Math.max(1, k))));
 }
 
-/** Bits for choosing a feature after the cell's own colour (14 kinds), and a colour it names. */
+/** Bits for choosing a feature after the cell's own colour (16 kinds), and a colour it names. */
 export const FEATURE_CHOICE_BITS = 4;
 export const FEATURE_COLOUR_BITS = 4;
 /** Bits for an object rule's way of cutting into objects (4) and its property (8). */
