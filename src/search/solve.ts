@@ -69,22 +69,27 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
   const outputs = puzzle.train.map((p) => p.output);
   const constants = taskConstants(puzzle);
   const maxBits = options.maxBits ?? 60;
+  const extraBits = options.extraBits ?? 6;
+  const trainCount = outputs.length;
+  // Tables applied straight to the input (table-programs.ts), ranked with the rest by bits. As
+  // with the enumeration's own first solution, nothing dearer than the cheapest of them by more
+  // than extraBits can be an attempt, so the enumeration need not go further.
+  const tables = tablePrograms(constants, library, inputs, outputs, INPUT_NAME, maxBits);
+  const cheapestTable = Math.min(...tables.map((t) => t.bits));
   const outcome = enumerate(inputs, outputs, constants, productionsFor(library), {
     deadline: started + (options.timeLimitSeconds ?? 20) * 1000,
     maxCandidates: options.maxCandidates ?? 50_000_000,
     maxStoreBytes: options.maxStoreBytes ?? 1.5e9,
-    maxCost: maxBits,
+    maxCost: Math.min(maxBits, cheapestTable + extraBits),
     attempts,
-    extraBits: options.extraBits ?? 6,
+    extraBits,
     pruning: options.pruning ?? true,
   }, INPUT_NAME);
-  const trainCount = outputs.length;
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
     return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[] };
   });
-  // Tables applied straight to the input (table-programs.ts), ranked with the rest by bits.
-  for (const t of tablePrograms(constants, library, inputs, outputs, INPUT_NAME, maxBits)) {
+  for (const t of tables) {
     found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount) });
   }
   const solutions: Solution[] = [];
