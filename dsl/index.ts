@@ -9,6 +9,7 @@ import { fillingPrimitives } from './filling.ts';
 import { geometryPrimitives } from './geometry.ts';
 import { objectPrimitives } from './objects.ts';
 import { objectRulePrimitives } from './object-rules.ts';
+import { learnedRulePrimitives } from './learned-rules.ts';
 import { selectionPrimitives } from './selection.ts';
 import { symmetryPrimitives } from './symmetry.ts';
 
@@ -23,6 +24,7 @@ export const PRIMITIVES: readonly Primitive[] = [
   ...objectRulePrimitives,
   ...fillingPrimitives,
   ...countingPrimitives,
+  ...learnedRulePrimitives,
 ];
 
 /** The library built from every record above. */

@@ -1,3 +1,6 @@
+import type { CellFeature, CellRuleEntry } from '../grid/cell-rule-table.ts';
+import type { ObjectGrouping, ObjectProperty, ObjectRuleEntry } from '../grid/object-rule-table.ts';
+
 /**
  * Programs as data. A program names its input grid, computes named steps in order, and ends
  * with an answer expression. Comments are part of the tree so printing keeps them.
@@ -7,7 +10,16 @@ export type LiteralValue =
   | { readonly type: 'Int'; readonly value: number }
   | { readonly type: 'Bool'; readonly value: boolean }
   | { readonly type: 'Point'; readonly row: number; readonly column: number }
-  | { readonly type: 'Palette'; readonly pairs: readonly (readonly [number, number])[] };
+  | { readonly type: 'Palette'; readonly pairs: readonly (readonly [number, number])[] }
+  /** A learned table from features of a cell to its output colour (src/grid/cell-rule-table.ts). */
+  | { readonly type: 'CellRule'; readonly features: readonly CellFeature[]; readonly entries: readonly CellRuleEntry[] }
+  /** A learned table from a property of an object to what becomes of it (src/grid/object-rule-table.ts). */
+  | {
+      readonly type: 'ObjectRule';
+      readonly grouping: ObjectGrouping;
+      readonly property: ObjectProperty;
+      readonly entries: readonly ObjectRuleEntry[];
+    };
 
 export type Expression =
   | { readonly kind: 'variable'; readonly name: string }

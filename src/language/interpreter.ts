@@ -4,6 +4,8 @@
  * primitive is caught and becomes FAILURE too, so nothing escapes.
  */
 import { Grid } from '../grid/grid.ts';
+import { CellRule } from '../grid/cell-rule-table.ts';
+import { ObjectRule } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 import { checkProgram } from './checker.ts';
 import { FAILURE, isFailure, type Failure } from './failure.ts';
@@ -50,6 +52,10 @@ export function literalValue(l: LiteralValue): unknown {
       return new Point(l.row, l.column);
     case 'Palette':
       return Palette.fromPairs(l.pairs);
+    case 'CellRule':
+      return new CellRule(l.features, l.entries);
+    case 'ObjectRule':
+      return new ObjectRule(l.grouping, l.property, l.entries);
   }
 }
 

@@ -3,6 +3,27 @@
  * line; errors name line:column and what was expected there.
  */
 import { freeze } from 'immer';
+import {
+  CELL_FEATURE_NAMES,
+  EDGE,
+  featureTakesColour,
+  featureValues,
+  isCellFeatureName,
+  largestFeatureValue,
+  packKey,
+  type CellFeature,
+  type CellFeatureValues,
+  type CellRuleEntry,
+} from '../grid/cell-rule-table.ts';
+import {
+  OBJECT_GROUPINGS,
+  OBJECT_PROPERTIES,
+  propertyValues,
+  type ObjectKey,
+  type ObjectOutcome,
+  type ObjectProperty,
+  type ObjectRuleEntry,
+} from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program, Step } from './ast.ts';
 
 export class ProgramSyntaxError extends Error {
@@ -100,6 +121,159 @@ class LineReader {
   }
 }
 
+/** One of a few words; fails naming them. */
+function oneOf<W extends string>(r: LineReader, words: readonly W[], what: string): W {
+  r.skipSpaces();
+  const start = r.position;
+  const word = r.identifier(what);
+  if (!(words as readonly string[]).includes(word)) {
+    r.position = start;
+    r.fail(what);
+  }
+  return word as W;
+}
+
+/** A whole number from `low` to `high`. */
+function boundedInteger(r: LineReader, low: number, high: number, what: string): number {
+  r.skipSpaces();
+  const start = r.position;
+  const value = r.integer(what);
+  if (value < low || value > high) {
+    r.position = start;
+    r.fail(what);
+  }
+  return value;
+}
+
+function parseFeatureValue(r: LineReader, values: CellFeatureValues): number {
+  switch (values) {
+    case 'colour':
+      return r.colour();
+    case 'neighbour':
+      if (r.peek() === '#') return r.colour();
+      oneOf(r, ['edge'], "a colour such as '#3' or 'edge'");
+      return EDGE;
+    case 'count of 8':
+    case 'count of 4': {
+      const high = largestFeatureValue(values);
+      return boundedInteger(r, 0, high, `a count from 0 to ${high}`);
+    }
+    case 'yes or no':
+      return oneOf(r, ['no', 'yes'], "'yes' or 'no'") === 'yes' ? 1 : 0;
+    case 'parity':
+      return oneOf(r, ['even', 'odd'], "'even' or 'odd'") === 'odd' ? 1 : 0;
+  }
+}
+
+/** `cell_rule[colour, ...]{key -> #c, ...}`, after the word `cell_rule`. */
+function parseCellRule(r: LineReader): LiteralValue {
+  r.expect('[');
+  const features: CellFeature[] = [];
+  for (;;) {
+    r.skipSpaces();
+    const start = r.position;
+    const name = r.identifier('a cell feature');
+    if (features.length === 0 && name !== 'colour') {
+      r.position = start;
+      r.fail("'colour', the first feature of every cell rule");
+    }
+    if (!isCellFeatureName(name)) {
+      r.position = start;
+      r.fail(`a cell feature (${CELL_FEATURE_NAMES.join(', ')})`);
+    }
+    features.push(featureTakesColour(name) ? { name, colour: r.colour() } : { name });
+    if (r.peek() !== ',') break;
+    r.expect(',');
+  }
+  r.expect(']', "',' or ']' in the feature list");
+  r.expect('{', "'{' opening the table");
+  const kinds = features.map((f) => featureValues(f.name));
+  const entries: CellRuleEntry[] = [];
+  const seen = new Set<number>();
+  if (r.peek() !== '}') {
+    for (;;) {
+      r.skipSpaces();
+      const start = r.position;
+      const key = kinds.map((k) => parseFeatureValue(r, k));
+      const packed = packKey(key);
+      if (seen.has(packed)) {
+        r.position = start;
+        r.fail('a key not already in the table');
+      }
+      seen.add(packed);
+      r.expect('->', "'->' after the key");
+      entries.push({ key, colour: r.colour() });
+      if (r.peek() !== ',') break;
+      r.expect(',');
+    }
+  }
+  r.expect('}', "',' or '}' in the table");
+  return { type: 'CellRule', features, entries };
+}
+
+function parseObjectKey(r: LineReader, property: ObjectProperty): ObjectKey {
+  switch (propertyValues(property)) {
+    case 'number':
+      return boundedInteger(r, 0, Number.MAX_SAFE_INTEGER, 'a whole number from 0');
+    case 'colour':
+      return r.colour();
+    case 'yes or no':
+      return oneOf(r, ['no', 'yes'], "'yes' or 'no'") === 'yes' ? 1 : 0;
+    case 'shape': {
+      r.skipSpaces();
+      const match = /^[x.]+(?:\/[x.]+)*/.exec(r.text.slice(r.position));
+      const rows = match ? match[0].split('/') : [];
+      if (!match || rows.some((row) => row.length !== rows[0]!.length) || !match[0].includes('x')) {
+        r.fail("a shape: rows of 'x' and '.' of one length joined by '/', such as 'xx/x.'");
+      }
+      r.position += match[0].length;
+      return match[0];
+    }
+  }
+}
+
+function parseOutcome(r: LineReader): ObjectOutcome {
+  if (r.peek() === '#') return { kind: 'recolour', colour: r.colour() };
+  const word = oneOf(r, ['keep', 'remove', 'move'], "'keep', 'remove', a colour such as '#3', or 'move (rows, columns)'");
+  if (word !== 'move') return { kind: word };
+  r.expect('(', "'(' after move");
+  const rows = r.integer('a row offset');
+  r.expect(',', "',' between rows and columns");
+  const columns = r.integer('a column offset');
+  r.expect(')', "')' closing the move");
+  return { kind: 'move', rows, columns };
+}
+
+/** `object_rule[grouping, property]{value -> outcome, ...}`, after the word `object_rule`. */
+function parseObjectRule(r: LineReader): LiteralValue {
+  r.expect('[');
+  const grouping = oneOf(r, OBJECT_GROUPINGS, `a way of cutting into objects (${OBJECT_GROUPINGS.join(', ')})`);
+  r.expect(',', "',' after the way of cutting into objects");
+  const property = oneOf(r, OBJECT_PROPERTIES, `an object property (${OBJECT_PROPERTIES.join(', ')})`);
+  r.expect(']', "']' after the property");
+  r.expect('{', "'{' opening the table");
+  const entries: ObjectRuleEntry[] = [];
+  const seen = new Set<string>();
+  if (r.peek() !== '}') {
+    for (;;) {
+      r.skipSpaces();
+      const start = r.position;
+      const key = parseObjectKey(r, property);
+      if (seen.has(String(key))) {
+        r.position = start;
+        r.fail('a key not already in the table');
+      }
+      seen.add(String(key));
+      r.expect('->', "'->' after the key");
+      entries.push({ key, outcome: parseOutcome(r) });
+      if (r.peek() !== ',') break;
+      r.expect(',');
+    }
+  }
+  r.expect('}', "',' or '}' in the table");
+  return { type: 'ObjectRule', grouping, property, entries };
+}
+
 /** Calls nest at most this deep (deeper text is refused, never a stack overflow). */
 export const MAXIMUM_NESTING = 100;
 
@@ -157,6 +331,8 @@ function parseExpressionAt(r: LineReader, depth: number): Expression {
   }
   const name = r.identifier("an expression (a name, a call, or a literal such as #3, 2, true, (0, 1), {#1 -> #2})");
   if (name === 'true' || name === 'false') return { kind: 'literal', literal: { type: 'Bool', value: name === 'true' } };
+  if (name === 'cell_rule' && r.peek() === '[') return { kind: 'literal', literal: parseCellRule(r) };
+  if (name === 'object_rule' && r.peek() === '[') return { kind: 'literal', literal: parseObjectRule(r) };
   if (r.peek() !== '(') return { kind: 'variable', name };
   if (depth >= MAXIMUM_NESTING) r.fail(`at most ${MAXIMUM_NESTING} nested calls (name some of them as steps)`);
   r.expect('(');

@@ -7,9 +7,65 @@
  *   answer crop_to_object(shelf, largest_object(crates))
  *
  * Literals: colours `#3`, whole numbers `-2`, `true`/`false`, points `(row, column)`,
- * palettes `{#1 -> #2, #3 -> #4}`; `_` is the open argument of a section.
+ * palettes `{#1 -> #2, #3 -> #4}`; `_` is the open argument of a section. Learned tables:
+ *
+ *   cell_rule[colour, row_holds #2]{#0 no -> #0, #0 yes -> #2, #2 yes -> #2}
+ *   object_rule[by_colour, size]{1 -> remove, 2 -> #5, 4 -> keep, 6 -> move (1, 0)}
+ *
+ * A cell rule lists its features in brackets, then its entries: a key (one value per feature,
+ * separated by spaces) and the output colour. Feature values are colours `#3`, `edge` (a
+ * neighbour outside the grid), counts `2`, `yes`/`no`, `even`/`odd`. An object rule names how
+ * the grid is cut into objects and the property it reads, then its entries: a property value
+ * (a number, a colour, `yes`/`no`, or a shape such as `xx/x.`) and what becomes of such
+ * objects: `keep`, `remove`, a colour, or `move (rows, columns)`.
  */
+import { featureTakesColour, featureValues, EDGE, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
+
+function printFeature(f: CellFeature): string {
+  return featureTakesColour(f.name) ? `${f.name} #${f.colour ?? 0}` : f.name;
+}
+
+function printFeatureValue(values: CellFeatureValues, v: number): string {
+  switch (values) {
+    case 'colour':
+      return `#${v}`;
+    case 'neighbour':
+      return v === EDGE ? 'edge' : `#${v}`;
+    case 'count of 8':
+    case 'count of 4':
+      return String(v);
+    case 'yes or no':
+      return v ? 'yes' : 'no';
+    case 'parity':
+      return v ? 'odd' : 'even';
+  }
+}
+
+function printObjectKey(property: ObjectProperty, key: ObjectKey): string {
+  switch (propertyValues(property)) {
+    case 'colour':
+      return `#${key}`;
+    case 'yes or no':
+      return key ? 'yes' : 'no';
+    default:
+      return String(key);
+  }
+}
+
+function printOutcome(o: ObjectOutcome): string {
+  switch (o.kind) {
+    case 'keep':
+      return 'keep';
+    case 'remove':
+      return 'remove';
+    case 'recolour':
+      return `#${o.colour}`;
+    case 'move':
+      return `move (${o.rows}, ${o.columns})`;
+  }
+}
 
 export function printLiteral(l: LiteralValue): string {
   switch (l.type) {
@@ -23,6 +79,15 @@ export function printLiteral(l: LiteralValue): string {
       return `(${l.row}, ${l.column})`;
     case 'Palette':
       return `{${l.pairs.map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`;
+    case 'CellRule': {
+      const kinds = l.features.map((f) => featureValues(f.name));
+      const entries = l.entries.map((e) => `${e.key.map((v, i) => printFeatureValue(kinds[i]!, v)).join(' ')} -> #${e.colour}`);
+      return `cell_rule[${l.features.map(printFeature).join(', ')}]{${entries.join(', ')}}`;
+    }
+    case 'ObjectRule': {
+      const entries = l.entries.map((e) => `${printObjectKey(l.property, e.key)} -> ${printOutcome(e.outcome)}`);
+      return `object_rule[${l.grouping}, ${l.property}]{${entries.join(', ')}}`;
+    }
   }
 }
 

@@ -4,6 +4,8 @@
  */
 import { Grid } from '../grid/grid.ts';
 import { GridObject } from '../grid/grid-object.ts';
+import { CellRule } from '../grid/cell-rule-table.ts';
+import { ObjectRule } from '../grid/object-rule-table.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
 import { FAILURE } from './failure.ts';
@@ -27,6 +29,10 @@ export function hashValue(type: BaseType, value: unknown): number {
       return (value as Point).hash;
     case 'Palette':
       return (value as Palette).hash;
+    case 'CellRule':
+      return (value as CellRule).hash;
+    case 'ObjectRule':
+      return (value as ObjectRule).hash;
     case 'Objects':
     case 'Grids': {
       const list = value as readonly (Grid | GridObject)[];
@@ -53,6 +59,10 @@ export function valuesEqual(type: BaseType, a: unknown, b: unknown): boolean {
       return (a as Point).equals(b as Point);
     case 'Palette':
       return (a as Palette).equals(b as Palette);
+    case 'CellRule':
+      return (a as CellRule).equals(b as CellRule);
+    case 'ObjectRule':
+      return (a as ObjectRule).equals(b as ObjectRule);
     case 'Objects':
     case 'Grids': {
       const x = a as readonly (Grid | GridObject)[];
@@ -85,6 +95,10 @@ export function valueHasType(type: BaseType, value: unknown): boolean {
       return value instanceof Point;
     case 'Palette':
       return value instanceof Palette;
+    case 'CellRule':
+      return value instanceof CellRule;
+    case 'ObjectRule':
+      return value instanceof ObjectRule;
     case 'Objects':
       return Array.isArray(value) && value.every((v) => v instanceof GridObject);
     case 'Grids':

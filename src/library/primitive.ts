@@ -17,6 +17,7 @@ export const CATEGORIES = [
   'object rules',
   'filling',
   'counting',
+  'learned tables',
 ] as const;
 export type Category = (typeof CATEGORIES)[number];
 
@@ -31,6 +32,7 @@ export const CATEGORY_TITLES: Record<Category, string> = {
   'object rules': 'Object rules',
   filling: 'Filling',
   counting: 'Counting and comparison',
+  'learned tables': 'Learned tables',
 };
 
 /**

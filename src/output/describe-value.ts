@@ -6,6 +6,9 @@ import { EMPTY, Grid } from '../grid/grid.ts';
 import { isFailure } from '../language/failure.ts';
 import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
+import { printLiteral } from '../language/printer.ts';
+import { CellRule } from '../grid/cell-rule-table.ts';
+import { ObjectRule } from '../grid/object-rule-table.ts';
 import { Point } from '../language/point.ts';
 import type { Type } from '../language/types.ts';
 import { drawGrid, type ColourMode, type DrawOptions } from './terminal-grid.ts';
@@ -19,6 +22,13 @@ export type ValueData =
   | readonly ValueData[]
   | { readonly [key: string]: ValueData };
 
+/** A learned table as the program text that writes it. */
+function tableText(value: CellRule | ObjectRule): string {
+  return value instanceof CellRule
+    ? printLiteral({ type: 'CellRule', features: value.features, entries: value.entries })
+    : printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, entries: value.entries });
+}
+
 function rowsWithEmpty(grid: Grid): (number | null)[][] {
   return grid.toRows().map((row) => row.map((v) => (v === EMPTY ? null : v)));
 }
@@ -29,6 +39,7 @@ export function valueToData(value: unknown): ValueData {
   if (value instanceof GridObject) return { top: value.top, left: value.left, size: value.size, colour: value.mainColour, shape: rowsWithEmpty(value.shape) };
   if (value instanceof Point) return { row: value.row, column: value.column };
   if (value instanceof Palette) return value.pairs().map(([from, to]) => [from, to]);
+  if (value instanceof CellRule || value instanceof ObjectRule) return tableText(value);
   if (Array.isArray(value)) return value.map(valueToData);
   if (typeof value === 'number' || typeof value === 'boolean') return value;
   if (typeof value === 'function') return 'function';
@@ -46,6 +57,7 @@ export function describeValue(type: Type, value: unknown, mode: ColourMode, opti
   if (value instanceof GridObject) return describeObject(value, mode, options);
   if (value instanceof Point) return [`(${value.row}, ${value.column})`];
   if (value instanceof Palette) return [`{${value.pairs().map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`];
+  if (value instanceof CellRule || value instanceof ObjectRule) return [tableText(value)];
   if (Array.isArray(value)) {
     const out = [`${value.length} ${type === 'Objects' ? 'object' : 'grid'}${value.length === 1 ? '' : 's'}`];
     value.forEach((item, i) => {

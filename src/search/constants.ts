@@ -6,6 +6,8 @@ import type { LiteralValue } from '../language/ast.ts';
 import { colourCounts } from '../grid/components.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { Puzzle } from '../tasks/task.ts';
+import { learnedTables } from './learned-tables.ts';
+import { tableBits } from './table-bits.ts';
 
 export interface Constant {
   readonly literal: LiteralValue;
@@ -100,8 +102,14 @@ export function taskConstants(puzzle: Puzzle): Constant[] {
 
   out.push({ literal: { type: 'Bool', value: true }, bits: 2 }, { literal: { type: 'Bool', value: false }, bits: 2 });
 
+  // Tables read off the demonstrations, each paid for entry by entry (table-bits.ts): the colour
+  // map (the simplest table), cell rules and object rules.
   const palette = demonstratedPalette(puzzle);
-  if (palette) out.push({ literal: { type: 'Palette', pairs: palette }, bits: 3 });
+  if (palette) {
+    const literal: LiteralValue = { type: 'Palette', pairs: palette };
+    out.push({ literal, bits: tableBits(literal)! });
+  }
+  for (const table of learnedTables(puzzle)) out.push(table);
 
   return out.sort((a, b) => a.bits - b.bits);
 }

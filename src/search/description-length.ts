@@ -3,16 +3,20 @@
  *
  *   bits(program) = Σ over primitive uses of the primitive's prior bits
  *                 + Σ over constants of the constant's bits in this task's constant table
+ *                 + Σ over tables (palettes, cell rules, object rules) of the table's bits
  *                 + 1 bit per use of the input grid
  *
  * counted over the program with every step written out where it is used (the search builds
  * trees, so a step used twice is paid for twice). A constant the task's table does not offer
- * costs what a plain encoding of it would (see `fallbackBits`), which is never cheaper.
+ * costs what a plain encoding of it would (see `fallbackBits`), which is never cheaper. A
+ * table's bits come from the literal alone, entry by entry (table-bits.ts), so a table read
+ * from program text costs what the search charged for it.
  */
 import type { Expression, LiteralValue, Program } from '../language/ast.ts';
 import type { Library } from '../library/library.ts';
 import { printLiteral } from '../language/printer.ts';
 import type { Constant } from './constants.ts';
+import { tableBits } from './table-bits.ts';
 
 /** Bits for a constant the task's table does not list. */
 export function fallbackBits(l: LiteralValue): number {
@@ -26,7 +30,9 @@ export function fallbackBits(l: LiteralValue): number {
     case 'Point':
       return 6 + 2 * Math.ceil(Math.log2(Math.abs(l.row) + 2)) + 2 * Math.ceil(Math.log2(Math.abs(l.column) + 2));
     case 'Palette':
-      return 4 + 8 * l.pairs.length;
+    case 'CellRule':
+    case 'ObjectRule':
+      return tableBits(l)!;
   }
 }
 
@@ -42,7 +48,7 @@ export function programBits(program: Program, library: Library, constants: reado
       case 'hole':
         return 0;
       case 'literal':
-        return table.get(printLiteral(e.literal)) ?? fallbackBits(e.literal);
+        return tableBits(e.literal) ?? table.get(printLiteral(e.literal)) ?? fallbackBits(e.literal);
       case 'variable': {
         const step = steps.get(e.name);
         return step ? cost(step) : 1;

@@ -22,6 +22,8 @@ const STEP_NAMES: Record<string, string> = {
   Point: 'point',
   Grids: 'parts',
   Palette: 'palette',
+  CellRule: 'cell_table',
+  ObjectRule: 'object_table',
 };
 
 export function programFromCandidate(candidate: Candidate, inputName: string): Program {

@@ -12,6 +12,7 @@ import { taskConstants } from './constants.ts';
 import { enumerate, type EnumerationStatistics, type StopReason } from './enumerator.ts';
 import { programFromCandidate } from './program-from-candidate.ts';
 import { buildProductions, type Production } from './productions.ts';
+import { tablePrograms } from './table-programs.ts';
 
 export interface SolveOptions {
   /** Wall-time limit per task in seconds (default 20). */
@@ -70,20 +71,38 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
   const attempts = options.attempts ?? 2;
   const inputs = [...puzzle.train.map((p) => p.input), ...puzzle.testInputs];
   const outputs = puzzle.train.map((p) => p.output);
-  const outcome = enumerate(inputs, outputs, taskConstants(puzzle), productionsFor(library), {
+  const constants = taskConstants(puzzle);
+  const maxBits = options.maxBits ?? 60;
+  const extraBits = options.extraBits ?? 6;
+  const trainCount = outputs.length;
+  // Tables applied straight to the input (table-programs.ts), ranked with the rest by bits. As
+  // with the enumeration's own first solution, nothing dearer than the cheapest of them by more
+  // than extraBits can be an attempt, so the enumeration need not go further.
+  const tables = tablePrograms(constants, library, inputs, outputs, INPUT_NAME, maxBits);
+  const cheapestTable = Math.min(...tables.map((t) => t.bits));
+  const outcome = enumerate(inputs, outputs, constants, productionsFor(library), {
     deadline: started + (options.timeLimitSeconds ?? 20) * 1000,
     maxCandidates: options.maxCandidates ?? 50_000_000,
     maxStoreBytes: options.maxStoreBytes ?? 1.5e9,
-    maxCost: options.maxBits ?? 60,
+    maxCost: Math.min(maxBits, cheapestTable + extraBits),
     attempts,
-    extraBits: options.extraBits ?? 6,
+    extraBits,
     pruning: options.pruning ?? true,
     goalBits: options.goalBits ?? 12,
   }, INPUT_NAME);
-  const trainCount = outputs.length;
-  const solutions: Solution[] = outcome.solutions.slice(0, attempts).map((c) => {
+  const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
     return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c) };
   });
-  return { task: puzzle.name, solutions, reason: outcome.reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
+  for (const t of tables) {
+    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false });
+  }
+  const solutions: Solution[] = [];
+  for (const s of found.map((s, i) => ({ s, i })).sort((a, b) => a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s)) {
+    if (solutions.length >= attempts) break;
+    if (solutions.some((kept) => kept.testOutputs.every((g, i) => g.equals(s.testOutputs[i]!)))) continue;
+    solutions.push(s);
+  }
+  const reason = solutions.length > 0 ? 'solved' : outcome.reason;
+  return { task: puzzle.name, solutions, reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
 }

@@ -1,0 +1,267 @@
+/**
+ * Cell rules: a table that gives every output cell's colour from a few features of the input
+ * cell and its neighbourhood (its colour, a neighbour's colour, how many neighbours have a
+ * colour, whether its row or column holds a colour, the parity of its row or column, whether
+ * it is a background cell enclosed by other colours, whether it lies on the grid's border).
+ *
+ * A rule is a list of features, the first always the cell's own colour, and a table from keys
+ * (one value per feature) to colours. Applying it to a grid looks every cell's key up; a key the
+ * table does not hold makes the whole application fail (null): a rule never guesses.
+ */
+import { backgroundColour } from './components.ts';
+import { Grid } from './grid.ts';
+import { enclosedCells } from './holes.ts';
+
+/** The value a neighbour feature takes for a position outside the grid. */
+export const EDGE = 10;
+
+export const CELL_FEATURE_NAMES = [
+  'colour',
+  'above',
+  'below',
+  'left',
+  'right',
+  'above_left',
+  'above_right',
+  'below_left',
+  'below_right',
+  'around',
+  'beside',
+  'row_holds',
+  'column_holds',
+  'row_parity',
+  'column_parity',
+  'enclosed',
+  'on_border',
+] as const;
+export type CellFeatureName = (typeof CELL_FEATURE_NAMES)[number];
+
+/** A feature of a cell; `colour` is given exactly for the features that count or look for a colour. */
+export interface CellFeature {
+  readonly name: CellFeatureName;
+  readonly colour?: number;
+}
+
+/**
+ * What values a feature takes: a colour; a colour or EDGE (a neighbour); a count of the 8
+ * surrounding cells (0-8) or of the 4 edge neighbours (0-4); yes (1) or no (0); even (0) or
+ * odd (1). `enclosed` is yes for a cell of the grid's background colour that cannot reach the
+ * border through edge steps over background cells.
+ */
+export type CellFeatureValues = 'colour' | 'neighbour' | 'count of 8' | 'count of 4' | 'yes or no' | 'parity';
+
+export interface CellRuleEntry {
+  /** One value per feature, in the rule's feature order. */
+  readonly key: readonly number[];
+  /** The output colour. */
+  readonly colour: number;
+}
+
+const OFFSETS: Readonly<Record<string, readonly [number, number]>> = {
+  above: [-1, 0],
+  below: [1, 0],
+  left: [0, -1],
+  right: [0, 1],
+  above_left: [-1, -1],
+  above_right: [-1, 1],
+  below_left: [1, -1],
+  below_right: [1, 1],
+};
+
+export function isCellFeatureName(text: string): text is CellFeatureName {
+  return (CELL_FEATURE_NAMES as readonly string[]).includes(text);
+}
+
+/** Whether the feature is about a given colour (`around #2`, `row_holds #5`, ...). */
+export function featureTakesColour(name: CellFeatureName): boolean {
+  return name === 'around' || name === 'beside' || name === 'row_holds' || name === 'column_holds';
+}
+
+export function featureValues(name: CellFeatureName): CellFeatureValues {
+  switch (name) {
+    case 'colour':
+      return 'colour';
+    case 'around':
+      return 'count of 8';
+    case 'beside':
+      return 'count of 4';
+    case 'row_holds':
+    case 'column_holds':
+    case 'enclosed':
+    case 'on_border':
+      return 'yes or no';
+    case 'row_parity':
+    case 'column_parity':
+      return 'parity';
+    default:
+      return 'neighbour';
+  }
+}
+
+/** The largest value a feature of this kind takes. */
+export function largestFeatureValue(values: CellFeatureValues): number {
+  switch (values) {
+    case 'colour':
+      return 9;
+    case 'neighbour':
+      return EDGE;
+    case 'count of 8':
+      return 8;
+    case 'count of 4':
+      return 4;
+    case 'yes or no':
+    case 'parity':
+      return 1;
+  }
+}
+
+/** Keys are packed into one number, 16 values per feature (exact up to 13 features). */
+const RADIX = 16;
+
+export function packKey(key: readonly number[]): number {
+  let packed = 0;
+  for (let i = key.length - 1; i >= 0; i--) packed = packed * RADIX + key[i]!;
+  return packed;
+}
+
+/** The value of one feature for every cell of the grid, row-major. */
+export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
+  const { height, width, cells } = g;
+  const out = new Uint8Array(cells.length);
+  const target = feature.colour ?? -1;
+  switch (feature.name) {
+    case 'colour':
+      out.set(cells);
+      return out;
+    case 'row_parity':
+      for (let r = 0; r < height; r++) out.fill(r & 1, r * width, (r + 1) * width);
+      return out;
+    case 'enclosed':
+      return enclosedCells(g, backgroundColour(g));
+    case 'on_border':
+      for (let r = 0; r < height; r++) {
+        for (let c = 0; c < width; c++) out[r * width + c] = r === 0 || c === 0 || r === height - 1 || c === width - 1 ? 1 : 0;
+      }
+      return out;
+    case 'column_parity':
+      for (let i = 0; i < cells.length; i++) out[i] = (i % width) & 1;
+      return out;
+    case 'row_holds':
+      for (let r = 0; r < height; r++) {
+        let holds = 0;
+        for (let c = 0; c < width; c++) if (cells[r * width + c] === target) holds = 1;
+        out.fill(holds, r * width, (r + 1) * width);
+      }
+      return out;
+    case 'column_holds':
+      for (let c = 0; c < width; c++) {
+        let holds = 0;
+        for (let r = 0; r < height; r++) if (cells[r * width + c] === target) holds = 1;
+        for (let r = 0; r < height; r++) out[r * width + c] = holds;
+      }
+      return out;
+    case 'around':
+    case 'beside': {
+      const diagonal = feature.name === 'around';
+      for (let r = 0; r < height; r++) {
+        for (let c = 0; c < width; c++) {
+          let count = 0;
+          for (let dr = -1; dr <= 1; dr++) {
+            const nr = r + dr;
+            if (nr < 0 || nr >= height) continue;
+            for (let dc = -1; dc <= 1; dc++) {
+              if ((dr === 0 && dc === 0) || (!diagonal && dr !== 0 && dc !== 0)) continue;
+              const nc = c + dc;
+              if (nc >= 0 && nc < width && cells[nr * width + nc] === target) count++;
+            }
+          }
+          out[r * width + c] = count;
+        }
+      }
+      return out;
+    }
+    default: {
+      const [dr, dc] = OFFSETS[feature.name]!;
+      for (let r = 0; r < height; r++) {
+        const nr = r + dr;
+        for (let c = 0; c < width; c++) {
+          const nc = c + dc;
+          out[r * width + c] = nr >= 0 && nr < height && nc >= 0 && nc < width ? cells[nr * width + nc]! : EDGE;
+        }
+      }
+      return out;
+    }
+  }
+}
+
+/** Every cell's packed key under the features, row-major. */
+export function cellKeys(g: Grid, features: readonly CellFeature[]): Float64Array {
+  const keys = new Float64Array(g.cells.length);
+  for (let f = features.length - 1; f >= 0; f--) {
+    const values = featureOfCells(g, features[f]!);
+    for (let i = 0; i < keys.length; i++) keys[i] = keys[i]! * RADIX + values[i]!;
+  }
+  return keys;
+}
+
+export function sameFeatures(a: readonly CellFeature[], b: readonly CellFeature[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i]!.name !== b[i]!.name || a[i]!.colour !== b[i]!.colour) return false;
+  return true;
+}
+
+/** A learned or written cell rule: features and a table from keys to colours. */
+export class CellRule {
+  readonly features: readonly CellFeature[];
+  readonly entries: readonly CellRuleEntry[];
+  readonly hash: number;
+  private readonly table = new Map<number, number>();
+
+  /** The first entry for a key counts (the parser rejects repeated keys). */
+  constructor(features: readonly CellFeature[], entries: readonly CellRuleEntry[]) {
+    this.features = features;
+    this.entries = entries;
+    for (const e of entries) {
+      const packed = packKey(e.key);
+      if (!this.table.has(packed)) this.table.set(packed, e.colour);
+    }
+    let h = 0x6a09e667 ^ features.length;
+    for (const f of features) h = Math.imul(h ^ (CELL_FEATURE_NAMES.indexOf(f.name) * 16 + (f.colour ?? 15)), 0x01000193);
+    // Order-free over entries, so equal tables written in another order hash alike.
+    let sum = 0;
+    for (const [key, colour] of this.table) sum = (sum + (Math.imul((key % 0x7fffffff) ^ Math.floor(key / 0x7fffffff), 0x9e3779b1) ^ colour)) | 0;
+    this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
+  }
+
+  /** The colour for a packed key, or undefined when the table has no entry for it. */
+  colourFor(packedKey: number): number | undefined {
+    return this.table.get(packedKey);
+  }
+
+  get size(): number {
+    return this.table.size;
+  }
+
+  equals(other: CellRule): boolean {
+    if (this === other) return true;
+    if (this.hash !== other.hash || this.table.size !== other.table.size || !sameFeatures(this.features, other.features)) return false;
+    for (const [key, colour] of this.table) if (other.table.get(key) !== colour) return false;
+    return true;
+  }
+}
+
+/**
+ * The grid with every cell recoloured by the rule; null when some cell's key has no entry, or
+ * when the rule's first feature is not the cell's colour.
+ */
+export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
+  if (rule.features.length === 0 || rule.features[0]!.name !== 'colour') return null;
+  const keys = cellKeys(g, rule.features);
+  const out = new Uint8Array(keys.length);
+  for (let i = 0; i < keys.length; i++) {
+    const colour = rule.colourFor(keys[i]!);
+    if (colour === undefined) return null;
+    out[i] = colour;
+  }
+  return new Grid(g.height, g.width, out);
+}

@@ -1,0 +1,249 @@
+/**
+ * Object rules: a table that says what happens to each object of a grid (it keeps its place,
+ * is removed, takes one colour, or moves by an offset) from one property of the object (its
+ * size, colour, height, width, size rank, whether it touches the edge, its holes, its shape).
+ *
+ * Applying a rule cuts the grid into objects (one of four ways), looks each object's property
+ * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed and
+ * moved objects are lifted first, then recoloured ones are painted, then moved ones put down.
+ */
+import { backgroundColour, components } from './components.ts';
+import type { GridObject } from './grid-object.ts';
+import { EMPTY, Grid } from './grid.ts';
+import { holeCount } from './holes.ts';
+import { touchesEdge } from './object-properties.ts';
+import { paintObjectInto } from './paint-object.ts';
+
+/** How a grid is cut into objects: one colour or many, joined through edges or also corners. */
+export const OBJECT_GROUPINGS = ['by_colour', 'by_colour_diagonal', 'multicolour', 'multicolour_diagonal'] as const;
+export type ObjectGrouping = (typeof OBJECT_GROUPINGS)[number];
+
+export const OBJECT_PROPERTIES = ['size', 'colour', 'height', 'width', 'size_rank', 'touches_edge', 'holes', 'shape'] as const;
+export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
+
+/**
+ * A property's value: a whole number (size, height, width, size rank with 1 the largest, holes),
+ * a colour, 1/0 for yes/no (touches_edge), or for `shape` the pattern of the object's box, rows
+ * top to bottom joined by `/`, `x` for a cell of the object and `.` for one outside it.
+ */
+export type ObjectKey = number | string;
+
+export type ObjectOutcome =
+  | { readonly kind: 'keep' }
+  | { readonly kind: 'remove' }
+  | { readonly kind: 'recolour'; readonly colour: number }
+  | { readonly kind: 'move'; readonly rows: number; readonly columns: number };
+
+export interface ObjectRuleEntry {
+  readonly key: ObjectKey;
+  readonly outcome: ObjectOutcome;
+}
+
+export function isObjectGrouping(text: string): text is ObjectGrouping {
+  return (OBJECT_GROUPINGS as readonly string[]).includes(text);
+}
+
+export function isObjectProperty(text: string): text is ObjectProperty {
+  return (OBJECT_PROPERTIES as readonly string[]).includes(text);
+}
+
+/** What kind of key a property has. */
+export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 'yes or no' | 'shape' {
+  if (property === 'colour') return 'colour';
+  if (property === 'touches_edge') return 'yes or no';
+  if (property === 'shape') return 'shape';
+  return 'number';
+}
+
+/** A short code naming an outcome, equal for equal outcomes. */
+export function outcomeCode(o: ObjectOutcome): string {
+  switch (o.kind) {
+    case 'keep':
+      return 'k';
+    case 'remove':
+      return 'r';
+    case 'recolour':
+      return `c${o.colour}`;
+    case 'move':
+      return `m${o.rows},${o.columns}`;
+  }
+}
+
+function keyCode(key: ObjectKey): string {
+  return typeof key === 'number' ? `n${key}` : `s${key}`;
+}
+
+/** The objects of a grid under a grouping, with the grid's background colour left out. */
+export function objectsOf(g: Grid, grouping: ObjectGrouping): readonly GridObject[] {
+  return components(g, {
+    diagonal: grouping === 'by_colour_diagonal' || grouping === 'multicolour_diagonal',
+    multicolour: grouping === 'multicolour' || grouping === 'multicolour_diagonal',
+    background: backgroundColour(g),
+  });
+}
+
+/** The pattern of an object's box: rows joined by `/`, `x` for its cells and `.` for the rest. */
+export function shapePattern(o: GridObject): string {
+  const { height, width, cells } = o.shape;
+  let text = '';
+  for (let r = 0; r < height; r++) {
+    if (r > 0) text += '/';
+    for (let c = 0; c < width; c++) text += cells[r * width + c] === EMPTY ? '.' : 'x';
+  }
+  return text;
+}
+
+/** Each object's value of the property, in the order of `objects` (all objects of `g`). */
+export function objectKeys(g: Grid, objects: readonly GridObject[], property: ObjectProperty): ObjectKey[] {
+  switch (property) {
+    case 'size':
+      return objects.map((o) => o.size);
+    case 'colour':
+      return objects.map((o) => o.mainColour);
+    case 'height':
+      return objects.map((o) => o.height);
+    case 'width':
+      return objects.map((o) => o.width);
+    case 'touches_edge':
+      return objects.map((o) => (touchesEdge(o, g) ? 1 : 0));
+    case 'holes':
+      return objects.map(holeCount);
+    case 'shape':
+      return objects.map(shapePattern);
+    case 'size_rank': {
+      const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
+      return objects.map((o) => sizes.indexOf(o.size) + 1);
+    }
+  }
+}
+
+/** A cut of a grid into objects, a property and a table from its values to outcomes. */
+export class ObjectRule {
+  readonly grouping: ObjectGrouping;
+  readonly property: ObjectProperty;
+  readonly entries: readonly ObjectRuleEntry[];
+  readonly hash: number;
+  private readonly table = new Map<string, ObjectOutcome>();
+
+  /** The first entry for a key counts (the parser rejects repeated keys). */
+  constructor(grouping: ObjectGrouping, property: ObjectProperty, entries: readonly ObjectRuleEntry[]) {
+    this.grouping = grouping;
+    this.property = property;
+    this.entries = entries;
+    for (const e of entries) {
+      const code = keyCode(e.key);
+      if (!this.table.has(code)) this.table.set(code, e.outcome);
+    }
+    let h = Math.imul(0x3c6ef372 ^ (OBJECT_GROUPINGS.indexOf(grouping) * 16 + OBJECT_PROPERTIES.indexOf(property)), 0x01000193);
+    let sum = 0;
+    for (const [key, outcome] of this.table) sum = (sum + stringHash(`${key}=${outcomeCode(outcome)}`)) | 0;
+    this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
+  }
+
+  outcomeFor(key: ObjectKey): ObjectOutcome | undefined {
+    return this.table.get(keyCode(key));
+  }
+
+  get size(): number {
+    return this.table.size;
+  }
+
+  equals(other: ObjectRule): boolean {
+    if (this === other) return true;
+    if (this.hash !== other.hash || this.grouping !== other.grouping || this.property !== other.property || this.table.size !== other.table.size) return false;
+    for (const [key, outcome] of this.table) {
+      const theirs = other.table.get(key);
+      if (!theirs || outcomeCode(theirs) !== outcomeCode(outcome)) return false;
+    }
+    return true;
+  }
+}
+
+function stringHash(text: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
+  return h;
+}
+
+/** The grid after every object's outcome; null when some object's key has no entry. */
+export function applyObjectRule(g: Grid, rule: ObjectRule): Grid | null {
+  const objects = objectsOf(g, rule.grouping);
+  const keys = objectKeys(g, objects, rule.property);
+  const outcomes: ObjectOutcome[] = [];
+  for (const key of keys) {
+    const outcome = rule.outcomeFor(key);
+    if (!outcome) return null;
+    outcomes.push(outcome);
+  }
+  return paintOutcomes(g, objects, outcomes);
+}
+
+/** Lifts removed and moved objects, paints recoloured ones, then puts moved ones down. */
+export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes: readonly ObjectOutcome[]): Grid {
+  const { height, width } = g;
+  const background = backgroundColour(g);
+  const out = g.cells.slice();
+  for (let i = 0; i < objects.length; i++) {
+    const kind = outcomes[i]!.kind;
+    if (kind === 'remove' || kind === 'move') paintObjectInto(out, height, width, objects[i]!, background);
+  }
+  for (let i = 0; i < objects.length; i++) {
+    const o = outcomes[i]!;
+    if (o.kind === 'recolour') paintObjectInto(out, height, width, objects[i]!, o.colour);
+  }
+  for (let i = 0; i < objects.length; i++) {
+    const o = outcomes[i]!;
+    if (o.kind === 'move') paintObjectInto(out, height, width, objects[i]!, undefined, o.rows, o.columns);
+  }
+  return new Grid(height, width, out);
+}
+
+/**
+ * The outcomes that would turn the object of `input` into what `output` (the same size) shows,
+ * in order of preference: keep, remove, recolour (by colour), then moves by distance (the shifted
+ * object must lie inside the grid and match the output cell for cell). Whether the rest of the
+ * output agrees is for the caller to check by applying the whole rule.
+ */
+export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): ObjectOutcome[] {
+  const found: ObjectOutcome[] = [];
+  if (input.height !== output.height || input.width !== output.width) return found;
+  const { width } = input;
+  const background = backgroundColour(input);
+  const shape = o.shape;
+  let kept = true;
+  let single = -1;
+  for (let r = 0; r < shape.height; r++) {
+    for (let c = 0; c < shape.width; c++) {
+      if (shape.cells[r * shape.width + c] === EMPTY) continue;
+      const i = (o.top + r) * width + o.left + c;
+      const after = output.cells[i]!;
+      if (after !== input.cells[i]) kept = false;
+      if (single === -1) single = after;
+      else if (single !== after) single = -2;
+    }
+  }
+  if (kept) found.push({ kind: 'keep' });
+  if (single === background) found.push({ kind: 'remove' });
+  else if (single >= 0) found.push({ kind: 'recolour', colour: single });
+  const moves: [number, number][] = [];
+  for (let dr = -o.top; dr + o.top + shape.height <= input.height; dr++) {
+    for (let dc = -o.left; dc + o.left + shape.width <= input.width; dc++) {
+      if (dr === 0 && dc === 0) continue;
+      if (matchesAt(o, output, o.top + dr, o.left + dc)) moves.push([dr, dc]);
+    }
+  }
+  moves.sort((a, b) => Math.abs(a[0]) + Math.abs(a[1]) - Math.abs(b[0]) - Math.abs(b[1]) || a[0] - b[0] || a[1] - b[1]);
+  for (const [rows, columns] of moves) found.push({ kind: 'move', rows, columns });
+  return found;
+}
+
+function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
+  const shape = o.shape;
+  for (let r = 0; r < shape.height; r++) {
+    for (let c = 0; c < shape.width; c++) {
+      const v = shape.cells[r * shape.width + c]!;
+      if (v !== EMPTY && g.cells[(top + r) * g.width + left + c] !== v) return false;
+    }
+  }
+  return true;
+}

@@ -1,0 +1,321 @@
+/**
+ * Tables read off the demonstrations: cell rules and object rules (src/grid/cell-rule-table.ts,
+ * src/grid/object-rule-table.ts), each offered to the search as a constant that costs its bits
+ * (table-bits.ts). Only the demonstration pairs and the test *inputs* are read: a table is kept
+ * when it agrees with every demonstration and has an entry for every key that occurs in every
+ * test input, so the program that applies it never meets a key it lacks on the task itself.
+ *
+ * Cell rules: every demonstration pair must keep its shape. The features tried are the cell's
+ * colour plus one or two of: a neighbour's colour (8 directions), how many of the 8 or 4
+ * neighbours have a colour, whether the cell's row or column holds a colour (for each colour of
+ * the task), the parity of its row or column, whether it is enclosed, whether it lies on the
+ * border; and the colour plus all 4 or all 8 neighbours.
+ *
+ * Object rules: every demonstration pair must keep its shape. For each way of cutting into
+ * objects and each property, each object of a demonstration input is matched to what the output
+ * shows at its place (kept, removed, recoloured) or elsewhere (moved); objects with equal values
+ * must agree on one outcome, and the rule must reproduce every demonstration output when applied.
+ */
+import { colourCounts } from '../grid/components.ts';
+import {
+  applyCellRule,
+  CellRule,
+  featureOfCells,
+  featureTakesColour,
+  type CellFeature,
+  type CellFeatureName,
+  type CellRuleEntry,
+} from '../grid/cell-rule-table.ts';
+import type { Grid } from '../grid/grid.ts';
+import {
+  applyObjectRule,
+  ObjectRule,
+  OBJECT_GROUPINGS,
+  OBJECT_PROPERTIES,
+  objectKeys,
+  objectsOf,
+  outcomeCode,
+  paintOutcomes,
+  possibleOutcomes,
+  type ObjectKey,
+  type ObjectOutcome,
+  type ObjectRuleEntry,
+} from '../grid/object-rule-table.ts';
+import type { LiteralValue } from '../language/ast.ts';
+import type { Puzzle } from '../tasks/task.ts';
+import { tableBits } from './table-bits.ts';
+
+export interface LearnedTable {
+  readonly literal: LiteralValue;
+  readonly bits: number;
+}
+
+/** Tables with more entries than this are not kept (they would cost far more than any search reaches). */
+const MAXIMUM_ENTRIES = 64;
+/** Objects per grid beyond which a way of cutting into objects is not tried. */
+const MAXIMUM_OBJECTS = 120;
+
+const NEIGHBOURS_4: readonly CellFeatureName[] = ['above', 'below', 'left', 'right'];
+const NEIGHBOURS_8: readonly CellFeatureName[] = [...NEIGHBOURS_4, 'above_left', 'above_right', 'below_left', 'below_right'];
+
+function sameShapedPairs(puzzle: Puzzle): boolean {
+  return puzzle.train.length > 0 && puzzle.train.every((p) => p.input.height === p.output.height && p.input.width === p.output.width);
+}
+
+function taskColours(puzzle: Puzzle): number[] {
+  const seen = new Set<number>();
+  for (const g of [...puzzle.train.flatMap((p) => [p.input, p.output]), ...puzzle.testInputs]) {
+    const counts = colourCounts(g);
+    for (let c = 0; c < 10; c++) if (counts[c]! > 0) seen.add(c);
+  }
+  return [...seen].sort((a, b) => a - b);
+}
+
+function compareKeys(a: readonly number[], b: readonly number[]): number {
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
+  return 0;
+}
+
+/** The single features tried after the cell's colour, in a fixed order. */
+function cellAtoms(colours: readonly number[]): CellFeature[] {
+  const atoms: CellFeature[] = NEIGHBOURS_8.map((name) => ({ name }));
+  for (const name of ['around', 'beside', 'row_holds', 'column_holds'] as const) for (const colour of colours) atoms.push({ name, colour });
+  atoms.push({ name: 'row_parity' }, { name: 'column_parity' }, { name: 'enclosed' }, { name: 'on_border' });
+  return atoms;
+}
+
+function featureKey(f: CellFeature): string {
+  return featureTakesColour(f.name) ? `${f.name}#${f.colour}` : f.name;
+}
+
+/** Per grid, the values of each feature on its cells, computed once. */
+class FeatureCache {
+  private readonly values = new Map<Grid, Map<string, Uint8Array>>();
+
+  of(g: Grid, f: CellFeature): Uint8Array {
+    let forGrid = this.values.get(g);
+    if (!forGrid) this.values.set(g, (forGrid = new Map()));
+    const key = featureKey(f);
+    let v = forGrid.get(key);
+    if (!v) forGrid.set(key, (v = featureOfCells(g, f)));
+    return v;
+  }
+
+  /** Packed keys (colour first) of every cell of the grid under the features. */
+  keys(g: Grid, features: readonly CellFeature[]): Float64Array {
+    const keys = new Float64Array(g.cells.length);
+    for (let f = features.length - 1; f >= 0; f--) {
+      const values = this.of(g, features[f]!);
+      for (let i = 0; i < keys.length; i++) keys[i] = keys[i]! * 16 + values[i]!;
+    }
+    return keys;
+  }
+}
+
+/** Unpacks a key of `count` features. */
+function unpackKey(packed: number, count: number): number[] {
+  const key: number[] = [];
+  for (let i = 0; i < count; i++) {
+    key.push(packed % 16);
+    packed = Math.floor(packed / 16);
+  }
+  return key;
+}
+
+/**
+ * The cell rule of the given features that the demonstrations show, or undefined when two
+ * cells with one key want different colours, a test input holds a key the demonstrations do not,
+ * the table would be too large, or it changes nothing.
+ */
+export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
+  if (!sameShapedPairs(puzzle) || features[0]?.name !== 'colour') return undefined;
+  const table = new Map<number, number>();
+  for (const { input, output } of puzzle.train) {
+    const keys = cache.keys(input, features);
+    const out = output.cells;
+    for (let i = 0; i < keys.length; i++) {
+      const known = table.get(keys[i]!);
+      if (known === undefined) {
+        if (table.size >= MAXIMUM_ENTRIES) return undefined;
+        table.set(keys[i]!, out[i]!);
+      } else if (known !== out[i]) return undefined;
+    }
+  }
+  for (const g of puzzle.testInputs) {
+    const keys = cache.keys(g, features);
+    for (let i = 0; i < keys.length; i++) if (!table.has(keys[i]!)) return undefined;
+  }
+  const entries: CellRuleEntry[] = [];
+  let changes = false;
+  for (const [packed, colour] of table) {
+    const key = unpackKey(packed, features.length);
+    if (key[0] !== colour) changes = true;
+    entries.push({ key, colour });
+  }
+  if (!changes) return undefined;
+  entries.sort((a, b) => compareKeys(a.key, b.key));
+  return { type: 'CellRule', features: [...features], entries };
+}
+
+/**
+ * The cheapest cell rules the demonstrations show (at most `limit`, with distinct outputs on the
+ * test inputs), cheapest first. The features tried after the cell's colour: none, each single
+ * feature, each pair of them, all 4 and all 8 neighbours. A feature that takes one value on every cell of
+ * every grid tells nothing and is left out; a pair is not tried when one of its features works
+ * alone, since the pair's table would hold at least as many entries, each dearer.
+ */
+export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
+  if (!sameShapedPairs(puzzle)) return [];
+  const cache = new FeatureCache();
+  const grids = [...puzzle.train.map((p) => p.input), ...puzzle.testInputs];
+  const atoms = cellAtoms(taskColours(puzzle)).filter((f) => {
+    const first = cache.of(grids[0]!, f)[0];
+    return grids.some((g) => cache.of(g, f).some((v) => v !== first));
+  });
+  const found: LearnedTable[] = [];
+  const worksAlone = new Set<number>();
+  const tryFeatures = (extra: readonly CellFeature[]): boolean => {
+    const literal = learnCellRule(puzzle, [{ name: 'colour' }, ...extra], cache);
+    if (literal) found.push({ literal, bits: tableBits(literal)! });
+    return literal !== undefined;
+  };
+  // The colour alone: every other set holds it, so when it works nothing else can be cheaper.
+  if (tryFeatures([])) return found;
+  atoms.forEach((a, i) => {
+    if (tryFeatures([a])) worksAlone.add(i);
+  });
+  for (let i = 0; i < atoms.length; i++) {
+    if (worksAlone.has(i)) continue;
+    for (let j = i + 1; j < atoms.length; j++) if (!worksAlone.has(j)) tryFeatures([atoms[i]!, atoms[j]!]);
+  }
+  tryFeatures(NEIGHBOURS_4.map((name) => ({ name })));
+  tryFeatures(NEIGHBOURS_8.map((name) => ({ name })));
+  return cheapestDistinct(found, limit, puzzle);
+}
+
+/** Outcomes of each object, as codes in order of preference, with the outcomes themselves. */
+interface ObjectsOfPair {
+  readonly input: Grid;
+  readonly output: Grid;
+  readonly objects: ReturnType<typeof objectsOf>;
+  readonly choices: readonly (readonly string[])[];
+}
+
+/** The object rule for one way of cutting and one property, or undefined (see learnCellRule). */
+function learnObjectRuleFrom(
+  puzzle: Puzzle,
+  pairs: readonly ObjectsOfPair[],
+  outcomes: ReadonlyMap<string, ObjectOutcome>,
+  grouping: (typeof OBJECT_GROUPINGS)[number],
+  property: (typeof OBJECT_PROPERTIES)[number],
+): LiteralValue | undefined {
+  const allowed = new Map<string, { key: ObjectKey; codes: string[] }>();
+  const keysOfPairs: ObjectKey[][] = [];
+  for (const pair of pairs) {
+    const keys = objectKeys(pair.input, pair.objects, property);
+    keysOfPairs.push(keys);
+    for (let i = 0; i < keys.length; i++) {
+      const name = String(keys[i]);
+      const known = allowed.get(name);
+      const mine = pair.choices[i]!;
+      if (!known) {
+        if (allowed.size >= MAXIMUM_ENTRIES) return undefined;
+        allowed.set(name, { key: keys[i]!, codes: [...mine] });
+        continue;
+      }
+      const kept = known.codes.filter((c) => mine.includes(c));
+      if (kept.length === 0) return undefined;
+      known.codes = kept;
+    }
+  }
+  if (allowed.size === 0) return undefined;
+  const chosen = new Map<string, ObjectOutcome>();
+  let changes = false;
+  for (const [name, { codes }] of allowed) {
+    chosen.set(name, outcomes.get(codes[0]!)!);
+    if (codes[0] !== 'k') changes = true;
+  }
+  if (!changes) return undefined;
+  for (let p = 0; p < pairs.length; p++) {
+    const pair = pairs[p]!;
+    const painted = paintOutcomes(pair.input, pair.objects, keysOfPairs[p]!.map((k) => chosen.get(String(k))!));
+    if (!painted.equals(pair.output)) return undefined;
+  }
+  for (const g of puzzle.testInputs) {
+    const objects = objectsOf(g, grouping);
+    for (const k of objectKeys(g, objects, property)) if (!allowed.has(String(k))) return undefined;
+  }
+  const entries: ObjectRuleEntry[] = [...allowed.values()].map(({ key }) => ({ key, outcome: chosen.get(String(key))! }));
+  entries.sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1));
+  return { type: 'ObjectRule', grouping, property, entries };
+}
+
+/** The cheapest object rules the demonstrations show (at most `limit`), cheapest first. */
+export function learnObjectRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
+  if (!sameShapedPairs(puzzle)) return [];
+  const found: LearnedTable[] = [];
+  for (const grouping of OBJECT_GROUPINGS) {
+    const outcomes = new Map<string, ObjectOutcome>();
+    const pairs: ObjectsOfPair[] = [];
+    let usable = true;
+    for (const { input, output } of puzzle.train) {
+      const objects = objectsOf(input, grouping);
+      if (objects.length === 0 || objects.length > MAXIMUM_OBJECTS) {
+        usable = false;
+        break;
+      }
+      const choices = objects.map((o) =>
+        possibleOutcomes(o, input, output).map((outcome) => {
+          const code = outcomeCode(outcome);
+          outcomes.set(code, outcome);
+          return code;
+        }),
+      );
+      if (choices.some((c) => c.length === 0)) {
+        usable = false;
+        break;
+      }
+      pairs.push({ input, output, objects, choices });
+    }
+    if (!usable) continue;
+    for (const property of OBJECT_PROPERTIES) {
+      const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, property);
+      if (literal) found.push({ literal, bits: tableBits(literal)! });
+    }
+  }
+  return cheapestDistinct(found, limit, puzzle);
+}
+
+/** What a table does to a grid (null where it lacks a key). */
+export function applyTable(literal: LiteralValue, g: Grid): Grid | null {
+  if (literal.type === 'CellRule') return applyCellRule(g, new CellRule(literal.features, literal.entries));
+  if (literal.type === 'ObjectRule') return applyObjectRule(g, new ObjectRule(literal.grouping, literal.property, literal.entries));
+  return null;
+}
+
+/**
+ * The `limit` cheapest tables (ties in the order found, the fixed order of the lists above),
+ * leaving out one whose outputs on the test inputs equal a cheaper one's: on the demonstrations
+ * they all agree, so it would add nothing.
+ */
+function cheapestDistinct(found: LearnedTable[], limit: number, puzzle: Puzzle): LearnedTable[] {
+  const ordered = found
+    .map((t, i) => ({ t, i }))
+    .sort((a, b) => a.t.bits - b.t.bits || a.i - b.i)
+    .map(({ t }) => t);
+  const kept: LearnedTable[] = [];
+  const outputs: (Grid | null)[][] = [];
+  for (const t of ordered) {
+    if (kept.length >= limit) break;
+    const mine = puzzle.testInputs.map((g) => applyTable(t.literal, g));
+    if (outputs.some((theirs) => theirs.every((o, i) => o !== null && mine[i] !== null && o.equals(mine[i]!)))) continue;
+    kept.push(t);
+    outputs.push(mine);
+  }
+  return kept;
+}
+
+/** Every learned table the search is offered: cell rules, then object rules. */
+export function learnedTables(puzzle: Puzzle): LearnedTable[] {
+  return [...learnCellRules(puzzle), ...learnObjectRules(puzzle)];
+}

@@ -1,0 +1,129 @@
+/**
+ * The bits of a table written in a program: a palette, a cell rule or an object rule. A table
+ * read off the demonstrations is the data term of the description length, so each entry is
+ * paid for: a table of many entries costs many bits and never beats a short program that says
+ * the same thing. The bits depend on the literal alone, so a program read from text costs what
+ * the search charged for it (README, "Description length", gives the formula):
+ *
+ *   palette      1 + Σ entries 2c
+ *   cell rule    γ(f + 1) + Σ extra features (4 + 4 when it names a colour)
+ *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c))
+ *   object rule  2 + 3 + Σ entries (key value + outcome)
+ *
+ * where c = max(1, ⌈log₂ k⌉) for the k distinct colours the table writes in its entries, f is
+ * the number of features after the cell's own colour, and γ(n) = 2⌊log₂ n⌋ + 1 is the length of
+ * the Elias gamma code of a whole number n ≥ 1.
+ */
+import { featureValues, EDGE, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
+import type { LiteralValue } from '../language/ast.ts';
+
+/** Length of the Elias gamma code of n ≥ 1. */
+export function gammaBits(n: number): number {
+  return 2 * Math.floor(Math.log2(Math.max(1, n))) + 1;
+}
+
+/** A signed whole number: zigzag (0, -1, 1, -2, ...) then gamma of one more. */
+export function signedBits(v: number): number {
+  return gammaBits((v >= 0 ? 2 * v : -2 * v - 1) + 1);
+}
+
+/** Bits naming one of the k colours a table writes (at least 1). */
+export function colourBits(k: number): number {
+  return Math.max(1, Math.ceil(Math.log2(Math.max(1, k))));
+}
+
+/** Bits for choosing a feature after the cell's own colour (16 kinds), and a colour it names. */
+export const FEATURE_CHOICE_BITS = 4;
+export const FEATURE_COLOUR_BITS = 4;
+/** Bits for an object rule's way of cutting into objects (4) and its property (8). */
+export const GROUPING_BITS = 2;
+export const PROPERTY_BITS = 3;
+/** Bits for the kind of an object's outcome (keep, remove, recolour, move). */
+export const OUTCOME_KIND_BITS = 2;
+
+function featureValueBits(values: CellFeatureValues, c: number, k: number): number {
+  switch (values) {
+    case 'colour':
+      return c;
+    case 'neighbour':
+      return colourBits(k + 1);
+    case 'count of 8':
+      return 4;
+    case 'count of 4':
+      return 3;
+    case 'yes or no':
+    case 'parity':
+      return 1;
+  }
+}
+
+function objectKeyBits(property: ObjectProperty, key: ObjectKey, c: number): number {
+  switch (propertyValues(property)) {
+    case 'number':
+      return gammaBits((key as number) + 1);
+    case 'colour':
+      return c;
+    case 'yes or no':
+      return 1;
+    case 'shape': {
+      const rows = String(key).split('/');
+      return gammaBits(rows.length) + gammaBits(rows[0]!.length) + rows.length * rows[0]!.length;
+    }
+  }
+}
+
+function outcomeBits(o: ObjectOutcome, c: number): number {
+  switch (o.kind) {
+    case 'keep':
+    case 'remove':
+      return OUTCOME_KIND_BITS;
+    case 'recolour':
+      return OUTCOME_KIND_BITS + c;
+    case 'move':
+      return OUTCOME_KIND_BITS + signedBits(o.rows) + signedBits(o.columns);
+  }
+}
+
+/** The bits of a table literal, or undefined for a literal that is not a table. */
+export function tableBits(l: LiteralValue): number | undefined {
+  switch (l.type) {
+    case 'Palette': {
+      const colours = new Set<number>();
+      for (const [from, to] of l.pairs) colours.add(from).add(to);
+      return 1 + 2 * colourBits(colours.size) * l.pairs.length;
+    }
+    case 'CellRule': {
+      const kinds = l.features.map((f) => featureValues(f.name));
+      const colours = new Set<number>();
+      for (const e of l.entries) {
+        colours.add(e.colour);
+        e.key.forEach((v, i) => {
+          if ((kinds[i] === 'colour' || kinds[i] === 'neighbour') && v !== EDGE) colours.add(v);
+        });
+      }
+      const k = colours.size;
+      const c = colourBits(k);
+      let bits = gammaBits(l.features.length);
+      for (let i = 1; i < l.features.length; i++) bits += FEATURE_CHOICE_BITS + (l.features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
+      for (const e of l.entries) {
+        for (let i = 0; i < e.key.length; i++) bits += featureValueBits(kinds[i]!, c, k);
+        bits += e.colour === e.key[0] ? 1 : 1 + c;
+      }
+      return bits;
+    }
+    case 'ObjectRule': {
+      const colours = new Set<number>();
+      for (const e of l.entries) {
+        if (propertyValues(l.property) === 'colour') colours.add(e.key as number);
+        if (e.outcome.kind === 'recolour') colours.add(e.outcome.colour);
+      }
+      const c = colourBits(colours.size);
+      let bits = GROUPING_BITS + PROPERTY_BITS;
+      for (const e of l.entries) bits += objectKeyBits(l.property, e.key, c) + outcomeBits(e.outcome, c);
+      return bits;
+    }
+    default:
+      return undefined;
+  }
+}

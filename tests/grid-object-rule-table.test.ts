@@ -1,0 +1,84 @@
+/** Object rules: property values worked out by hand, applying a table, failing on a missing key, outcomes read off a pair. */
+import { describe, expect, it } from 'vitest';
+import { Grid } from '../src/grid/grid.ts';
+import { applyObjectRule, objectKeys, objectsOf, ObjectRule, possibleOutcomes, shapePattern } from '../src/grid/object-rule-table.ts';
+
+const G = Grid.fromRows;
+//   1 1 0 2
+//   0 0 0 2
+//   0 3 0 2
+//   0 0 0 0
+const harbour = G([[1, 1, 0, 2], [0, 0, 0, 2], [0, 3, 0, 2], [0, 0, 0, 0]]);
+const boats = objectsOf(harbour, 'by_colour');
+
+describe('objectKeys', () => {
+  it('reads each property of the objects, in reading order of their first cell', () => {
+    expect(boats.map((o) => o.mainColour)).toEqual([1, 2, 3]);
+    expect(objectKeys(harbour, boats, 'size')).toEqual([2, 3, 1]);
+    expect(objectKeys(harbour, boats, 'colour')).toEqual([1, 2, 3]);
+    expect(objectKeys(harbour, boats, 'height')).toEqual([1, 3, 1]);
+    expect(objectKeys(harbour, boats, 'width')).toEqual([2, 1, 1]);
+    expect(objectKeys(harbour, boats, 'size_rank')).toEqual([2, 1, 3]);
+    expect(objectKeys(harbour, boats, 'touches_edge')).toEqual([1, 1, 0]);
+    expect(objectKeys(harbour, boats, 'holes')).toEqual([0, 0, 0]);
+    expect(objectKeys(harbour, boats, 'shape')).toEqual(['xx', 'x/x/x', 'x']);
+  });
+
+  it('counts holes and writes the shape of a ring', () => {
+    const ring = G([[5, 5, 5], [5, 0, 5], [5, 5, 5]]);
+    const objects = objectsOf(ring, 'by_colour');
+    expect(objects.length).toBe(1);
+    expect(objectKeys(ring, objects, 'holes')).toEqual([1]);
+    expect(shapePattern(objects[0]!)).toBe('xxx/x.x/xxx');
+  });
+
+  it('gives equal sizes one rank', () => {
+    const g = G([[1, 0, 2], [0, 0, 0], [3, 3, 0]]);
+    expect(objectKeys(g, objectsOf(g, 'by_colour'), 'size_rank')).toEqual([2, 2, 1]);
+  });
+});
+
+describe('applyObjectRule', () => {
+  it('removes, recolours and moves objects by their size', () => {
+    const rule = new ObjectRule('by_colour', 'size', [
+      { key: 1, outcome: { kind: 'remove' } },
+      { key: 2, outcome: { kind: 'recolour', colour: 5 } },
+      { key: 3, outcome: { kind: 'move', rows: 1, columns: 0 } },
+    ]);
+    expect(applyObjectRule(harbour, rule)!.toRows()).toEqual([
+      [5, 5, 0, 0],
+      [0, 0, 0, 2],
+      [0, 0, 0, 2],
+      [0, 0, 0, 2],
+    ]);
+  });
+
+  it('fails when an object has a value the table lacks', () => {
+    const rule = new ObjectRule('by_colour', 'size', [
+      { key: 1, outcome: { kind: 'remove' } },
+      { key: 2, outcome: { kind: 'keep' } },
+    ]);
+    expect(applyObjectRule(harbour, rule)).toBeNull();
+  });
+
+  it('keeps the grid when every object keeps its place', () => {
+    const rule = new ObjectRule('multicolour', 'touches_edge', [
+      { key: 0, outcome: { kind: 'keep' } },
+      { key: 1, outcome: { kind: 'keep' } },
+    ]);
+    expect(applyObjectRule(harbour, rule)!.equals(harbour)).toBe(true);
+  });
+});
+
+describe('possibleOutcomes', () => {
+  it('reads what became of each object from the output', () => {
+    const after = G([[5, 5, 0, 0], [0, 0, 0, 2], [0, 0, 0, 2], [0, 0, 0, 2]]);
+    expect(possibleOutcomes(boats[0]!, harbour, after)).toEqual([{ kind: 'recolour', colour: 5 }]);
+    expect(possibleOutcomes(boats[1]!, harbour, after)).toEqual([{ kind: 'move', rows: 1, columns: 0 }]);
+    expect(possibleOutcomes(boats[2]!, harbour, after)).toEqual([{ kind: 'remove' }]);
+  });
+
+  it('offers keep first, then recolouring to its own colour, for an unchanged one-colour object', () => {
+    expect(possibleOutcomes(boats[2]!, harbour, harbour).slice(0, 2)).toEqual([{ kind: 'keep' }, { kind: 'recolour', colour: 3 }]);
+  });
+});

@@ -1,0 +1,293 @@
+/**
+ * Learned tables: cell rules and object rules read off invented harbour tasks reproduce their
+ * demonstrations, fail cleanly on a key they lack, print and parse back exactly, cost what the
+ * README's formula says (worked out by hand below), and are found by the solver.
+ */
+import { readFileSync } from 'node:fs';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { defaultLibrary } from '../dsl/index.ts';
+import { Grid } from '../src/grid/grid.ts';
+import type { LiteralValue } from '../src/language/ast.ts';
+import { FAILURE } from '../src/language/failure.ts';
+import { checkProgram } from '../src/language/checker.ts';
+import { runProgram } from '../src/language/interpreter.ts';
+import { parseExpression, parseProgram, ProgramSyntaxError } from '../src/language/parser.ts';
+import { printLiteral, printProgram } from '../src/language/printer.ts';
+import { taskConstants } from '../src/search/constants.ts';
+import { programBits } from '../src/search/description-length.ts';
+import { applyTable, learnCellRules, learnObjectRules } from '../src/search/learned-tables.ts';
+import { solvePuzzle } from '../src/search/solve.ts';
+import { tableBits } from '../src/search/table-bits.ts';
+import type { Puzzle } from '../src/tasks/task.ts';
+import { cellRuleArbitrary, objectRuleArbitrary } from './support/random-table.ts';
+
+const G = Grid.fromRows;
+
+/**
+ * Lanterns (5) on night water (4): water sharing an edge with a lantern glows (6). Invented.
+ * The cheapest table: the cell's colour and how many of its 4 edge neighbours are lanterns.
+ */
+const lanterns: Puzzle = {
+  name: 'lantern-glow',
+  train: [
+    { input: G([[4, 4, 4, 4], [4, 5, 4, 4], [4, 4, 4, 4]]), output: G([[4, 6, 4, 4], [6, 5, 6, 4], [4, 6, 4, 4]]) },
+    { input: G([[4, 4, 4, 4, 4], [4, 4, 4, 4, 4], [4, 4, 4, 5, 4]]), output: G([[4, 4, 4, 4, 4], [4, 4, 4, 6, 4], [4, 4, 6, 5, 6]]) },
+  ],
+  testInputs: [G([[5, 4, 4], [4, 4, 4]])],
+};
+const lanternRule = 'cell_rule[colour, beside #5]{#4 0 -> #4, #4 1 -> #6, #5 0 -> #5}';
+
+/**
+ * Water (4) right above a rock (1) foams (6) at high tide. Invented. The cheapest table: the
+ * cell's colour and the colour below it.
+ */
+const tide: Puzzle = {
+  name: 'tide-foam',
+  train: [
+    { input: G([[4, 4, 4], [4, 4, 4], [4, 1, 4]]), output: G([[4, 4, 4], [4, 6, 4], [4, 1, 4]]) },
+    { input: G([[4, 4, 4, 4], [4, 1, 4, 4], [4, 1, 4, 1]]), output: G([[4, 6, 4, 4], [4, 1, 4, 6], [4, 1, 4, 1]]) },
+  ],
+  testInputs: [G([[4, 4, 1], [4, 1, 1]])],
+};
+const tideRule = 'cell_rule[colour, below]{#1 #1 -> #1, #1 edge -> #1, #4 #1 -> #6, #4 #4 -> #4, #4 edge -> #4}';
+
+/**
+ * At dusk the dinghies (one cell) leave, the two-cell boats light up (3) and the three-cell
+ * boats stay, whatever their colour. Invented. The cheapest table: by each boat's size.
+ */
+const dusk: Puzzle = {
+  name: 'dusk-boats',
+  train: [
+    {
+      input: G([[0, 0, 0, 0, 0], [0, 1, 1, 0, 2], [0, 0, 0, 0, 0], [2, 2, 2, 0, 0]]),
+      output: G([[0, 0, 0, 0, 0], [0, 3, 3, 0, 0], [0, 0, 0, 0, 0], [2, 2, 2, 0, 0]]),
+    },
+    { input: G([[7, 0, 0, 0], [0, 0, 7, 0], [0, 0, 7, 0], [1, 0, 7, 0]]), output: G([[0, 0, 0, 0], [0, 0, 7, 0], [0, 0, 7, 0], [0, 0, 7, 0]]) },
+    { input: G([[0, 2, 0, 0], [0, 2, 0, 1], [0, 0, 0, 1], [6, 0, 0, 0]]), output: G([[0, 3, 0, 0], [0, 3, 0, 3], [0, 0, 0, 3], [0, 0, 0, 0]]) },
+  ],
+  testInputs: [G([[1, 1, 1, 0], [0, 0, 0, 0], [5, 0, 0, 6], [5, 0, 0, 0]])],
+};
+const duskRule = 'object_rule[by_colour, size]{1 -> remove, 2 -> #3, 3 -> keep}';
+
+function programApplying(primitive: string, table: string): string {
+  return `with harbour\nanswer ${primitive}(harbour, ${table})\n`;
+}
+
+function run(text: string, input: Grid): Grid | typeof FAILURE {
+  return runProgram(parseProgram(text), input, defaultLibrary).output;
+}
+
+describe('a cell rule read off the demonstrations', () => {
+  it('is the cheapest feature set that explains every cell', () => {
+    expect(learnCellRules(lanterns).map((t) => printLiteral(t.literal))).toEqual([lanternRule]);
+    expect(printLiteral(learnCellRules(tide)[0]!.literal)).toBe(tideRule);
+  });
+
+  it('reproduces every demonstration and gives the test output worked out by hand', () => {
+    const text = programApplying('apply_cell_rule', lanternRule);
+    for (const pair of lanterns.train) expect((run(text, pair.input) as Grid).equals(pair.output)).toBe(true);
+    expect((run(text, lanterns.testInputs[0]!) as Grid).toRows()).toEqual([[5, 6, 4], [6, 4, 4]]);
+  });
+
+  it('fails cleanly on a grid holding a key it lacks', () => {
+    // The middle water cell touches two lanterns: the table has no entry for (#4, 2).
+    expect(run(programApplying('apply_cell_rule', lanternRule), G([[5, 4, 5]]))).toBe(FAILURE);
+    // A rock with water below it: no entry for (#1, #4).
+    expect(run(programApplying('apply_cell_rule', tideRule), G([[1], [4]]))).toBe(FAILURE);
+  });
+
+  it('is not offered when a test input holds a key the demonstrations never show', () => {
+    const unseen: Puzzle = { ...lanterns, testInputs: [G([[5, 4, 5], [4, 4, 4]])] };
+    const learned = learnCellRules(unseen);
+    expect(learned.map((t) => printLiteral(t.literal))).not.toContain(lanternRule);
+    for (const t of learned) expect(applyTable(t.literal, unseen.testInputs[0]!)).not.toBeNull();
+  });
+
+  it('needs same-shaped demonstrations', () => {
+    const reshaped: Puzzle = { ...lanterns, train: [lanterns.train[0]!, { input: G([[4, 5]]), output: G([[6]]) }] };
+    expect(learnCellRules(reshaped)).toEqual([]);
+  });
+});
+
+describe('an object rule read off the demonstrations', () => {
+  it('matches each boat to what became of it and keys the outcome by size', () => {
+    expect(learnObjectRules(dusk).map((t) => printLiteral(t.literal))).toEqual([duskRule]);
+  });
+
+  it('reproduces every demonstration and gives the test output worked out by hand', () => {
+    const text = programApplying('apply_object_rule', duskRule);
+    for (const pair of dusk.train) expect((run(text, pair.input) as Grid).equals(pair.output)).toBe(true);
+    expect((run(text, dusk.testInputs[0]!) as Grid).toRows()).toEqual([[1, 1, 1, 0], [0, 0, 0, 0], [3, 0, 0, 0], [3, 0, 0, 0]]);
+  });
+
+  it('fails cleanly on a boat of a size it lacks', () => {
+    expect(run(programApplying('apply_object_rule', duskRule), G([[0, 8, 8, 8, 8]]))).toBe(FAILURE);
+  });
+
+  it('learns moves: boats of colour 1 sail one row up, boats of colour 2 stay moored', () => {
+    const sailing: Puzzle = {
+      name: 'sailing',
+      train: [
+        { input: G([[0, 0, 0], [1, 0, 2], [1, 0, 2]]), output: G([[1, 0, 0], [1, 0, 2], [0, 0, 2]]) },
+        { input: G([[0, 0, 0, 0], [0, 2, 0, 0], [0, 0, 1, 1]]), output: G([[0, 0, 0, 0], [0, 2, 1, 1], [0, 0, 0, 0]]) },
+      ],
+      testInputs: [G([[2, 0], [0, 1]])],
+    };
+    const learned = learnObjectRules(sailing).map((t) => printLiteral(t.literal));
+    expect(learned[0]).toBe('object_rule[by_colour, colour]{#1 -> move (-1, 0), #2 -> keep}');
+  });
+});
+
+describe('table text', () => {
+  it('prints and parses back exactly, hand-written tables', () => {
+    for (const text of [
+      lanternRule,
+      tideRule,
+      duskRule,
+      'cell_rule[colour, around #2, row_holds #7, row_parity, column_parity, above_left]{#0 8 no even odd edge -> #1, #9 0 yes odd even #3 -> #9}',
+      'cell_rule[colour]{}',
+      "object_rule[multicolour_diagonal, shape]{x.x/xxx -> move (-2, 3), xx -> #4, x -> remove}",
+      'object_rule[by_colour_diagonal, touches_edge]{no -> keep, yes -> #0}',
+      'object_rule[multicolour, size_rank]{1 -> #2, 2 -> keep}',
+    ]) {
+      const e = parseExpression(text);
+      expect(e.kind).toBe('literal');
+      if (e.kind === 'literal') expect(printLiteral(e.literal)).toBe(text);
+    }
+  });
+
+  const roundTrip = (literal: LiteralValue) => {
+    const text = printLiteral(literal);
+    expect(parseExpression(text)).toEqual({ kind: 'literal', literal });
+  };
+
+  it('prints and parses back exactly, random cell rules', () => {
+    fc.assert(fc.property(cellRuleArbitrary, roundTrip), { numRuns: 300 });
+  });
+
+  it('prints and parses back exactly, random object rules', () => {
+    fc.assert(fc.property(objectRuleArbitrary, roundTrip), { numRuns: 300 });
+  });
+
+  it('round-trips a whole program holding a table', () => {
+    const text = `-- The lanterns light the water around them.\nwith harbour\nglow = apply_cell_rule(harbour, ${lanternRule})\nanswer apply_object_rule(glow, ${duskRule})\n`;
+    expect(printProgram(parseProgram(text))).toBe(text);
+  });
+
+  it('names the place and what was expected when a table is malformed', () => {
+    // Columns count from 1: in 'cell_rule[colour]{#1 -> #2, #1 -> #3}' the second '#1' is the 29th character.
+    const problem = (text: string) => {
+      try {
+        parseExpression(text);
+      } catch (error) {
+        if (error instanceof ProgramSyntaxError) return `${error.column}: ${error.expected}`;
+        throw error;
+      }
+      return 'parsed';
+    };
+    expect(problem('cell_rule[colour]{#1 -> #2, #1 -> #3}')).toBe('29: a key not already in the table');
+    expect(problem('cell_rule[above]{}')).toBe("11: 'colour', the first feature of every cell rule");
+    expect(problem('cell_rule[colour, around #1]{#0 9 -> #1}')).toBe('33: a count from 0 to 8');
+    expect(problem('cell_rule[colour, left]{#0 #1 -> #1, #0 wall -> #1}')).toBe("41: a colour such as '#3' or 'edge'");
+    expect(problem('cell_rule[colour, around]{}')).toBe("25: a colour such as '#3'");
+    expect(problem('object_rule[by_colour, weight]{}')).toMatch(/^24: an object property/);
+    expect(problem('object_rule[by_colour, shape]{xx/x -> keep}')).toMatch(/^31: a shape/);
+    expect(problem('object_rule[by_colour, size]{1 -> sink}')).toMatch(/^35: 'keep', 'remove'/);
+  });
+});
+
+describe('the bits of a table', () => {
+  it('follows the README formula, worked out by hand', () => {
+    const bitsOf = (text: string) => {
+      const e = parseExpression(text);
+      return e.kind === 'literal' ? tableBits(e.literal) : undefined;
+    };
+    // palette: colours 1, 2 (k = 2, c = 1): 1 + 2 entries × 2c = 5
+    expect(bitsOf('{#1 -> #2, #2 -> #1}')).toBe(5);
+    // palette: colours 0, 2, 3, 4, 6 (k = 5, c = 3): 1 + 4 × 6 = 25
+    expect(bitsOf('{#2 -> #4, #3 -> #6, #4 -> #0, #6 -> #0}')).toBe(25);
+    // lanterns: γ(2) = 3, + beside #5 (4 + 4) = 11; colours 4, 5, 6 (c = 2); each key 2 + 3;
+    // values: keep 1, change 1 + 2, keep 1: 11 + 6 + 8 + 6 = 31
+    expect(bitsOf(lanternRule)).toBe(31);
+    // tide: γ(2) = 3, + below 4 = 7; colours 1, 4, 6 (c = 2); neighbour ⌈log₂ 4⌉ = 2; five keys
+    // of 4 bits; four keeps of 1 bit, one change of 3: 7 + 20 + 4 + 3 = 34
+    expect(bitsOf(tideRule)).toBe(34);
+    // dusk: 2 + 3; size 1: γ(2) + 2 = 5; size 2: γ(3) + 2 + c (one colour, c = 1) = 6;
+    // size 3: γ(4) + 2 = 7: 5 + 18 = 23
+    expect(bitsOf(duskRule)).toBe(23);
+    // a move: zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 3 + (2 + 3 + 1) = 11
+    expect(bitsOf('object_rule[by_colour, touches_edge]{yes -> move (-1, 0)}')).toBe(2 + 3 + 1 + 2 + 3 + 1);
+  });
+
+  it('grows with every entry, so a large table never beats a short program', () => {
+    fc.assert(
+      fc.property(fc.oneof(cellRuleArbitrary, objectRuleArbitrary), (literal) => {
+        if (literal.type !== 'CellRule' && literal.type !== 'ObjectRule') return;
+        if (literal.entries.length === 0) return;
+        const fewer = { ...literal, entries: literal.entries.slice(0, -1) } as LiteralValue;
+        expect(tableBits(literal)!).toBeGreaterThan(tableBits(fewer)!);
+      }),
+    );
+    // forty entries of colour and parity: at least 40 × (1 + 1 + 1) bits, beyond the search's 60
+    const entries = Array.from({ length: 40 }, (_, i) => ({ key: [i % 10, Math.floor(i / 10) % 2], colour: i % 10 }));
+    expect(tableBits({ type: 'CellRule', features: [{ name: 'colour' }, { name: 'row_parity' }], entries })!).toBeGreaterThan(120);
+  });
+
+  it('is what programBits charges for a table program read from text, as the solver charged it', () => {
+    const text = programApplying('apply_cell_rule', lanternRule);
+    // apply_cell_rule 4 + the input 1 + the table 31
+    expect(programBits(parseProgram(text), defaultLibrary, taskConstants(lanterns))).toBe(36);
+    expect(programBits(parseProgram(text), defaultLibrary, [])).toBe(36);
+  });
+});
+
+describe('the solver with learned tables', () => {
+  it('finds the object rule program for the dusk boats within a candidate cap', () => {
+    const result = solvePuzzle(dusk, { maxCandidates: 30_000, timeLimitSeconds: 600 });
+    const best = result.solutions[0]!;
+    expect(best.text).toBe(programApplying('apply_object_rule', duskRule).replace(/harbour/g, 'input'));
+    // apply_object_rule 4 + input 1 + table 23
+    expect(best.bits).toBe(28);
+    expect(programBits(best.program, defaultLibrary, taskConstants(dusk))).toBe(best.bits);
+    expect(best.testOutputs[0]!.toRows()).toEqual([[1, 1, 1, 0], [0, 0, 0, 0], [3, 0, 0, 0], [3, 0, 0, 0]]);
+  });
+
+  it('finds the cell rule program for the tide within a candidate cap', () => {
+    const result = solvePuzzle(tide, { maxCandidates: 30_000, timeLimitSeconds: 600 });
+    const best = result.solutions[0]!;
+    expect(best.text).toBe(`with input\nanswer apply_cell_rule(input, ${tideRule})\n`);
+    expect(best.bits).toBe(4 + 1 + 34);
+    expect(best.testOutputs[0]!.toRows()).toEqual([[4, 6, 1], [4, 1, 1]]);
+  });
+
+  it('does not offer a table program dearer than the bit limit', () => {
+    const result = solvePuzzle(tide, { maxCandidates: 30_000, timeLimitSeconds: 600, maxBits: 38 });
+    expect(result.solutions.every((s) => s.bits <= 38)).toBe(true);
+    expect(result.solutions.some((s) => s.text.includes('cell_rule'))).toBe(false);
+  });
+});
+
+describe("the README's table examples", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const blocks = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)].map((m) => m[1]!).filter((b) => b.includes('_rule['));
+
+  it('are the lantern and dusk-boat programs, and reproduce those tasks', () => {
+    expect(blocks.length).toBe(2);
+    const cases: [string, Puzzle][] = [
+      [lanternRule, lanterns],
+      [duskRule, dusk],
+    ];
+    cases.forEach(([rule, puzzle], i) => {
+      const program = parseProgram(blocks[i]!, 'README.md');
+      checkProgram(program, defaultLibrary);
+      expect(printProgram(program)).toBe(blocks[i]);
+      expect(blocks[i]).toContain(rule);
+      for (const pair of puzzle.train) expect((runProgram(program, pair.input, defaultLibrary).output as Grid).equals(pair.output)).toBe(true);
+    });
+  });
+
+  it('state the bits the formula gives', () => {
+    expect(readme).toContain('the lantern rule above costs 31 bits, the dusk-boat\n  rule 23');
+  });
+});

@@ -1,0 +1,101 @@
+/**
+ * Random learned tables (cell rules and object rules) as literals, for property tests: the text
+ * round trip, type soundness, and anything that needs tables to feed the interpreter. Driven by
+ * any source of choices (`choose(n)` returns a whole number from 0 to n - 1), or as fast-check
+ * arbitraries.
+ */
+import fc from 'fast-check';
+import {
+  CELL_FEATURE_NAMES,
+  featureTakesColour,
+  featureValues,
+  largestFeatureValue,
+  packKey,
+  type CellFeature,
+  type CellRuleEntry,
+} from '../../src/grid/cell-rule-table.ts';
+import {
+  OBJECT_GROUPINGS,
+  OBJECT_PROPERTIES,
+  propertyValues,
+  type ObjectKey,
+  type ObjectOutcome,
+  type ObjectRuleEntry,
+} from '../../src/grid/object-rule-table.ts';
+import type { LiteralValue } from '../../src/language/ast.ts';
+
+export type Chooser = (count: number) => number;
+
+export function randomCellRule(choose: Chooser): LiteralValue {
+  const features: CellFeature[] = [{ name: 'colour' }];
+  const extra = choose(4);
+  for (let i = 0; i < extra; i++) {
+    const name = CELL_FEATURE_NAMES[choose(CELL_FEATURE_NAMES.length)]!;
+    features.push(featureTakesColour(name) ? { name, colour: choose(10) } : { name });
+  }
+  const entries: CellRuleEntry[] = [];
+  const seen = new Set<number>();
+  const count = choose(7);
+  for (let i = 0; i < count; i++) {
+    const key = features.map((f) => choose(largestFeatureValue(featureValues(f.name)) + 1));
+    const packed = packKey(key);
+    if (seen.has(packed)) continue;
+    seen.add(packed);
+    entries.push({ key, colour: choose(10) });
+  }
+  return { type: 'CellRule', features, entries };
+}
+
+function randomObjectKey(choose: Chooser, values: ReturnType<typeof propertyValues>): ObjectKey {
+  switch (values) {
+    case 'number':
+      return choose(13);
+    case 'colour':
+      return choose(10);
+    case 'yes or no':
+      return choose(2);
+    case 'shape': {
+      const height = 1 + choose(3);
+      const width = 1 + choose(3);
+      const cells = Array.from({ length: height * width }, () => (choose(2) ? 'x' : '.'));
+      cells[choose(cells.length)] = 'x';
+      const rows: string[] = [];
+      for (let r = 0; r < height; r++) rows.push(cells.slice(r * width, (r + 1) * width).join(''));
+      return rows.join('/');
+    }
+  }
+}
+
+function randomOutcome(choose: Chooser): ObjectOutcome {
+  switch (choose(4)) {
+    case 0:
+      return { kind: 'keep' };
+    case 1:
+      return { kind: 'remove' };
+    case 2:
+      return { kind: 'recolour', colour: choose(10) };
+    default:
+      return { kind: 'move', rows: choose(7) - 3, columns: choose(7) - 3 };
+  }
+}
+
+export function randomObjectRule(choose: Chooser): LiteralValue {
+  const grouping = OBJECT_GROUPINGS[choose(OBJECT_GROUPINGS.length)]!;
+  const property = OBJECT_PROPERTIES[choose(OBJECT_PROPERTIES.length)]!;
+  const values = propertyValues(property);
+  const entries: ObjectRuleEntry[] = [];
+  const seen = new Set<string>();
+  const count = choose(6);
+  for (let i = 0; i < count; i++) {
+    const key = randomObjectKey(choose, values);
+    if (seen.has(String(key))) continue;
+    seen.add(String(key));
+    entries.push({ key, outcome: randomOutcome(choose) });
+  }
+  return { type: 'ObjectRule', grouping, property, entries };
+}
+
+const chooserArbitrary: fc.Arbitrary<Chooser> = fc.gen().map((g) => (count: number) => (count <= 1 ? 0 : g(fc.nat, { max: count - 1 })));
+
+export const cellRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomCellRule);
+export const objectRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomObjectRule);
