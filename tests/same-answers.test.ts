@@ -5,6 +5,9 @@
  * commit bba3324, before the enumerator became a class with type ids, section signatures,
  * per-grid memos and slab-allocated cells). Goals are switched off here: they add programs the
  * earlier search could not find at the cap, which is their point, not a change of answers.
+ * Programs with a demonstrated colour map (`{#a -> #b, ...}`) are left out: the learned-tables
+ * work made that constant cost bits entry by entry instead of a flat 3 bits (README,
+ * "Description length"), a deliberate change of the score, not of the search's speed.
  *
  * Training tasks: ARC-AGI-1 public training set (F. Chollet 2019, Apache-2.0), read from
  * ../shared/datasets/arc-agi-1-training/; that part skips where the folder is absent.
@@ -29,7 +32,8 @@ interface Expected {
 const expected: Expected[] = readFileSync(join(root, 'tests', 'fixtures', 'first-programs-before-speed.jsonl'), 'utf8')
   .trim()
   .split('\n')
-  .map((line) => JSON.parse(line) as Expected);
+  .map((line) => JSON.parse(line) as Expected)
+  .filter((e) => !(e.program ?? '').includes('{#'));
 
 function firstProgram(file: string): { program: string | null; bits: number | null } {
   const result = solvePuzzle(puzzleOf(readTaskFile(file)), { maxCandidates: CAP, timeLimitSeconds: 3600, attempts: 1, goalBits: 0 });
@@ -42,8 +46,8 @@ describe('the same first programs as before the speed work, at a candidate cap',
   const training = expected.filter((e) => !existsSync(join(root, 'tasks-demo', `${e.task}.json`)));
 
   it('the fixture covers every demo task and a training sample, found and not found', () => {
-    expect(demo.length).toBe(18);
-    expect(training.length).toBe(15);
+    expect(demo.length).toBe(17);
+    expect(training.length).toBe(14);
     expect(expected.some((e) => e.program === null)).toBe(true);
     expect(expected.filter((e) => e.program !== null).length).toBeGreaterThan(15);
   });
