@@ -59,7 +59,7 @@ export interface EnumerationStatistics {
   goals: number;
   /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls). */
   goalSolutions: number;
-  /** Programs that fit the demonstrations but not the output size they settle on a test input. */
+  /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
   sizeRejected: number;
   /** Bytes the search held when it stopped: kept values (cells counted) and memoised analyses. */
   bytesHeld: number;
@@ -102,6 +102,8 @@ export class Enumerator {
   /** Solutions met through goals, held until every cheaper cost level is done (or the budget ends). */
   private readonly pending: Candidate[] = [];
   private readonly throughGoals = new Set<Candidate>();
+  /** Programs that fit the demonstrations but break the settled output size: attempts only when nothing better comes. */
+  private readonly sizeFallbacks: Candidate[] = [];
   private readonly goals: GoalTable | undefined;
   /** Per test input, the output size the demonstrations settle. */
   private readonly predictedSizes: readonly PredictedSize[];
@@ -202,6 +204,7 @@ export class Enumerator {
         if (!(error instanceof Stop)) throw error;
       }
     }
+    this.addSizeFallbacks();
     if (this.solutions.length > 0) reason = 'solved';
     this.statistics.bytesHeld = this.bytesHeld;
     return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals };
@@ -355,27 +358,42 @@ export class Enumerator {
   /** Takes a program that fits the demonstrations as an attempt, unless it breaks the settled output size or repeats an attempt. */
   private accept(candidate: Candidate, throughGoal: boolean): void {
     const values = candidate.values;
+    if (throughGoal) this.throughGoals.add(candidate);
     for (let i = this.trainCount; i < this.examples; i++) {
       if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
+        // The demonstrations can agree on a size by chance: kept aside, used only if too few
+        // programs of the settled size are found.
         this.statistics.sizeRejected++;
+        if (!this.sizeFallbacks.some((s) => sameTestOutputs(s.values, values, this.trainCount))) this.sizeFallbacks.push(candidate);
+        if (this.solutions.length === 0 && this.sizeFallbacks.length === 1) this.firstFound(candidate);
         return;
       }
     }
     // Attempts must differ on the test inputs.
     if (this.solutions.some((s) => sameTestOutputs(s.values, values, this.trainCount))) return;
     this.solutions.push(candidate);
-    if (throughGoal) {
-      this.throughGoals.add(candidate);
-      this.statistics.goalSolutions++;
-    }
-    if (this.solutions.length === 1) {
-      this.firstSolutionCost = candidate.cost;
-      const now = performance.now();
-      this.statistics.secondsToFirstSolution = (now - this.started) / 1000;
-      // Further attempts get as long again as the first took (at least a second), within the limit.
-      this.deadline = Math.min(this.deadline, now + Math.max(1000, now - this.started));
-    }
+    if (throughGoal) this.statistics.goalSolutions++;
+    if (this.solutions.length === 1 && this.sizeFallbacks.length === 0) this.firstFound(candidate);
     if (this.solutions.length >= this.limits.attempts) throw new Stop('solved');
+  }
+
+  /** The first program that fits: further attempts get a bounded extra search. */
+  private firstFound(candidate: Candidate): void {
+    this.firstSolutionCost = candidate.cost;
+    const now = performance.now();
+    this.statistics.secondsToFirstSolution = (now - this.started) / 1000;
+    // Further attempts get as long again as the first took (at least a second), within the limit.
+    this.deadline = Math.min(this.deadline, now + Math.max(1000, now - this.started));
+  }
+
+  /** Fills the attempts left with programs that broke the settled size, cheapest first. */
+  private addSizeFallbacks(): void {
+    for (const candidate of this.sizeFallbacks) {
+      if (this.solutions.length >= this.limits.attempts) break;
+      if (this.solutions.some((s) => sameTestOutputs(s.values, candidate.values, this.trainCount))) continue;
+      this.solutions.push(candidate);
+      if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
+    }
   }
 
   /** Bytes held: the store's values plus what grids memoised since the search began. */
