@@ -19,6 +19,12 @@ export { Library } from './library/library.ts';
 export { defaultLibrary } from '../dsl/index.ts';
 export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, type WorkedExample } from './library/primitive.ts';
 
+export { canonicalProgram } from './language/canonical-names.ts';
+export { tokenize, detokenize } from './tokens/program-tokens.ts';
+export { tokenizeGrid, detokenizeGrid } from './tokens/grid-tokens.ts';
+export { TokenError } from './tokens/token-reader.ts';
+export { vocabularyOf, Vocabulary, VOCABULARY_VERSION, type Token } from './tokens/vocabulary.ts';
+
 export { parseTask, readTaskFile, readTasks, TaskFileError, type TaskOrError } from './tasks/read-task.ts';
 export type { Pair, Puzzle, Task, TestCase } from './tasks/task.ts';
 export { runOnTask, firstDifference, type Difference, type PairResult } from './tasks/run-on-task.ts';

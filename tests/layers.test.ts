@@ -18,6 +18,7 @@ const FLOORS: Readonly<Record<string, number>> = {
   'src/tasks': 2,
   dsl: 3,
   'src/output': 3,
+  'src/tokens': 3,
   'src/search': 4,
   'src/batch': 5,
   'src/cli': 6,

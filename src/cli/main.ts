@@ -15,6 +15,7 @@ import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
+import { registerTokensCommand } from './tokens-command.ts';
 
 export function buildProgram(): Command {
   const program = new Command();
@@ -40,6 +41,7 @@ export function buildProgram(): Command {
   registerPrimitivesCommand(program);
   registerSolveCommand(program);
   registerEvalCommand(program);
+  registerTokensCommand(program);
   return program;
 }
 
