@@ -33,5 +33,7 @@ export { solvePuzzle, type Solution, type SolveOptions, type SolveResult } from 
 export { programBits } from './search/description-length.ts';
 export { taskConstants, type Constant } from './search/constants.ts';
 export type { EnumerationStatistics, StopReason } from './search/enumerator.ts';
+export { traceRecord, TRACE_FORMAT, TRACE_VERSION, type TraceRecord, type PairTrace, type StepValue } from './training/trace-record.ts';
+export type { ValueJson, ObjectJson } from './training/value-json.ts';
 export { solveFiles, type BatchOptions } from './batch/solve-files.ts';
 export type { TaskReport, ReportedSolution } from './batch/task-report.ts';

@@ -21,6 +21,7 @@ const FLOORS: Readonly<Record<string, number>> = {
   'src/tokens': 3,
   'src/search': 4,
   'src/batch': 5,
+  'src/training': 5,
   'src/cli': 6,
   'src/bench': 7,
   src: 8,

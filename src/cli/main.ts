@@ -16,6 +16,7 @@ import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
 import { registerTokensCommand } from './tokens-command.ts';
+import { registerTraceCommand } from './trace-command.ts';
 
 export function buildProgram(): Command {
   const program = new Command();
@@ -42,6 +43,7 @@ export function buildProgram(): Command {
   registerSolveCommand(program);
   registerEvalCommand(program);
   registerTokensCommand(program);
+  registerTraceCommand(program);
   return program;
 }
 
