@@ -17,6 +17,7 @@ import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
 import { registerTokensCommand } from './tokens-command.ts';
 import { registerTraceCommand } from './trace-command.ts';
+import { registerGenerateCommand } from './generate-command.ts';
 
 export function buildProgram(): Command {
   const program = new Command();
@@ -44,6 +45,7 @@ export function buildProgram(): Command {
   registerEvalCommand(program);
   registerTokensCommand(program);
   registerTraceCommand(program);
+  registerGenerateCommand(program);
   return program;
 }
 
