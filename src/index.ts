@@ -38,5 +38,7 @@ export type { ValueJson, ObjectJson } from './training/value-json.ts';
 export { screenPrograms, buildTask, inShard, type GenerateOptions, type GeneratedTask, type NumberedProgram } from './training/generate.ts';
 export { makeInput, INPUT_KINDS, type InputKind, type InputSettings } from './training/input-makers.ts';
 export { Random } from './training/random.ts';
+export { varyTask, type VaryOptions, type Variation } from './training/vary.ts';
+export { profileOf, contentKind, type TaskProfile } from './training/content-kind.ts';
 export { solveFiles, type BatchOptions } from './batch/solve-files.ts';
 export type { TaskReport, ReportedSolution } from './batch/task-report.ts';

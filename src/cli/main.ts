@@ -18,6 +18,7 @@ import { registerShowCommand } from './show-command.ts';
 import { registerTokensCommand } from './tokens-command.ts';
 import { registerTraceCommand } from './trace-command.ts';
 import { registerGenerateCommand } from './generate-command.ts';
+import { registerVaryCommand } from './vary-command.ts';
 
 export function buildProgram(): Command {
   const program = new Command();
@@ -46,6 +47,7 @@ export function buildProgram(): Command {
   registerTokensCommand(program);
   registerTraceCommand(program);
   registerGenerateCommand(program);
+  registerVaryCommand(program);
   return program;
 }
 
