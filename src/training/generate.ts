@@ -3,7 +3,7 @@
  *
  * 1. Screening, the same on every machine: generation index 0, 1, 2, … draws a program by the
  *    priors (its own random stream, from the seed and the index) and runs it on a fixed set of
- *    probe inputs (two of each input kind, drawn once from the seed). A program is dropped when
+ *    probe inputs (one of each input kind, at most 8 by 8, drawn once from the seed). A program is dropped when
  *    it fails on every probe, changes no probe, gives every probe the same output, or behaves
  *    like a program kept before it: the same outputs on every probe (compared by a hash of
  *    them). The first `count` programs that pass get task numbers 0 … count - 1.
@@ -128,12 +128,16 @@ interface Probe {
   readonly grid: Grid;
 }
 
+/** Probe inputs per input kind, and their largest height and width: few and small, since every shard runs every program on them. */
+const PROBES_PER_KIND = 1;
+const PROBE_SIZE = 8;
+
 function probeSet(r: Resolved): Probe[] {
   const random = new Random(deriveSeed(r.seed, 'probes'));
   const probes: Probe[] = [];
-  const top = Math.min(r.maxSize, 10);
+  const top = Math.min(r.maxSize, PROBE_SIZE);
   for (const kind of INPUT_KINDS) {
-    for (let i = 0; i < 2; i++) {
+    for (let i = 0; i < PROBES_PER_KIND; i++) {
       const settings: InputSettings = {
         height: random.between(Math.min(r.minSize, top), top),
         width: random.between(Math.min(r.minSize, top), top),

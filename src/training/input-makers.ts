@@ -127,7 +127,13 @@ function symmetric(random: Random, s: InputSettings): Grid {
       if (mode === 'half-turn' && r * w + c > (h - 1 - r) * w + (w - 1 - c)) canvas.set(r, c, canvas.get(h - 1 - r, w - 1 - c));
     }
   }
-  markOne(canvas, random, s);
+  if (canvas.cells.every((v) => v === s.background)) {
+    // Nothing drawn: one cell and its mirror images, so the picture stays symmetric.
+    const r = random.below(h);
+    const c = random.below(w);
+    const colour = random.pick(s.colours);
+    for (const [rr, cc] of [[r, c], [r, w - 1 - c], [h - 1 - r, c], [h - 1 - r, w - 1 - c]] as const) canvas.set(rr, cc, colour);
+  }
   return canvas.toGrid();
 }
 

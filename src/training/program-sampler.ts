@@ -58,22 +58,45 @@ export class ProgramSampler {
     if (known === undefined) {
       this.buildable.set(key, false); // guards against cycles while computing
       const fn = splitFunctionType(type);
-      if (fn) known = this.sections(fn.parameter, fn.result, depth).length > 0;
-      else known = type in LITERAL_BITS || type === 'Grid' || this.calls(type, depth).length > 0;
+      if (fn) known = this.sections(fn.parameter, fn.result, depth).primitives.length > 0;
+      else known = type in LITERAL_BITS || type === 'Grid' || this.calls(type, depth).primitives.length > 0;
       this.buildable.set(key, known);
     }
     return known;
   }
 
-  private calls(type: Type, depth: number): Primitive[] {
-    if (depth <= 0) return [];
-    return (this.producers.get(type) ?? []).filter((p) => p.parameters.every((t) => this.canBuild(t, depth - 1)));
+  private readonly choices = new Map<string, { primitives: Primitive[]; weights: number[] }>();
+
+  /** Primitives that can make the type (memoised), with their prior weights 2^-bits. */
+  private calls(type: Type, depth: number): { primitives: Primitive[]; weights: number[] } {
+    const key = `call|${type}|${depth}`;
+    let found = this.choices.get(key);
+    if (!found) {
+      const primitives = depth <= 0 ? [] : (this.producers.get(type) ?? []).filter((p) => p.parameters.every((t) => this.canBuild(t, depth - 1)));
+      this.choices.set(key, (found = { primitives, weights: primitives.map((p) => 2 ** -p.bits) }));
+    }
+    return found;
   }
 
-  private sections(parameter: BaseType, result: BaseType, depth: number): Primitive[] {
-    return (this.producers.get(result) ?? []).filter(
-      (p) => p.parameters.length > 0 && p.parameters[0] === parameter && p.parameters.slice(1).every((t) => isBaseType(t) && this.canBuild(t, Math.max(0, depth - 1))),
-    );
+  /** Primitives usable as a section `p(_, ...)` of type parameter -> result (memoised), with their weights. */
+  private sections(parameter: BaseType, result: BaseType, depth: number): { primitives: Primitive[]; weights: number[] } {
+    const key = `section|${parameter}|${result}|${depth}`;
+    let found = this.choices.get(key);
+    if (!found) {
+      const primitives = (this.producers.get(result) ?? []).filter(
+        (p) => p.parameters.length > 0 && p.parameters[0] === parameter && p.parameters.slice(1).every((t) => isBaseType(t) && this.canBuild(t, Math.max(0, depth - 1))),
+      );
+      this.choices.set(key, (found = { primitives, weights: primitives.map((p) => 2 ** -p.bits) }));
+    }
+    return found;
+  }
+
+  private readonly totals = new WeakMap<number[], number>();
+
+  private total(weights: number[]): number {
+    let t = this.totals.get(weights);
+    if (t === undefined) this.totals.set(weights, (t = weights.reduce((a, b) => a + b, 0)));
+    return t;
   }
 
   private literal(type: BaseType, random: Random): LiteralValue {
@@ -102,16 +125,15 @@ export class ProgramSampler {
     };
     if (fn) {
       const options = this.sections(fn.parameter, fn.result, depth);
-      const p = options[random.weighted(options.map((o) => 2 ** -o.bits))]!;
+      const p = options.primitives[random.weighted(options.weights)]!;
       spend();
       const rest = p.parameters.slice(1).map((t) => this.expression(t, Math.max(0, depth - 1), random, budget, false));
       return { kind: 'call', primitive: p.name, arguments: [{ kind: 'hole' }, ...rest] };
     }
-    const calls = this.calls(type, depth);
-    const weights = calls.map((p) => 2 ** -p.bits);
+    const { primitives: calls, weights } = this.calls(type, depth);
     const leaf = mustCall ? 0 : type === 'Grid' ? 2 ** -INPUT_BITS : type in LITERAL_BITS ? 2 ** -LITERAL_BITS[type]! : 0;
     if (calls.length === 0 && leaf === 0) throw new TooBig();
-    const choice = random.weighted([leaf, ...weights]);
+    const choice = leaf > 0 && random.fraction() * (leaf + this.total(weights)) < leaf ? 0 : 1 + random.weighted(weights);
     if (choice === 0) return type === 'Grid' ? { kind: 'variable', name: PLACEHOLDER } : { kind: 'literal', literal: this.literal(type as BaseType, random) };
     const p = calls[choice - 1]!;
     spend();
