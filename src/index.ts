@@ -35,7 +35,7 @@ export { taskConstants, type Constant } from './search/constants.ts';
 export type { EnumerationStatistics, StopReason } from './search/enumerator.ts';
 export { traceRecord, TRACE_FORMAT, TRACE_VERSION, type TraceRecord, type PairTrace, type StepValue } from './training/trace-record.ts';
 export type { ValueJson, ObjectJson } from './training/value-json.ts';
-export { screenPrograms, buildTask, inShard, type GenerateOptions, type GeneratedTask, type NumberedProgram } from './training/generate.ts';
+export { Generation, generatedTaskName, type GenerateOptions, type GeneratedTask, type GenerationCounts, type OwnedProgram } from './training/generate.ts';
 export { makeInput, INPUT_KINDS, type InputKind, type InputSettings } from './training/input-makers.ts';
 export { Random } from './training/random.ts';
 export { varyTask, type VaryOptions, type Variation } from './training/vary.ts';

@@ -18,6 +18,7 @@ import { checkProgram } from '../src/language/checker.ts';
 import { parseProgram } from '../src/language/parser.ts';
 import { readTaskFile } from '../src/tasks/read-task.ts';
 import { runOnTask } from '../src/tasks/run-on-task.ts';
+import { Generation } from '../src/training/generate.ts';
 import { INPUT_KINDS, makeInput } from '../src/training/input-makers.ts';
 import { callCount, ProgramSampler } from '../src/training/program-sampler.ts';
 import { Random } from '../src/training/random.ts';
@@ -38,7 +39,7 @@ describe('pithy generate end to end', () => {
     for (const r of runs) expect(r.status, r.stderr).toBe(0);
     const a = filesOf(first);
     const b = filesOf(second);
-    expect(a.size).toBeGreaterThanOrEqual(15);
+    expect(a.size).toBeGreaterThanOrEqual(8);
     expect([...b.keys()]).toEqual([...a.keys()]);
     for (const [name, text] of a) expect(b.get(name), name).toBe(text);
   });
@@ -95,6 +96,25 @@ describe('pithy generate end to end', () => {
     const bad = pithy('generate', '--out', join(base, 'x'), '--shard', '4/3');
     expect(bad.status).not.toBe(0);
     expect(bad.stderr).toContain('1 <= I <= N');
+  });
+});
+
+describe('shards and the behaviour check', () => {
+  it('with many programs alike, the shards still give together exactly the tasks of one run', () => {
+    const run = (shard?: { index: number; count: number }) => {
+      const generation = new Generation({ seed: 11, count: 300, library: defaultLibrary, ...(shard ? { shard } : {}) });
+      const tasks = generation.own().flatMap((o) => generation.build(o) ?? []);
+      return { counts: generation.counts, tasks: new Map(tasks.map((t) => [t.name, JSON.stringify(t.trace)])) };
+    };
+    const whole = run();
+    // The check has work to do: some programs behave like earlier ones.
+    expect(whole.counts.sameBehaviour).toBeGreaterThan(10);
+    const parts = [1, 2, 3].map((index) => run({ index, count: 3 }));
+    const union = new Map(parts.flatMap((p) => [...p.tasks]));
+    expect(parts.reduce((n, p) => n + p.tasks.size, 0)).toBe(union.size);
+    expect([...union.keys()].sort()).toEqual([...whole.tasks.keys()].sort());
+    for (const [name, trace] of whole.tasks) expect(union.get(name)).toBe(trace);
+    expect(parts.reduce((n, p) => n + p.counts.sameBehaviour, 0)).toBe(whole.counts.sameBehaviour);
   });
 });
 

@@ -1,8 +1,9 @@
 /**
  * `npm run bench:generate`: is the generated data learnable, and how fast is it made?
  *
- * 1. Generates `--count` tasks from `--seed` in this process (as `pithy generate` does, without
- *    writing files) and reports the throughput in tasks per second of CPU time.
+ * 1. Draws `--count` programs from `--seed` and builds their tasks in this process (as
+ *    `pithy generate` does, without writing files); reports the throughput in tasks per second
+ *    of CPU time and the share of it that every shard repeats.
  * 2. Solves each task with the search, test outputs hidden, at a fixed candidate cap (so the work
  *    is the same on every run; a generous time limit is only a safety net), and counts a task as
  *    recovered when the cheapest program found costs no more bits than the generator's and
@@ -17,7 +18,7 @@ import { defaultLibrary } from '../../dsl/index.ts';
 import { positiveNumber } from '../cli/solve-options.ts';
 import { solvePuzzle } from '../search/solve.ts';
 import { puzzleOf } from '../tasks/task.ts';
-import { buildTask, screenPrograms, type GeneratedTask } from '../training/generate.ts';
+import { Generation, type GeneratedTask } from '../training/generate.ts';
 
 type Outcome = 'recovered' | 'cheaper, wrong on test' | 'dearer' | 'not found';
 
@@ -31,7 +32,7 @@ function main(): void {
     .name('bench:generate')
     .description('generation throughput, and the share of generated tasks the search recovers, by program size')
     .option('--seed <n>', 'seed of the generated tasks', (t) => Number(t), 1)
-    .option('--count <n>', 'tasks to generate and solve', positiveNumber('--count', true), 100)
+    .option('--count <n>', 'programs to draw (each gives at most one task to solve)', positiveNumber('--count', true), 160)
     .option('--candidates <n>', 'candidate cap per task', positiveNumber('--candidates', true), 100_000)
     .option('--time-limit <seconds>', 'safety limit per task (the cap should stop first)', positiveNumber('--time-limit', false), 60)
     .option('--results <file>', 'write one JSON line per task: name, size, bits, outcome, programs')
@@ -41,10 +42,12 @@ function main(): void {
 
   const started = process.cpuUsage();
   const wallStarted = performance.now();
-  const { programs, counts } = screenPrograms(options);
-  const screenCpu = cpuSeconds(started);
-  const tasks = programs.map((p) => buildTask(p, options)).filter((t): t is GeneratedTask => t !== undefined);
+  const generation = new Generation(options);
+  const owned = generation.own();
+  const sharedCpu = cpuSeconds(started);
+  const tasks = owned.map((p) => generation.build(p)).filter((t): t is GeneratedTask => t !== undefined);
   const generateCpu = cpuSeconds(started);
+  const counts = generation.counts;
   const generateWall = (performance.now() - wallStarted) / 1000;
 
   const bySize = new Map<number, Record<Outcome, number>>();
@@ -82,8 +85,8 @@ function main(): void {
   table.push(`| all | ${total(all)} | **${all.recovered} (${((100 * all.recovered) / Math.max(1, total(all))).toFixed(0)}%)** | ${all['cheaper, wrong on test']} | ${all.dearer} | ${all['not found']} |`);
   process.stdout.write(
     [
-      `seed ${o.seed}; ${programs.length} programs numbered (${counts.sampled} drawn), ${tasks.length} tasks built; one process; ${cpus()[0]?.model ?? 'unknown CPU'}`,
-      `generation: ${generateCpu.toFixed(2)} CPU s (screening ${screenCpu.toFixed(2)} s, ${((100 * screenCpu) / generateCpu).toFixed(0)}%), ${generateWall.toFixed(2)} s wall, ${(tasks.length / generateCpu).toFixed(1)} tasks per CPU second`,
+      `seed ${o.seed}; ${o.count} programs drawn, ${tasks.length} tasks built (dropped: ${counts.notDrawn} too big, ${counts.failsEveryProbe} failed on every probe, ${counts.changesNothing} changed nothing, ${counts.sameOutput} one output for all, ${counts.sameBehaviour} like an earlier one, ${counts.noPassingInputs} no passing inputs); one process; ${cpus()[0]?.model ?? 'unknown CPU'}`,
+      `generation: ${generateCpu.toFixed(2)} CPU s (the part every shard repeats: ${sharedCpu.toFixed(2)} s, ${((100 * sharedCpu) / generateCpu).toFixed(0)}%), ${generateWall.toFixed(2)} s wall, ${(tasks.length / generateCpu).toFixed(1)} tasks per CPU second`,
       `solving: cap ${o.candidates} candidates per task, ${solveCpu.toFixed(1)} CPU s in all, ${stoppedByTime} stopped by the ${o.timeLimit} s safety limit`,
       '',
       ...table,

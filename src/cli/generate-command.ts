@@ -10,7 +10,7 @@ import { InvalidArgumentError, type Command } from 'commander';
 import { defaultLibrary } from '../../dsl/index.ts';
 import { printProgram } from '../language/printer.ts';
 import { ProgressBar } from '../output/progress-bar.ts';
-import { buildTask, checkGenerateOptions, generatedTaskName, inShard, screenPrograms, type GenerateOptions, type GeneratedTask } from '../training/generate.ts';
+import { checkGenerateOptions, Generation, generatedTaskName, type GenerateOptions, type GeneratedTask } from '../training/generate.ts';
 import { parseShard, WHOLE_RUN, type Shard } from '../training/shard.ts';
 import { formatJson, writeError, writeJson, writeLines } from './output.ts';
 import { positiveNumber } from './solve-options.ts';
@@ -64,7 +64,7 @@ export function registerGenerateCommand(program: Command): void {
     .description('write synthetic tasks (task JSON with the ground-truth program and its trace), drawn from programs sampled by the priors')
     .requiredOption('--out <dir>', 'directory for the task files (created if missing)')
     .option('--seed <n>', 'seed of the run: the same seed gives the same files', wholeNumber('--seed'), 1)
-    .option('--count <n>', 'programs to number; each gives a task unless its inputs never pass the checks', positiveNumber('--count', true), 100)
+    .option('--count <n>', 'programs to draw; each gives at most one task (those that fail the checks give none)', positiveNumber('--count', true), 100)
     .option('--shard <i/n>', 'build only shard i of n; the n shards give together the files of one run', shardOption)
     .option('--min-size <n>', 'smallest height and width of an input', positiveNumber('--min-size', true), 3)
     .option('--max-size <n>', 'largest height and width of an input', positiveNumber('--max-size', true), 12)
@@ -94,51 +94,33 @@ export function registerGenerateCommand(program: Command): void {
         return;
       }
       const started = performance.now();
-      const { programs, counts } = screenPrograms(options);
-      const screenSeconds = (performance.now() - started) / 1000;
-      const mine = programs.filter((p) => inShard(p.number, shard));
-      const existing = mine.map((p) => join(flags.out, `${generatedTaskName(flags.seed, p.number)}.json`)).filter((f) => existsSync(f));
+      const generation = new Generation(options);
+      const owned = generation.own();
+      const existing = owned.map((p) => join(flags.out, `${generatedTaskName(flags.seed, p.index)}.json`)).filter((f) => existsSync(f));
       if (existing.length > 0 && !flags.force) {
         writeError(`${existing[0]}${existing.length > 1 ? ` and ${existing.length - 1} more` : ''}: already exist${existing.length > 1 ? '' : 's'}; pithy will not overwrite (choose another --out or pass --force)`);
         process.exitCode = 2;
         return;
       }
       mkdirSync(flags.out, { recursive: true });
-      const bar = new ProgressBar(mine.length, process.stderr, 30, 'written');
-      let written = 0;
-      const noInputs: string[] = [];
-      for (const numbered of mine) {
-        const task = buildTask(numbered, options);
-        if (task) {
-          writeFileSync(join(flags.out, `${task.name}.json`), generatedTaskFile(task));
-          written++;
-        } else noInputs.push(generatedTaskName(flags.seed, numbered.number));
-        bar.tick(written);
+      const bar = new ProgressBar(owned.length, process.stderr, 30, 'written');
+      for (const o of owned) {
+        const task = generation.build(o);
+        if (task) writeFileSync(join(flags.out, `${task.name}.json`), generatedTaskFile(task));
+        bar.tick(generation.counts.written);
       }
       bar.finish();
       const seconds = (performance.now() - started) / 1000;
-      const summary = {
-        out: flags.out,
-        seed: flags.seed,
-        shard: `${shard.index}/${shard.count}`,
-        written,
-        numbered: counts.kept,
-        inShard: mine.length,
-        withoutPassingInputs: noInputs,
-        screening: counts,
-        screenSeconds: Number(screenSeconds.toFixed(3)),
-        seconds: Number(seconds.toFixed(3)),
-      };
+      const c = generation.counts;
       if (flags.json) {
-        writeJson(summary);
+        writeJson({ out: flags.out, seed: flags.seed, shard: `${shard.index}/${shard.count}`, count: flags.count, ...c, seconds: Number(seconds.toFixed(3)) });
         return;
       }
-      const rejected = counts.sampled - counts.kept;
       writeLines([
-        `${written} task${written === 1 ? '' : 's'} written to ${flags.out} (seed ${flags.seed}, shard ${shard.index}/${shard.count}, ${seconds.toFixed(1)} s, ${(written / Math.max(seconds, 1e-9)).toFixed(1)} tasks/s)`,
-        `programs drawn: ${counts.sampled}; numbered: ${counts.kept}; dropped: ${rejected} (${counts.failsEveryProbe} failed on every probe, ${counts.changesNothing} changed nothing, ${counts.sameOutput} gave one output for all, ${counts.sameBehaviour} behaved like an earlier one)`,
-        ...(noInputs.length > 0 ? [`no passing inputs in the allowed draws: ${noInputs.join(', ')}`] : []),
-        ...(counts.kept < flags.count ? [`only ${counts.kept} of ${flags.count} programs passed the screen within the draws allowed`] : []),
+        `${c.written} task${c.written === 1 ? '' : 's'} written to ${flags.out} from ${flags.count} programs drawn (seed ${flags.seed}, shard ${shard.index}/${shard.count}, ${seconds.toFixed(1)} s, ${(c.written / Math.max(seconds, 1e-9)).toFixed(1)} tasks/s)`,
+        `dropped: ${c.notDrawn} too big to draw, ${c.failsEveryProbe} failed on every probe` +
+          (shard.count > 1 ? `; of the ${c.owned} this shard owns: ` : ', ') +
+          `${c.changesNothing} changed nothing, ${c.sameOutput} gave one output for all, ${c.sameBehaviour} behaved like an earlier one, ${c.noPassingInputs} found no passing inputs`,
       ]);
     });
 }

@@ -1,37 +1,41 @@
 /**
- * Synthetic tasks with known programs. A run has a seed and a count and goes in two stages:
+ * Synthetic tasks with known programs. A run has a seed and a count of generation indices
+ * 0 … count - 1; each index draws a program by the priors (its own random stream, from the seed
+ * and the index) and gives at most one task:
  *
- * 1. Screening, the same on every machine: generation index 0, 1, 2, … draws a program by the
- *    priors (its own random stream, from the seed and the index) and runs it on a fixed set of
- *    probe inputs (one of each input kind, at most 8 by 8, drawn once from the seed). A program is dropped when
- *    it fails on every probe, changes no probe, gives every probe the same output, or behaves
- *    like a program kept before it: the same outputs on every probe (compared by a hash of
- *    them). The first `count` programs that pass get task numbers 0 … count - 1.
- * 2. Building, split between shards by task number: inputs are drawn for each numbered program
- *    (its own random stream again) from the input kinds it worked on, until every pair passes:
- *    the program succeeds on every input, every output differs from its input, and the outputs
- *    are not all the same. A program whose inputs never pass in `inputTries` draws gives no
- *    task; that too is the same in every run.
+ * 1. The program is run on a fixed set of probe inputs (two small ones of each input kind,
+ *    drawn once from the seed). It is dropped when it fails on every probe, changes no probe,
+ *    gives every probe the same output, or behaves like the program of an earlier index: the
+ *    same outputs on every probe (compared by a hash of them).
+ * 2. Inputs are drawn (the index's own random stream again) from the input kinds it changed,
+ *    until every pair passes: the program succeeds on every input, every output differs from
+ *    its input, and the outputs are not all the same. A program whose inputs never pass in
+ *    `inputTries` draws gives no task.
  *
- * So the same seed gives the same tasks, and the shards of one seed give together exactly the
- * tasks of one run: what depends on other indices (the behaviour check) is in stage 1, which
- * each shard repeats, and stage 1 is the cheap part.
+ * Shards. The behaviour check compares an index with every earlier one, so shards are not cut
+ * by index but by behaviour: every shard draws every program and runs it on the probes, in
+ * order, only until the first probe it succeeds on; that probe and its output decide the shard.
+ * Two programs that behave alike succeed first on the same probe with the same output, so they
+ * fall in the same shard, and the shard that owns a program has seen every earlier program
+ * like it: the shards of a seed give together exactly the tasks of one run. Only the drawing
+ * and that first probe are repeated by every shard; the other probes and the inputs are the
+ * owning shard's alone.
  */
 import { Grid } from '../grid/grid.ts';
 import type { Program } from '../language/ast.ts';
-import { isFailure } from '../language/failure.ts';
+import { FAILURE, isFailure, type Failure } from '../language/failure.ts';
 import { runProgram } from '../language/interpreter.ts';
 import type { Library } from '../library/library.ts';
 import type { Task } from '../tasks/task.ts';
 import { INPUT_KINDS, makeInput, type InputKind, type InputSettings } from './input-makers.ts';
 import { callCount, literalColours, ProgramSampler } from './program-sampler.ts';
-import { deriveSeed, Random } from './random.ts';
+import { deriveSeed, mix32, Random } from './random.ts';
 import { shardOf, WHOLE_RUN, type Shard } from './shard.ts';
 import { traceRecord, type TraceRecord } from './trace-record.ts';
 
 export interface GenerateOptions {
   readonly seed: number;
-  /** Programs to number (tasks to build, less those whose inputs never pass). */
+  /** Generation indices (programs drawn); each gives at most one task. */
   readonly count: number;
   readonly shard?: Shard;
   readonly library: Library;
@@ -50,29 +54,28 @@ export interface GenerateOptions {
   readonly inputTries?: number;
 }
 
-/** Why stage 1 dropped programs, and how many. */
-export interface ScreenCounts {
-  sampled: number;
+/** What became of a run's generation indices. */
+export interface GenerationCounts {
+  /** Indices whose program came out too big in every try (every shard counts these). */
+  notDrawn: number;
+  /** Programs that failed on every probe (every shard counts these). */
   failsEveryProbe: number;
+  /** Programs this shard owns, and what became of them: */
+  owned: number;
   changesNothing: number;
   sameOutput: number;
   sameBehaviour: number;
-  /** Numbered programs (at most `count`). */
-  kept: number;
+  noPassingInputs: number;
+  written: number;
 }
 
-export interface NumberedProgram {
-  /** Task number, 0 … count - 1. */
-  readonly number: number;
-  /** Generation index it was drawn at. */
+/** A program this shard owns, after the shared part of stage 1. */
+export interface OwnedProgram {
   readonly index: number;
   readonly program: Program;
-  /** Input kinds it succeeded on among the probes. */
-  readonly kinds: readonly InputKind[];
 }
 
 export interface GeneratedTask {
-  readonly number: number;
   readonly index: number;
   readonly name: string;
   readonly kind: InputKind;
@@ -118,9 +121,9 @@ function resolve(o: GenerateOptions): Resolved {
   return r;
 }
 
-/** The name of task number n of a seed's run: `seed7-00012`. */
-export function generatedTaskName(seed: number, number: number): string {
-  return `seed${seed}-${String(number).padStart(5, '0')}`;
+/** The name of the task of generation index i of a seed's run: `seed7-00012`. */
+export function generatedTaskName(seed: number, index: number): string {
+  return `seed${seed}-${String(index).padStart(5, '0')}`;
 }
 
 interface Probe {
@@ -128,8 +131,8 @@ interface Probe {
   readonly grid: Grid;
 }
 
-/** Probe inputs per input kind, and their largest height and width: few and small, since every shard runs every program on them. */
-const PROBES_PER_KIND = 1;
+/** Probe inputs per input kind, and their largest height and width. */
+const PROBES_PER_KIND = 2;
 const PROBE_SIZE = 8;
 
 function probeSet(r: Resolved): Probe[] {
@@ -150,59 +153,90 @@ function probeSet(r: Resolved): Probe[] {
   return probes;
 }
 
-/** Stage 1 (see the file comment): the numbered programs of a run, with the screening counts. */
-export function screenPrograms(options: GenerateOptions): { programs: NumberedProgram[]; counts: ScreenCounts } {
-  const r = resolve(options);
-  const sampler = new ProgramSampler(r.library, { maxDepth: r.maxDepth, maxCalls: r.maxCalls });
-  const probes = probeSet(r);
-  const seen = new Set<string>();
-  const counts: ScreenCounts = { sampled: 0, failsEveryProbe: 0, changesNothing: 0, sameOutput: 0, sameBehaviour: 0, kept: 0 };
-  const programs: NumberedProgram[] = [];
-  const lastIndex = r.count * 500 + 1000;
-  for (let index = 0; programs.length < r.count && index < lastIndex; index++) {
-    const program = sampler.sample(new Random(deriveSeed(r.seed, index, 'program')));
-    if (!program) continue;
-    counts.sampled++;
-    const outputs = probes.map((p) => runProgram(program, p.grid, r.library).output);
-    const succeeded = probes.flatMap((p, i) => (isFailure(outputs[i]) ? [] : [{ probe: p, output: outputs[i] as Grid }]));
-    if (succeeded.length === 0) {
-      counts.failsEveryProbe++;
-      continue;
+const outputKey = (o: Grid | Failure): string => (isFailure(o) ? '-' : `${o.height}x${o.width}:${o.hash}`);
+
+/**
+ * One run (or one shard of it), stage by stage: `own()` draws every program and keeps this
+ * shard's; `build()` takes those in index order through the rest of the checks to a task.
+ */
+export class Generation {
+  readonly counts: GenerationCounts = { notDrawn: 0, failsEveryProbe: 0, owned: 0, changesNothing: 0, sameOutput: 0, sameBehaviour: 0, noPassingInputs: 0, written: 0 };
+  private readonly r: Resolved;
+  private readonly probes: Probe[];
+  private readonly seen = new Set<string>();
+  private lastBuilt = -1;
+
+  constructor(options: GenerateOptions) {
+    this.r = resolve(options);
+    this.probes = probeSet(this.r);
+  }
+
+  /** The shared part of stage 1, over every index: the programs this shard owns, in index order. */
+  own(): OwnedProgram[] {
+    const { r } = this;
+    const sampler = new ProgramSampler(r.library, { maxDepth: r.maxDepth, maxCalls: r.maxCalls });
+    const owned: OwnedProgram[] = [];
+    for (let index = 0; index < r.count; index++) {
+      const program = sampler.sample(new Random(deriveSeed(r.seed, index, 'program')));
+      if (!program) {
+        this.counts.notDrawn++;
+        continue;
+      }
+      let first = -1;
+      let output: Grid | Failure = FAILURE;
+      for (let i = 0; i < this.probes.length && first < 0; i++) {
+        output = runProgram(program, this.probes[i]!.grid, r.library).output;
+        if (!isFailure(output)) first = i;
+      }
+      if (first < 0 || isFailure(output)) {
+        this.counts.failsEveryProbe++;
+        continue;
+      }
+      if (r.shard.count === 1 || shardOf(mix32(first + 1) ^ output.hash, r.shard.count) === r.shard.index) owned.push({ index, program });
     }
+    this.counts.owned = owned.length;
+    return owned;
+  }
+
+  /**
+   * The rest of stage 1, then stage 2, for an owned program: its task, or undefined when it is
+   * dropped (the counts say why). Owned programs must come in index order.
+   */
+  build(owned: OwnedProgram): GeneratedTask | undefined {
+    if (owned.index <= this.lastBuilt) throw new RangeError(`generation index ${owned.index} comes after ${this.lastBuilt}: owned programs are built in index order`);
+    this.lastBuilt = owned.index;
+    const { r, probes } = this;
+    const outputs = probes.map((p) => runProgram(owned.program, p.grid, r.library).output);
+    const succeeded = probes.flatMap((p, i) => (isFailure(outputs[i]) ? [] : [{ probe: p, output: outputs[i] as Grid }]));
     if (succeeded.every((s) => s.output.equals(s.probe.grid))) {
-      counts.changesNothing++;
-      continue;
+      this.counts.changesNothing++;
+      return undefined;
     }
     if (succeeded.length > 1 && succeeded.every((s) => s.output.equals(succeeded[0]!.output))) {
-      counts.sameOutput++;
-      continue;
+      this.counts.sameOutput++;
+      return undefined;
     }
-    const key = outputs.map((o) => (isFailure(o) ? '-' : `${o.height}x${o.width}:${o.hash}`)).join(' ');
-    if (seen.has(key)) {
-      counts.sameBehaviour++;
-      continue;
+    const key = outputs.map(outputKey).join(' ');
+    if (this.seen.has(key)) {
+      this.counts.sameBehaviour++;
+      return undefined;
     }
-    seen.add(key);
-    const kinds = INPUT_KINDS.filter((k) => succeeded.some((s) => s.probe.kind === k && !s.output.equals(s.probe.grid)));
-    programs.push({ number: programs.length, index, program, kinds: kinds.length > 0 ? kinds : INPUT_KINDS.filter((k) => succeeded.some((s) => s.probe.kind === k)) });
+    this.seen.add(key);
+    const changed = INPUT_KINDS.filter((k) => succeeded.some((s) => s.probe.kind === k && !s.output.equals(s.probe.grid)));
+    const task = buildTask(owned, changed, r);
+    if (task) this.counts.written++;
+    else this.counts.noPassingInputs++;
+    return task;
   }
-  counts.kept = programs.length;
-  return { programs, counts };
 }
 
-/** Whether the task number belongs to the shard. */
-export function inShard(number: number, shard: Shard): boolean {
-  return shard.count === 1 || shardOf(number, shard.count) === shard.index;
-}
-
-/** Stage 2 for one numbered program: its task, or undefined when no draw of inputs passed. */
-export function buildTask(numbered: NumberedProgram, options: GenerateOptions): GeneratedTask | undefined {
-  const r = resolve(options);
+/** Stage 2: the task of an owned program that passed the probes, or undefined when no draw of inputs passed. */
+function buildTask(numbered: OwnedProgram, kinds: readonly InputKind[], r: Resolved): GeneratedTask | undefined {
   const random = new Random(deriveSeed(r.seed, numbered.index, 'task'));
   const needed = literalColours(numbered.program);
   const pairs = r.trainPairs + r.testPairs;
   for (let attempt = 0; attempt < r.inputTries; attempt++) {
-    const kind = random.pick(numbered.kinds);
+    const kind = random.pick(kinds);
     const background = random.chance(0.7) ? 0 : random.below(10);
     const extra = random.sample([0, 1, 2, 3, 4, 5, 6, 7, 8, 9].filter((c) => c !== background && !needed.includes(c)), 9);
     const own = needed.filter((c) => c !== background);
@@ -226,7 +260,7 @@ export function buildTask(numbered: NumberedProgram, options: GenerateOptions): 
       if (!isFailure(output)) outputs.push(output);
     }
     if (!ok || outputs.every((o) => o.equals(outputs[0]!))) continue;
-    const name = generatedTaskName(r.seed, numbered.number);
+    const name = generatedTaskName(r.seed, numbered.index);
     const task: Task = {
       name,
       path: `${name}.json`,
@@ -234,7 +268,6 @@ export function buildTask(numbered: NumberedProgram, options: GenerateOptions): 
       test: inputs.slice(r.trainPairs).map((input, i) => ({ input, output: outputs[r.trainPairs + i]! })),
     };
     return {
-      number: numbered.number,
       index: numbered.index,
       name,
       kind,

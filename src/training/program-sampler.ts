@@ -29,7 +29,8 @@ const UNIT_OFFSETS: readonly (readonly [number, number])[] = [[0, 1], [1, 0], [0
 const INPUT_BITS = 1;
 const PLACEHOLDER = '\u0000input';
 
-class TooBig extends Error {}
+/** Thrown (a plain value: an Error would capture a stack each time) when a draw exceeds its limits. */
+const TOO_BIG = Symbol('too big');
 
 /** Draws programs over one library; keeps the per-type tables between draws. */
 export class ProgramSampler {
@@ -121,7 +122,7 @@ export class ProgramSampler {
   private expression(type: Type, depth: number, random: Random, budget: { calls: number }, mustCall: boolean): Expression {
     const fn = splitFunctionType(type);
     const spend = () => {
-      if (++budget.calls > this.maxCalls) throw new TooBig();
+      if (++budget.calls > this.maxCalls) throw TOO_BIG;
     };
     if (fn) {
       const options = this.sections(fn.parameter, fn.result, depth);
@@ -132,7 +133,7 @@ export class ProgramSampler {
     }
     const { primitives: calls, weights } = this.calls(type, depth);
     const leaf = mustCall ? 0 : type === 'Grid' ? 2 ** -INPUT_BITS : type in LITERAL_BITS ? 2 ** -LITERAL_BITS[type]! : 0;
-    if (calls.length === 0 && leaf === 0) throw new TooBig();
+    if (calls.length === 0 && leaf === 0) throw TOO_BIG;
     const choice = leaf > 0 && random.fraction() * (leaf + this.total(weights)) < leaf ? 0 : 1 + random.weighted(weights);
     if (choice === 0) return type === 'Grid' ? { kind: 'variable', name: PLACEHOLDER } : { kind: 'literal', literal: this.literal(type as BaseType, random) };
     const p = calls[choice - 1]!;
@@ -151,7 +152,7 @@ export class ProgramSampler {
         const tree = this.expression('Grid', this.maxDepth, random, { calls: 0 }, true);
         return canonicalProgram(withSteps(tree), this.library);
       } catch (error) {
-        if (!(error instanceof TooBig)) throw error;
+        if (error !== TOO_BIG) throw error;
       }
     }
     return undefined;

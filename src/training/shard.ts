@@ -1,8 +1,9 @@
 /**
- * Splitting one run's work between machines: `--shard I/N` takes the generation indices whose
- * stable hash falls to shard I of N (1-based). Every index belongs to exactly one shard, so the
- * shards of one seed together do the work of one run. (A shard helper of the batch layer may
- * replace this one when it exists.)
+ * Splitting one run's work between machines: `--shard I/N` (1-based) takes the items whose
+ * stable hash falls to shard I of N. Every item belongs to exactly one shard, the same on every
+ * machine. Generation hashes a program's behaviour on its first probe, not its index, so that
+ * programs alike meet in one shard (generate.ts). (A shard helper of the batch layer may replace
+ * this one when it exists.)
  */
 import { mix32 } from './random.ts';
 
@@ -14,9 +15,9 @@ export interface Shard {
 
 export const WHOLE_RUN: Shard = { index: 1, count: 1 };
 
-/** The shard (1-based, of `count`) an index belongs to: a stable hash, the same on every machine. */
-export function shardOf(index: number, count: number): number {
-  return (mix32(index ^ 0x2545f491) % count) + 1;
+/** The shard (1-based, of `count`) a whole number (an index or a hash) belongs to: a stable hash, the same on every machine. */
+export function shardOf(key: number, count: number): number {
+  return (mix32(key ^ 0x2545f491) % count) + 1;
 }
 
 /** Reads `I/N` (1 ≤ I ≤ N); throws a RangeError that says what was expected. */
