@@ -17,6 +17,10 @@ import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerReportCommand } from './report-command.ts';
 import { registerRunCommand } from './run-command.ts';
 import { registerShowCommand } from './show-command.ts';
+import { registerTokensCommand } from './tokens-command.ts';
+import { registerTraceCommand } from './trace-command.ts';
+import { registerGenerateCommand } from './generate-command.ts';
+import { registerVaryCommand } from './vary-command.ts';
 
 /** The version in package.json. */
 export function pithyVersion(): string {
@@ -55,6 +59,10 @@ export function buildProgram(): Command {
   registerEvalCommand(program);
   registerMergeCommand(program);
   registerReportCommand(program);
+  registerTokensCommand(program);
+  registerTraceCommand(program);
+  registerGenerateCommand(program);
+  registerVaryCommand(program);
   return program;
 }
 

@@ -7,6 +7,8 @@ export class ProgressBar {
     private readonly total: number,
     private readonly stream: NodeJS.WriteStream,
     private readonly width = 30,
+    /** What the count given to `tick` counts ("solved", "written", ...). */
+    private readonly counted = 'solved',
   ) {}
 
   get enabled(): boolean {
@@ -20,7 +22,7 @@ export class ProgressBar {
     const elapsed = (performance.now() - this.started) / 1000;
     const remaining = this.done > 0 ? (elapsed / this.done) * (this.total - this.done) : 0;
     this.stream.write(
-      `\r[${'='.repeat(filled)}${' '.repeat(this.width - filled)}] ${this.done}/${this.total} tasks, ${solved} solved, ${formatDuration(elapsed)} elapsed, about ${formatDuration(remaining)} left `,
+      `\r[${'='.repeat(filled)}${' '.repeat(this.width - filled)}] ${this.done}/${this.total} tasks, ${solved} ${this.counted}, ${formatDuration(elapsed)} elapsed, about ${formatDuration(remaining)} left `,
     );
   }
 
