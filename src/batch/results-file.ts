@@ -8,6 +8,8 @@ import type { TaskReport } from './task-report.ts';
 
 export interface ResultLine extends TaskReport {
   readonly solved: boolean;
+  /** The hash of the priors file the task was solved with (`--priors`); absent for the records' own bits. */
+  readonly priors?: string;
 }
 
 export function readResults(path: string): ResultLine[] {

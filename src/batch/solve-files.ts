@@ -8,10 +8,13 @@ import type { SolveOptions } from '../search/solve.ts';
 import { errorReport } from './solve-file.ts';
 import type { TaskReport } from './task-report.ts';
 import type { WorkerRequest } from './solve-worker.ts';
+import type { PriorBits } from './solve-worker-settings.ts';
 
 export interface BatchOptions {
   readonly jobs?: number;
   readonly solve?: Omit<SolveOptions, 'library'>;
+  /** Primitive bits from a priors file (name → bits), handed to every worker; default: the records' bits. */
+  readonly priors?: PriorBits;
   /** Heap cap per worker in megabytes (default 6144). */
   readonly workerMemoryMb?: number;
   /** Called as each task finishes, in finishing order. */
@@ -66,7 +69,7 @@ export async function solveFiles(files: readonly string[], options: BatchOptions
           w.on('message', onMessage);
           w.on('error', onError);
           w.on('exit', onExit);
-          const request: WorkerRequest = { id: index, file, options: solve };
+          const request: WorkerRequest = { id: index, file, options: solve, ...(options.priors ? { priors: options.priors } : {}) };
           w.postMessage(request);
         });
         reports[index] = report;

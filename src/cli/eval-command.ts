@@ -12,6 +12,7 @@ import { summarise, summaryLines } from '../batch/summary.ts';
 import { ProgressBar } from '../output/progress-bar.ts';
 import { addSolveFlags, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
+import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
 interface EvalFlags extends SharedSolveFlags {
@@ -31,6 +32,14 @@ export function registerEvalCommand(program: Command): void {
     .option('--verbose', 'print a line per task as it finishes')
     .option('--json', 'print the summary as JSON')
     .action(async (dir: string, flags: EvalFlags) => {
+      let priors: PriorsOption | undefined;
+      try {
+        priors = loadPriorsOption(flags.priors);
+      } catch (error) {
+        writeError((error as Error).message);
+        process.exitCode = 2;
+        return;
+      }
       const { files, problems } = expandTaskPaths([dir]);
       for (const p of problems) writeError(p);
       if (problems.length > 0) {
@@ -39,6 +48,13 @@ export function registerEvalCommand(program: Command): void {
       }
       const resultsPath = flags.results ?? `eval-${basename(resolve(dir))}.jsonl`;
       const previous = readResults(resultsPath);
+      const otherPriors = previous.find((l) => l.priors !== priors?.hash);
+      if (otherPriors) {
+        const named = (hash: string | undefined) => (hash === undefined ? "the primitives' own bits" : `priors ${hash}`);
+        writeError(`${resultsPath}: holds results solved with ${named(otherPriors.priors)}, but this run uses ${named(priors?.hash)}; choose another --results file so the runs are not mixed`);
+        process.exitCode = 2;
+        return;
+      }
       const known = new Map(previous.map((l) => [resolve(l.file), l]));
       const lines: ResultLine[] = files.flatMap((f) => (known.has(resolve(f)) ? [known.get(resolve(f))!] : []));
       const todo = files.filter((f) => !known.has(resolve(f)));
@@ -49,6 +65,7 @@ export function registerEvalCommand(program: Command): void {
       await solveFiles(todo, {
         jobs: flags.jobs,
         solve: solveOptionsFrom(flags),
+        ...(priors ? { priors: priors.bits } : {}),
         onReport: (report) => {
           let solved = false;
           try {
@@ -56,7 +73,7 @@ export function registerEvalCommand(program: Command): void {
           } catch (error) {
             writeError(`${report.file}: cannot score: ${(error as Error).message}`);
           }
-          const line: ResultLine = { ...report, solved };
+          const line: ResultLine = { ...report, solved, ...(priors ? { priors: priors.hash } : {}) };
           writer.append(line);
           lines.push(line);
           if (solved) solvedNow++;
@@ -69,7 +86,7 @@ export function registerEvalCommand(program: Command): void {
       });
       bar.finish();
       const summary = summarise(lines);
-      if (flags.json) writeJson({ results: resultsPath, ...summary });
-      else writeLines([...summaryLines(summary), `per-task results: ${resultsPath}`]);
+      if (flags.json) writeJson({ results: resultsPath, ...(priors ? { priors: priors.hash } : {}), ...summary });
+      else writeLines([...summaryLines(summary), ...(priors ? [`priors: ${priors.file} (${priors.hash})`] : []), `per-task results: ${resultsPath}`]);
     });
 }

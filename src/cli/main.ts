@@ -11,6 +11,7 @@ import { SIZE_CAP_VARIABLE } from '../batch/solve-worker-settings.ts';
 import { positiveNumber } from './solve-options.ts';
 import { registerCheckCommand } from './check-command.ts';
 import { registerEvalCommand } from './eval-command.ts';
+import { registerFitPriorsCommand } from './fit-priors-command.ts';
 import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerRunCommand } from './run-command.ts';
@@ -40,6 +41,7 @@ export function buildProgram(): Command {
   registerPrimitivesCommand(program);
   registerSolveCommand(program);
   registerEvalCommand(program);
+  registerFitPriorsCommand(program);
   return program;
 }
 

@@ -9,6 +9,7 @@ import { solveFiles } from '../batch/solve-files.ts';
 import type { TaskReport } from '../batch/task-report.ts';
 import { addSolveFlags, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
+import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
 interface SolveFlags extends SharedSolveFlags {
@@ -58,6 +59,14 @@ export function registerSolveCommand(program: Command): void {
     .option('--force', 'allow --predictions to replace an existing file')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
+      let priors: PriorsOption | undefined;
+      try {
+        priors = loadPriorsOption(flags.priors);
+      } catch (error) {
+        writeError((error as Error).message);
+        process.exitCode = 2;
+        return;
+      }
       const { files, problems } = expandTaskPaths(paths);
       for (const p of problems) writeError(p);
       if (flags.predictions && existsSync(flags.predictions) && !flags.force) {
@@ -70,6 +79,7 @@ export function registerSolveCommand(program: Command): void {
         const reports = await solveFiles(files, {
           jobs: flags.jobs,
           solve: solveOptionsFrom(flags),
+          ...(priors ? { priors: priors.bits } : {}),
           onReport: (report) => {
             if (!flags.json) writeLines(reportLines(report));
           },

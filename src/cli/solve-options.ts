@@ -18,6 +18,7 @@ export interface SharedSolveFlags {
   jobs: number;
   maxCandidates?: number;
   pruning: boolean;
+  priors?: string;
 }
 
 export function addSolveFlags(command: Command): Command {
@@ -26,7 +27,8 @@ export function addSolveFlags(command: Command): Command {
     .option('--attempts <n>', 'attempts per test input, from the cheapest programs with distinct outputs', positiveNumber('--attempts', true), 2)
     .option('--jobs <n>', 'tasks solved in parallel (worker threads)', positiveNumber('--jobs', true), 1)
     .option('--max-candidates <n>', 'cap on candidate programs evaluated per task', positiveNumber('--max-candidates', true))
-    .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)');
+    .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)')
+    .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
 }
 
 export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'library'> {
