@@ -18,6 +18,7 @@ export { runProgram, type RunResult, type TraceEntry } from './language/interpre
 export { Library } from './library/library.ts';
 export { defaultLibrary } from '../dsl/index.ts';
 export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, type WorkedExample } from './library/primitive.ts';
+export { readPriorsFile, parsePriors, PriorsFileError, type LoadedPriors } from './library/priors-file.ts';
 
 export { parseTask, readTaskFile, readTasks, TaskFileError, type TaskOrError } from './tasks/read-task.ts';
 export type { Pair, Puzzle, Task, TestCase } from './tasks/task.ts';
