@@ -21,6 +21,7 @@ export { runProgram, type RunResult, type TraceEntry } from './language/interpre
 export { Library } from './library/library.ts';
 export { defaultLibrary } from '../dsl/index.ts';
 export { CATEGORIES, CATEGORY_TITLES, primitive, type Category, type Primitive, type WorkedExample } from './library/primitive.ts';
+export { readPriorsFile, parsePriors, PriorsFileError, type LoadedPriors } from './library/priors-file.ts';
 
 export { canonicalProgram } from './language/canonical-names.ts';
 export { tokenize, detokenize } from './tokens/program-tokens.ts';

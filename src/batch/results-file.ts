@@ -18,6 +18,8 @@ export interface ResultLine extends TaskReport {
   readonly shard?: string;
   /** Only in eval results: every test input has its exact output among the attempts. */
   readonly solved?: boolean;
+  /** The hash of the priors file the task was solved with (`--priors`); absent for the records' own bits. */
+  readonly priors?: string;
 }
 
 export class ResultsFileError extends Error {

@@ -13,10 +13,13 @@ import { DEFAULT_MEMORY_CAP_MB, workerMemory } from './memory-cap.ts';
 import { errorReport, outOfMemoryReport } from './solve-file.ts';
 import type { TaskReport } from './task-report.ts';
 import type { WorkerRequest } from './solve-worker.ts';
+import type { PriorBits } from './solve-worker-settings.ts';
 
 export interface BatchOptions {
   readonly jobs?: number;
   readonly solve?: Omit<SolveOptions, 'library' | 'maxStoreBytes'>;
+  /** Primitive bits from a priors file (name → bits), handed to every worker; default: the records' bits. */
+  readonly priors?: PriorBits;
   /** Memory cap per worker in megabytes (see memory-cap.ts; default 1500). */
   readonly memoryCapMb?: number;
   /** Called as each task finishes, in finishing order. If it throws, the batch stops and rejects with that error. */
@@ -109,7 +112,7 @@ export async function solveFiles(files: readonly string[], options: BatchOptions
           w.on('error', onError);
           w.on('exit', onExit);
           stop.signal.addEventListener('abort', onStop, { once: true });
-          const request: WorkerRequest = { id: index, file, options: solve };
+          const request: WorkerRequest = { id: index, file, options: solve, ...(options.priors ? { priors: options.priors } : {}) };
           w.postMessage(request);
         });
         if (report === STOPPED) break;

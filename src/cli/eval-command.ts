@@ -15,6 +15,7 @@ import { reportRunProblem } from './run-problems.ts';
 import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
 import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
+import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
 interface EvalFlags extends SharedSolveFlags, ShardFlags {
@@ -36,6 +37,14 @@ export function registerEvalCommand(program: Command): void {
     .option('--verbose', 'print a line per task as it finishes')
     .option('--json', 'print the summary as JSON')
     .action(async (dir: string, flags: EvalFlags) => {
+      let priors: PriorsOption | undefined;
+      try {
+        priors = loadPriorsOption(flags.priors);
+      } catch (error) {
+        writeError((error as Error).message);
+        process.exitCode = 2;
+        return;
+      }
       const shard = resolveShard(flags);
       if (shard === null) return;
       const { files: allFiles, problems } = expandTaskPaths([dir]);
@@ -59,7 +68,7 @@ export function registerEvalCommand(program: Command): void {
           ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
           retry: flags.retry,
           score: true,
-          batch: { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal },
+          batch: { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal, ...(priors ? { priors: priors.bits } : {}) },
           onPlan: (plan) => {
             if (plan.done.length > 0) writeError(`resuming from ${resultsPath}: ${plan.done.length} of ${files.length} tasks already done`);
             if (plan.retried.length > 0) writeError(`solving again (worker crashed or overran): ${plan.retried.join(', ')}`);
@@ -87,8 +96,8 @@ export function registerEvalCommand(program: Command): void {
       if (outcome.interrupted) {
         writeError(`interrupted: ${outcome.lines.length} of ${files.length} tasks finished, every one kept in ${resultsPath}; run the same command again to resume`);
       }
-      if (flags.json) writeJson({ results: resultsPath, ...(outcome.interrupted ? { interrupted: true } : {}), ...summary });
-      else writeLines([...summaryLines(summary), `per-task results: ${resultsPath}`]);
+      if (flags.json) writeJson({ results: resultsPath, ...(outcome.interrupted ? { interrupted: true } : {}), ...(priors ? { priors: priors.hash } : {}), ...summary });
+      else writeLines([...summaryLines(summary), ...(priors ? [`priors: ${priors.file} (${priors.hash})`] : []), `per-task results: ${resultsPath}`]);
       if (outcome.interrupted) process.exitCode = interruption.exitCode ?? 130;
     });
 }

@@ -12,6 +12,7 @@ import { positiveNumber } from './solve-options.ts';
 import { registerCheckCommand } from './check-command.ts';
 import { registerEvalCommand } from './eval-command.ts';
 import { registerMergeCommand } from './merge-command.ts';
+import { registerFitPriorsCommand } from './fit-priors-command.ts';
 import { registerSolveCommand } from './solve-command.ts';
 import { registerPrimitivesCommand } from './primitives-command.ts';
 import { registerReportCommand } from './report-command.ts';
@@ -63,6 +64,7 @@ export function buildProgram(): Command {
   registerTraceCommand(program);
   registerGenerateCommand(program);
   registerVaryCommand(program);
+  registerFitPriorsCommand(program);
   return program;
 }
 

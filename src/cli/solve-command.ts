@@ -20,6 +20,7 @@ import { expandTaskPaths } from './task-paths.ts';
 import { stdoutColourMode, writeError, writeJson, writeLines } from './output.ts';
 import { explainLines } from './explain.ts';
 import { existingProgramFiles, writeProgramFile } from './program-files.ts';
+import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
 
 interface SolveFlags extends SharedSolveFlags, ShardFlags {
   json?: boolean;
@@ -75,6 +76,14 @@ export function registerSolveCommand(program: Command): void {
     .option('--force', 'let --predictions replace an existing file instead of resuming it, and --programs replace existing programs')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
+      let priors: PriorsOption | undefined;
+      try {
+        priors = loadPriorsOption(flags.priors);
+      } catch (error) {
+        writeError((error as Error).message);
+        process.exitCode = 2;
+        return;
+      }
       const shard = resolveShard(flags);
       if (shard === null) return;
       const { files: allFiles, problems } = expandTaskPaths(paths);
@@ -99,7 +108,7 @@ export function registerSolveCommand(program: Command): void {
         return;
       }
       const interruption = catchInterruptions();
-      const batch = { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal };
+      const batch = { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal, ...(priors ? { priors: priors.bits } : {}) };
       const show = (report: TaskReport) => {
         if (!flags.json) writeLines(reportLines(report));
         if (flags.explain && !flags.json) writeLines(explainLines(report, stdoutColourMode()));

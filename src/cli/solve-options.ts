@@ -22,6 +22,7 @@ export interface SharedSolveFlags {
   pruning: boolean;
   memoryCap: number;
   retry: boolean;
+  priors?: string;
 }
 
 export function addSolveFlags(command: Command): Command {
@@ -32,7 +33,8 @@ export function addSolveFlags(command: Command): Command {
     .option('--max-candidates <n>', 'cap on candidate programs evaluated per task', positiveNumber('--max-candidates', true))
     .option('--memory-cap <MB>', 'memory cap per worker in megabytes: the search stops a task with the reason memory when it holds this much', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
     .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')
-    .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)');
+    .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)')
+    .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
 }
 
 export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'library'> {

@@ -15,6 +15,7 @@
 import type { Expression, LiteralValue, Program } from '../language/ast.ts';
 import type { Library } from '../library/library.ts';
 import { printLiteral } from '../language/printer.ts';
+import { visitWrittenOut } from '../language/program-walk.ts';
 import type { Constant } from './constants.ts';
 import { tableBits } from './table-bits.ts';
 
@@ -42,23 +43,24 @@ export function programBits(program: Program, library: Library, constants: reado
     const key = printLiteral(c.literal);
     table.set(key, Math.min(table.get(key) ?? Infinity, c.bits));
   }
-  const steps = new Map(program.steps.map((s) => [s.name, s.expression]));
-  const cost = (e: Expression): number => {
+  let bits = 0;
+  visitWrittenOut(program, (e: Expression) => {
     switch (e.kind) {
       case 'hole':
-        return 0;
+        return;
       case 'literal':
-        return tableBits(e.literal) ?? table.get(printLiteral(e.literal)) ?? fallbackBits(e.literal);
-      case 'variable': {
-        const step = steps.get(e.name);
-        return step ? cost(step) : 1;
-      }
+        bits += tableBits(e.literal) ?? table.get(printLiteral(e.literal)) ?? fallbackBits(e.literal);
+        return;
+      case 'variable':
+        bits += 1;
+        return;
       case 'call': {
         const p = library.get(e.primitive);
         if (!p) throw new Error(`unknown primitive '${e.primitive}'`);
-        return e.arguments.reduce((sum, a) => sum + cost(a), p.bits);
+        bits += p.bits;
+        return;
       }
     }
-  };
-  return cost(program.answer);
+  });
+  return bits;
 }
