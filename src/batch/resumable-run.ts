@@ -19,6 +19,8 @@ export interface ResumableRunOptions {
   readonly settings: RunSettings;
   /** Recorded on each line, as "I/N". */
   readonly shard?: string;
+  /** The hash of the priors file in use (`--priors`), recorded on each line. */
+  readonly priors?: string;
   /** Solve again the tasks whose worker crashed or overran (default true). */
   readonly retry?: boolean;
   /** Score each report against the task file's test outputs (eval), after solving. */
@@ -73,6 +75,7 @@ export async function runResumable(options: ResumableRunOptions): Promise<Resuma
           ...(solved !== undefined ? { solved } : {}),
           settings: options.settings,
           ...(options.shard !== undefined ? { shard: options.shard } : {}),
+          ...(options.priors !== undefined ? { priors: options.priors } : {}),
         };
         results.append(line);
         predictions?.appendText(predictionsText([line]));

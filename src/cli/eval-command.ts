@@ -66,6 +66,7 @@ export function registerEvalCommand(program: Command): void {
           resultsFile: resultsPath,
           settings: settingsFrom(flags),
           ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
+          ...(priors ? { priors: priors.hash } : {}),
           retry: flags.retry,
           score: true,
           batch: { jobs: flags.jobs, solve: solveOptionsFrom(flags), memoryCapMb: flags.memoryCap, signal: interruption.signal, ...(priors ? { priors: priors.bits } : {}) },

@@ -124,6 +124,7 @@ export function registerSolveCommand(program: Command): void {
             predictionsFile: predictions,
             settings: settingsFrom(flags),
             ...(shard !== undefined ? { shard: shardLabel(shard) } : {}),
+            ...(priors ? { priors: priors.hash } : {}),
             retry: flags.retry,
             batch,
             onPlan: (plan) => {
