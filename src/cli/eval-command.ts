@@ -15,7 +15,7 @@ import { reportRunProblem } from './run-problems.ts';
 import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
 import { addSolveFlags, settingsFrom, solveOptionsFrom, type SharedSolveFlags } from './solve-options.ts';
 import { expandTaskPaths } from './task-paths.ts';
-import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
+import { priorsOrStop } from './priors-option.ts';
 import { writeError, writeJson, writeLines } from './output.ts';
 
 interface EvalFlags extends SharedSolveFlags, ShardFlags {
@@ -37,14 +37,8 @@ export function registerEvalCommand(program: Command): void {
     .option('--verbose', 'print a line per task as it finishes')
     .option('--json', 'print the summary as JSON')
     .action(async (dir: string, flags: EvalFlags) => {
-      let priors: PriorsOption | undefined;
-      try {
-        priors = loadPriorsOption(flags.priors);
-      } catch (error) {
-        writeError((error as Error).message);
-        process.exitCode = 2;
-        return;
-      }
+      const priors = priorsOrStop(flags.priors);
+      if (priors === null) return;
       const shard = resolveShard(flags);
       if (shard === null) return;
       const { files: allFiles, problems } = expandTaskPaths([dir]);

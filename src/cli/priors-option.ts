@@ -21,3 +21,17 @@ export function loadPriorsOption(file: string | undefined): PriorsOption | undef
   }
   return { file, hash: loaded.hash, bits: Object.fromEntries(loaded.bits) };
 }
+
+/**
+ * For a command's action: the priors of `--priors`, undefined without the flag, or null after
+ * reporting a bad file (exit code 2), when the command should stop.
+ */
+export function priorsOrStop(file: string | undefined): PriorsOption | undefined | null {
+  try {
+    return loadPriorsOption(file);
+  } catch (error) {
+    writeError((error as Error).message);
+    process.exitCode = 2;
+    return null;
+  }
+}

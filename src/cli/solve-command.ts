@@ -20,7 +20,7 @@ import { expandTaskPaths } from './task-paths.ts';
 import { stdoutColourMode, writeError, writeJson, writeLines } from './output.ts';
 import { explainLines } from './explain.ts';
 import { existingProgramFiles, writeProgramFile } from './program-files.ts';
-import { loadPriorsOption, type PriorsOption } from './priors-option.ts';
+import { priorsOrStop } from './priors-option.ts';
 
 interface SolveFlags extends SharedSolveFlags, ShardFlags {
   json?: boolean;
@@ -76,14 +76,8 @@ export function registerSolveCommand(program: Command): void {
     .option('--force', 'let --predictions replace an existing file instead of resuming it, and --programs replace existing programs')
     .option('--json', 'print the reports as JSON')
     .action(async (paths: string[], flags: SolveFlags) => {
-      let priors: PriorsOption | undefined;
-      try {
-        priors = loadPriorsOption(flags.priors);
-      } catch (error) {
-        writeError((error as Error).message);
-        process.exitCode = 2;
-        return;
-      }
+      const priors = priorsOrStop(flags.priors);
+      if (priors === null) return;
       const shard = resolveShard(flags);
       if (shard === null) return;
       const { files: allFiles, problems } = expandTaskPaths(paths);

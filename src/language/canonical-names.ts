@@ -12,7 +12,8 @@ import type { Type } from './types.ts';
 
 export const CANONICAL_INPUT_NAME = 'input';
 
-const TYPE_WORDS: Readonly<Record<string, string>> = {
+/** The word a step holding a value of each type is named after (the search names steps so too). */
+export const TYPE_WORDS: Readonly<Record<string, string>> = {
   Grid: 'grid',
   Colour: 'colour',
   Int: 'number',
@@ -22,6 +23,8 @@ const TYPE_WORDS: Readonly<Record<string, string>> = {
   Point: 'point',
   Grids: 'parts',
   Palette: 'palette',
+  CellRule: 'cell_table',
+  ObjectRule: 'object_table',
 };
 
 /** The canonical step names for steps of these types, in order. */

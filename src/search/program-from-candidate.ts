@@ -10,21 +10,10 @@
 import { freeze } from 'immer';
 import type { Expression, Program, Step } from '../language/ast.ts';
 import { printExpression } from '../language/printer.ts';
+import { TYPE_WORDS } from '../language/canonical-names.ts';
 import type { Candidate } from './value-store.ts';
 
-const STEP_NAMES: Record<string, string> = {
-  Grid: 'grid',
-  Colour: 'colour',
-  Int: 'number',
-  Bool: 'flag',
-  Object: 'object',
-  Objects: 'objects',
-  Point: 'point',
-  Grids: 'parts',
-  Palette: 'palette',
-  CellRule: 'cell_table',
-  ObjectRule: 'object_table',
-};
+const STEP_NAMES = TYPE_WORDS;
 
 export function programFromCandidate(candidate: Candidate, inputName: string): Program {
   const steps: Step[] = [];
