@@ -45,7 +45,7 @@ export function summarise(lines: readonly ResultLine[]): EvaluationSummary {
 export function summaryLines(s: EvaluationSummary): string[] {
   const pct = s.tasks > 0 ? ((100 * s.solved) / s.tasks).toFixed(1) : '0.0';
   return [
-    `solved ${s.solved} of ${s.tasks} tasks (${pct}%)`,
+    `solved ${s.solved} of ${s.tasks} task${s.tasks === 1 ? '' : 's'} (${pct}%)`,
     `  fit the demonstrations but missed a test output: ${s.wrong}`,
     `  no program found: ${s.notFound} (time limit reached: ${s.timeOuts})`,
     `  failures (bad files, solver errors): ${s.failures}`,
