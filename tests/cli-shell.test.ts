@@ -68,6 +68,15 @@ describe("'-' reads standard input", () => {
   it('check reads a program from standard input', () => {
     expect(pithy(['check', '-'], turnProgram).stdout).toContain('standard input: well typed');
   });
+
+  it('solve reads a task from standard input (worked by hand: the demonstration is a quarter turn clockwise)', () => {
+    const run = pithy(['solve', '-', '--max-candidates', '20000', '--json'], turnTask);
+    expect(run.status).toBe(0);
+    const reports = JSON.parse(run.stdout) as { task: string; attempts: number[][][][] }[];
+    expect(reports).toHaveLength(1);
+    expect(reports[0]!.task).toBe('stdin');
+    expect(reports[0]!.attempts[0]![0]).toEqual([[0, 5], [0, 0]]);
+  });
 });
 
 describe('errors in plain words', () => {
