@@ -10,7 +10,7 @@ export interface Interruption {
   readonly signal: AbortSignal;
   /** The exit code the signal calls for (130 for SIGINT, 143 for SIGTERM), or undefined. */
   readonly exitCode: number | undefined;
-  /** Removes the handlers (the default behaviour returns). */
+  /** Removes the handlers (the default behaviour returns), unless a signal already came. */
   dispose(): void;
 }
 
@@ -38,6 +38,9 @@ export function catchInterruptions(): Interruption {
       return exitCode;
     },
     dispose() {
+      // After a first signal the handlers stay: a second one that arrives while the command
+      // finishes must still quit with the signal's exit code, not die by the default action.
+      if (exitCode !== undefined) return;
       process.off('SIGINT', onInt);
       process.off('SIGTERM', onTerm);
     },
