@@ -3,9 +3,10 @@
  * no file of the search imports it, except program-from-candidate.ts, which runs once per
  * found solution. This test reads every import of immer and fails naming the file.
  */
-import { readdirSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { sourceFiles } from './support/source-files.ts';
 
 const root = resolve(import.meta.dirname, '..');
 
@@ -13,15 +14,6 @@ const root = resolve(import.meta.dirname, '..');
 const HOT_FOLDERS = ['src/grid', 'dsl', 'src/search'];
 const ALLOWED = new Set(['src/search/program-from-candidate.ts']);
 
-function sourceFiles(folder: string): string[] {
-  const out: string[] = [];
-  for (const entry of readdirSync(join(root, folder), { withFileTypes: true })) {
-    const path = join(folder, entry.name);
-    if (entry.isDirectory()) out.push(...sourceFiles(path));
-    else if (/\.(ts|js)$/.test(entry.name)) out.push(path);
-  }
-  return out;
-}
 
 function importsImmer(text: string): boolean {
   return /(?:from\s+|import\s*\(\s*|import\s+)'immer'/.test(text);

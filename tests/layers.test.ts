@@ -4,9 +4,10 @@
  * outputs) <- search <- batch <- cli <- bench, and the public index on top. This test reads
  * every import of src/ and dsl/ and fails naming the file and the import that breaks the rule.
  */
-import { readdirSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join, relative, resolve, dirname } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { sourceFiles } from './support/source-files.ts';
 
 const root = resolve(import.meta.dirname, '..');
 
@@ -27,15 +28,6 @@ const FLOORS: Readonly<Record<string, number>> = {
   src: 8,
 };
 
-function sourceFiles(folder: string): string[] {
-  const out: string[] = [];
-  for (const entry of readdirSync(join(root, folder), { withFileTypes: true })) {
-    const path = join(folder, entry.name);
-    if (entry.isDirectory()) out.push(...sourceFiles(path));
-    else if (/\.(ts|js)$/.test(entry.name)) out.push(path);
-  }
-  return out;
-}
 
 function floorFolder(file: string): string {
   const folder = dirname(file);
