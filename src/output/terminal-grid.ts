@@ -46,17 +46,17 @@ export function colourModeFor(stream: { isTTY?: boolean }, env: Readonly<Record<
 /** The channel levels of the 6×6×6 colour cube (indices 16–231) of the 256-colour table. */
 const CUBE_LEVELS = [0, 95, 135, 175, 215, 255] as const;
 
-/** The colour a terminal shows for an index 16–255 of the 256-colour table (the cube, then the grey ramp). */
+/** The colour a terminal shows for an index 16–255 of the 256-colour table (the cube, then the neutral ramp). */
 export function colourOfTableIndex(index: number): { red: number; green: number; blue: number } {
   if (index >= 232) {
-    const grey = 8 + 10 * (index - 232);
-    return { red: grey, green: grey, blue: grey };
+    const level = 8 + 10 * (index - 232);
+    return { red: level, green: level, blue: level };
   }
   const n = index - 16;
   return { red: CUBE_LEVELS[Math.floor(n / 36)]!, green: CUBE_LEVELS[Math.floor(n / 6) % 6]!, blue: CUBE_LEVELS[n % 6]! };
 }
 
-/** The nearest colour (by distance in red, green, blue) among the cube and the grey ramp of the 256-colour table. */
+/** The nearest colour (by distance in RGB) among the cube and the neutral ramp of the 256-colour table. */
 export function tableIndexFor(entry: PaletteEntry): number {
   let best = 16;
   let bestDistance = Infinity;
