@@ -73,6 +73,8 @@ export interface EnumerationOutcome {
   readonly statistics: EnumerationStatistics;
   /** The solutions found by meeting a goal. */
   readonly throughGoals: ReadonlySet<Candidate>;
+  /** The solutions that break the output size the demonstrations settle (last-resort attempts, listed last). */
+  readonly sizeFallbacks: ReadonlySet<Candidate>;
 }
 
 class Stop extends Error {
@@ -207,7 +209,7 @@ export class Enumerator {
     this.addSizeFallbacks();
     if (this.solutions.length > 0) reason = 'solved';
     this.statistics.bytesHeld = this.bytesHeld;
-    return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals };
+    return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals, sizeFallbacks: new Set(this.sizeFallbacks) };
   }
 
   /** Every production whose bits and cheapest arguments fit in this cost. */

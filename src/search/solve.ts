@@ -90,15 +90,20 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     pruning: options.pruning ?? true,
     goalBits: options.goalBits ?? 12,
   }, INPUT_NAME);
+  const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c) };
+    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c) };
+    if (outcome.sizeFallbacks.has(c)) lastResort.add(solution);
+    return solution;
   });
   for (const t of tables) {
     found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false });
   }
   const solutions: Solution[] = [];
-  for (const s of found.map((s, i) => ({ s, i })).sort((a, b) => a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s)) {
+  // By bits, except that programs breaking the settled output size stay behind all others.
+  const rank = (s: Solution): number => (lastResort.has(s) ? 1 : 0);
+  for (const s of found.map((s, i) => ({ s, i })).sort((a, b) => rank(a.s) - rank(b.s) || a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s)) {
     if (solutions.length >= attempts) break;
     if (solutions.some((kept) => kept.testOutputs.every((g, i) => g.equals(s.testOutputs[i]!)))) continue;
     solutions.push(s);
