@@ -4,10 +4,11 @@
 // shards run with other settings are named and nothing is written; predictions files of solve
 // shards merge too.
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { comparable, linesOf } from './support/results-lines.ts';
 
 const root = new URL('../', import.meta.url).pathname;
 const demo = join(root, 'tasks-demo');
@@ -23,23 +24,7 @@ const taskIds = readdirSync(demo)
 const pithy = (args: readonly string[], env: Record<string, string> = {}) =>
   spawnSync(process.execPath, [cli, ...args], { cwd: root, encoding: 'utf8', env: { ...process.env, ...env } });
 
-type Line = Record<string, unknown> & { task: string; statistics?: Record<string, unknown> };
-const linesOf = (path: string): Line[] =>
-  readFileSync(path, 'utf8')
-    .trimEnd()
-    .split('\n')
-    .map((l) => JSON.parse(l) as Line);
 
-/** Lines keyed by task, without what depends on timing or on the shard. */
-function comparable(lines: readonly Line[]): Record<string, unknown> {
-  const out: Record<string, unknown> = {};
-  for (const line of lines) {
-    const { seconds: _s, shard: _shard, statistics, ...rest } = line;
-    const { secondsToFirstSolution: _f, ...counts } = statistics ?? {};
-    out[line.task] = { ...rest, statistics: counts };
-  }
-  return out;
-}
 
 const shardFile = (i: number) => join(folder, `shard-${i}.jsonl`);
 const single = join(folder, 'single.jsonl');

@@ -11,6 +11,7 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { comparable, linesOf } from './support/results-lines.ts';
 
 const root = new URL('../', import.meta.url).pathname;
 const demo = join(root, 'tasks-demo');
@@ -21,22 +22,7 @@ if (!enabled) {
 
 const flags = '--attempts 1 --max-candidates 3000 --time-limit 1000';
 
-type Line = Record<string, unknown> & { task: string; statistics?: Record<string, unknown> };
-const linesOf = (path: string): Line[] =>
-  readFileSync(path, 'utf8')
-    .trimEnd()
-    .split('\n')
-    .map((l) => JSON.parse(l) as Line);
 
-function comparable(lines: readonly Line[]): Record<string, unknown> {
-  const out: Record<string, unknown> = {};
-  for (const line of lines) {
-    const { seconds: _s, shard: _shard, statistics, ...rest } = line;
-    const { secondsToFirstSolution: _f, ...counts } = statistics ?? {};
-    out[line.task] = { ...rest, statistics: counts };
-  }
-  return out;
-}
 
 describe.runIf(enabled)('a 4-way Slurm array over the demo tasks, then the merge job', () => {
   // .ci/run passes the folder so that its own trap can stop the daemons too.
