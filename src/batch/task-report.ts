@@ -17,6 +17,8 @@ export interface ReportedSolution {
   readonly bits: number;
   /** True when the search met it by working back from the outputs through inverses. */
   readonly throughGoal?: boolean;
+  /** True when it applies a table learned from a grid the search made (not the input). */
+  readonly throughIntermediateTable?: boolean;
 }
 
 export interface TaskReport {

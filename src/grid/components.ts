@@ -64,14 +64,6 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
     queue[tail++] = start;
     seen[start] = 1;
     let top = height, left = width, bottom = -1, right = -1;
-    // Visits neighbour n: joins the object when unseen, not background and (one colour) the same colour.
-    const visit = (n: number): void => {
-      if (seen[n]) return;
-      const v = cells[n]!;
-      if (v === background || (!multicolour && v !== colour)) return;
-      seen[n] = 1;
-      queue[tail++] = n;
-    };
     while (head < tail) {
       const index = queue[head++]!;
       const r = (index / width) | 0;
@@ -84,15 +76,16 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
       const down = r < height - 1;
       const leftOpen = c > 0;
       const rightOpen = c < width - 1;
-      if (up) visit(index - width);
-      if (down) visit(index + width);
-      if (leftOpen) visit(index - 1);
-      if (rightOpen) visit(index + 1);
+      // A closure per object would cost an allocation (and a name helper under tsx) each time.
+      if (up) tail = join(index - width, cells, seen, queue, tail, background, multicolour, colour);
+      if (down) tail = join(index + width, cells, seen, queue, tail, background, multicolour, colour);
+      if (leftOpen) tail = join(index - 1, cells, seen, queue, tail, background, multicolour, colour);
+      if (rightOpen) tail = join(index + 1, cells, seen, queue, tail, background, multicolour, colour);
       if (diagonal) {
-        if (up && leftOpen) visit(index - width - 1);
-        if (up && rightOpen) visit(index - width + 1);
-        if (down && leftOpen) visit(index + width - 1);
-        if (down && rightOpen) visit(index + width + 1);
+        if (up && leftOpen) tail = join(index - width - 1, cells, seen, queue, tail, background, multicolour, colour);
+        if (up && rightOpen) tail = join(index - width + 1, cells, seen, queue, tail, background, multicolour, colour);
+        if (down && leftOpen) tail = join(index + width - 1, cells, seen, queue, tail, background, multicolour, colour);
+        if (down && rightOpen) tail = join(index + width + 1, cells, seen, queue, tail, background, multicolour, colour);
       }
     }
     const h = bottom - top + 1;
@@ -107,6 +100,19 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
     objects.push(new GridObject(top, left, new Grid(h, w, shape)));
   }
   return objects;
+}
+
+/**
+ * Visits neighbour n of a growing object: it joins (queued, marked seen) when unseen, not
+ * background and, for one-colour objects, of the object's colour. Returns the queue's new end.
+ */
+function join(n: number, cells: Uint8Array, seen: Uint8Array, queue: Int32Array, tail: number, background: number, multicolour: boolean, colour: number): number {
+  if (seen[n]) return tail;
+  const v = cells[n]!;
+  if (v === background || (!multicolour && v !== colour)) return tail;
+  seen[n] = 1;
+  queue[tail] = n;
+  return tail + 1;
 }
 
 /** Counts of each colour 0–9, computed once per grid; callers must not change the array. */

@@ -19,6 +19,7 @@ import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, type Goal } from './goals.ts';
+import { IntermediateTables } from './intermediate-tables.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
 import { TypeTable } from './type-table.ts';
@@ -40,6 +41,8 @@ export interface EnumerationLimits {
   readonly pruning: boolean;
   /** Most bits the calls of one goal may cost (0: no goals; see goals.ts). */
   readonly goalBits: number;
+  /** Kept grids to learn tables from on their way to the outputs (0: none; see intermediate-tables.ts). */
+  readonly intermediateGrids: number;
 }
 
 export interface EnumerationStatistics {
@@ -59,6 +62,10 @@ export interface EnumerationStatistics {
   goals: number;
   /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls). */
   goalSolutions: number;
+  /** Kept grids that tables were learned from on their way to the outputs. */
+  intermediateGrids: number;
+  /** Solutions applying a table learned from a kept grid other than the input. */
+  intermediateSolutions: number;
   /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
   sizeRejected: number;
   /** Bytes the search held when it stopped: kept values (cells counted) and memoised analyses. */
@@ -73,9 +80,16 @@ export interface EnumerationOutcome {
   readonly statistics: EnumerationStatistics;
   /** The solutions found by meeting a goal. */
   readonly throughGoals: ReadonlySet<Candidate>;
+  /** The solutions applying a table learned from a kept grid other than the input. */
+  readonly throughIntermediateTables: ReadonlySet<Candidate>;
   /** The solutions that break the output size the demonstrations settle (last-resort attempts, listed last). */
   readonly sizeFallbacks: ReadonlySet<Candidate>;
 }
+
+/** Costliest kept grid (bits) that tables are learned from: a dear one plus a table seldom beats the rest. */
+const INTERMEDIATE_MAXIMUM_COST = 16;
+/** Cells learned from per task (over all values of all kept grids tried): a few seconds' work at most. */
+const INTERMEDIATE_MAXIMUM_CELLS = 12_000;
 
 class Stop extends Error {
   constructor(readonly reason: StopReason) {
@@ -94,7 +108,7 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, sizeRejected: 0, bytesHeld: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
@@ -104,6 +118,8 @@ export class Enumerator {
   /** Solutions met through goals, held until every cheaper cost level is done (or the budget ends). */
   private readonly pending: Candidate[] = [];
   private readonly throughGoals = new Set<Candidate>();
+  private readonly throughIntermediateTables = new Set<Candidate>();
+  private readonly intermediate: IntermediateTables | undefined;
   /** Programs that fit the demonstrations but break the settled output size: attempts only when nothing better comes. */
   private readonly sizeFallbacks: Candidate[] = [];
   private readonly goals: GoalTable | undefined;
@@ -157,6 +173,7 @@ export class Enumerator {
     this.predictedSizes = predictOutputSizes(pairs, inputs.slice(this.trainCount));
     this.goals = limits.goalBits > 0 ? this.buildGoals(limits.goalBits) : undefined;
     this.statistics.goals = this.goals?.count ?? 0;
+    this.intermediate = limits.intermediateGrids > 0 ? new IntermediateTables(outputs, productions, { maxGrids: limits.intermediateGrids, maxCost: INTERMEDIATE_MAXIMUM_COST, maxCells: INTERMEDIATE_MAXIMUM_CELLS }) : undefined;
   }
 
   /** Goals from the outputs through every invertible production, with constant other arguments. */
@@ -199,9 +216,10 @@ export class Enumerator {
       reason = error.reason;
     }
     if (reason !== 'solved') {
-      // The budget ended (or every cost was tried): what goals met is the best found.
+      // The budget ended (or every cost was tried): what goals and intermediate tables met is
+      // the best found, within the cost limit and the extra bits a first solution allows.
       try {
-        this.acceptPending(Infinity);
+        this.acceptPending(Math.min(this.limits.maxCost, this.firstSolutionCost + this.limits.extraBits));
       } catch (error) {
         if (!(error instanceof Stop)) throw error;
       }
@@ -209,7 +227,15 @@ export class Enumerator {
     this.addSizeFallbacks();
     if (this.solutions.length > 0) reason = 'solved';
     this.statistics.bytesHeld = this.bytesHeld;
-    return { solutions: this.solutions, reason, statistics: this.statistics, throughGoals: this.throughGoals, sizeFallbacks: new Set(this.sizeFallbacks) };
+    this.statistics.intermediateGrids = this.intermediate?.tried ?? 0;
+    return {
+      solutions: this.solutions,
+      reason,
+      statistics: this.statistics,
+      throughGoals: this.throughGoals,
+      throughIntermediateTables: this.throughIntermediateTables,
+      sizeFallbacks: new Set(this.sizeFallbacks),
+    };
   }
 
   /** Every production whose bits and cheapest arguments fit in this cost. */
@@ -317,6 +343,28 @@ export class Enumerator {
     if (typeId === this.gridType) {
       this.checkSolution(candidate);
       if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
+      // The input's own tables are constants of the search already.
+      if (production && this.intermediate?.open) this.learnTables(candidate);
+    }
+  }
+
+  /** Wraps a kept grid in each table learned from its values to the outputs; keeps those that reproduce them as pending solutions. */
+  private learnTables(found: Candidate): void {
+    for (const table of this.intermediate!.learn(found.values, found.cost)) {
+      const value = literalValue(table.literal);
+      const leaf = this.leaf(table.literal.type, table.bits, new Array<unknown>(this.examples).fill(value), { kind: 'literal', literal: table.literal });
+      const values = new Array<unknown>(this.examples);
+      let fits = true;
+      for (let i = 0; i < this.examples && fits; i++) {
+        const v = applyOperation(table.production.primitive, [found.values[i], value]);
+        if (v === FAILURE || (i < this.trainCount && !(v as Grid).equals(this.outputs[i]!))) fits = false;
+        else values[i] = v;
+      }
+      if (!fits) continue;
+      const cost = found.cost + table.production.bits + table.bits;
+      const candidate: Candidate = { type: 'Grid', typeId: this.gridType, cost, values, production: table.production, arguments: [found, leaf], leaf: undefined, signature: undefined };
+      this.throughIntermediateTables.add(candidate);
+      this.pending.push(candidate);
     }
   }
 
@@ -342,7 +390,7 @@ export class Enumerator {
     this.pending.push(current);
   }
 
-  /** Takes pending goal solutions of at most this cost, cheapest first. */
+  /** Takes pending solutions (met through goals or intermediate tables) of at most this cost, cheapest first. */
   private acceptPending(upTo: number): void {
     if (this.pending.length === 0) return;
     this.pending.sort((a, b) => a.cost - b.cost);
@@ -358,9 +406,10 @@ export class Enumerator {
   }
 
   /** Takes a program that fits the demonstrations as an attempt, unless it breaks the settled output size or repeats an attempt. */
-  private accept(candidate: Candidate, throughGoal: boolean): void {
+  private accept(candidate: Candidate, pending: boolean): void {
     const values = candidate.values;
-    if (throughGoal) this.throughGoals.add(candidate);
+    // Pending solutions were met through a goal or a table learned from a kept grid.
+    if (pending && !this.throughIntermediateTables.has(candidate)) this.throughGoals.add(candidate);
     for (let i = this.trainCount; i < this.examples; i++) {
       if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
         // The demonstrations can agree on a size by chance: kept aside, used only if too few
@@ -374,7 +423,8 @@ export class Enumerator {
     // Attempts must differ on the test inputs.
     if (this.solutions.some((s) => sameTestOutputs(s.values, values, this.trainCount))) return;
     this.solutions.push(candidate);
-    if (throughGoal) this.statistics.goalSolutions++;
+    if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
+    if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;
     if (this.solutions.length === 1 && this.sizeFallbacks.length === 0) this.firstFound(candidate);
     if (this.solutions.length >= this.limits.attempts) throw new Stop('solved');
   }
@@ -395,6 +445,7 @@ export class Enumerator {
       if (this.solutions.some((s) => sameTestOutputs(s.values, candidate.values, this.trainCount))) continue;
       this.solutions.push(candidate);
       if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
+      if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;
     }
   }
 

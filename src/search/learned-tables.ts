@@ -88,6 +88,13 @@ function featureKey(f: CellFeature): string {
   return featureTakesColour(f.name) ? `${f.name}#${f.colour}` : f.name;
 }
 
+/** The key of cell i under features whose values are `columns` (the first feature the lowest digit). */
+function packedKeyAt(columns: readonly Uint8Array[], i: number): number {
+  let key = 0;
+  for (let f = columns.length - 1; f >= 0; f--) key = key * 16 + columns[f]![i]!;
+  return key;
+}
+
 /** Per grid, the values of each feature on its cells, computed once. */
 class FeatureCache {
   private readonly values = new Map<Grid, Map<string, Uint8Array>>();
@@ -99,16 +106,6 @@ class FeatureCache {
     let v = forGrid.get(key);
     if (!v) forGrid.set(key, (v = featureOfCells(g, f)));
     return v;
-  }
-
-  /** Packed keys (colour first) of every cell of the grid under the features. */
-  keys(g: Grid, features: readonly CellFeature[]): Float64Array {
-    const keys = new Float64Array(g.cells.length);
-    for (let f = features.length - 1; f >= 0; f--) {
-      const values = this.of(g, features[f]!);
-      for (let i = 0; i < keys.length; i++) keys[i] = keys[i]! * 16 + values[i]!;
-    }
-    return keys;
   }
 }
 
@@ -129,21 +126,24 @@ function unpackKey(packed: number, count: number): number[] {
  */
 export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
   if (!sameShapedPairs(puzzle) || features[0]?.name !== 'colour') return undefined;
+  // Keys are packed cell by cell (no array of keys per grid) so that a conflict, the common
+  // outcome, ends the work at the first cell that shows it.
   const table = new Map<number, number>();
   for (const { input, output } of puzzle.train) {
-    const keys = cache.keys(input, features);
+    const columns = features.map((f) => cache.of(input, f));
     const out = output.cells;
-    for (let i = 0; i < keys.length; i++) {
-      const known = table.get(keys[i]!);
+    for (let i = 0; i < out.length; i++) {
+      const key = packedKeyAt(columns, i);
+      const known = table.get(key);
       if (known === undefined) {
         if (table.size >= MAXIMUM_ENTRIES) return undefined;
-        table.set(keys[i]!, out[i]!);
+        table.set(key, out[i]!);
       } else if (known !== out[i]) return undefined;
     }
   }
   for (const g of puzzle.testInputs) {
-    const keys = cache.keys(g, features);
-    for (let i = 0; i < keys.length; i++) if (!table.has(keys[i]!)) return undefined;
+    const columns = features.map((f) => cache.of(g, f));
+    for (let i = 0; i < g.cells.length; i++) if (!table.has(packedKeyAt(columns, i))) return undefined;
   }
   const entries: CellRuleEntry[] = [];
   let changes = false;

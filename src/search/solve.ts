@@ -31,6 +31,8 @@ export interface SolveOptions {
   readonly extraBits?: number;
   /** Most bits of calls worked back from the outputs through inverses (default 12; 0 turns goals off). */
   readonly goalBits?: number;
+  /** Kept grids (cheapest first) to learn tables from on their way to the outputs (default 24; 0 turns it off). */
+  readonly intermediateGrids?: number;
   readonly library?: Library;
 }
 
@@ -43,6 +45,8 @@ export interface Solution {
   readonly testOutputs: readonly Grid[];
   /** True when the search met it by working back from the outputs (a goal, see src/search/goals.ts). */
   readonly throughGoal: boolean;
+  /** True when it applies a table learned from a grid the search made, not the input (src/search/intermediate-tables.ts). */
+  readonly throughIntermediateTable: boolean;
 }
 
 export interface SolveResult {
@@ -89,16 +93,17 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     extraBits,
     pruning: options.pruning ?? true,
     goalBits: options.goalBits ?? 12,
+    intermediateGrids: options.intermediateGrids ?? 24,
   }, INPUT_NAME);
   const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c) };
+    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c) };
     if (outcome.sizeFallbacks.has(c)) lastResort.add(solution);
     return solution;
   });
   for (const t of tables) {
-    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false });
+    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false });
   }
   const solutions: Solution[] = [];
   // By bits, except that programs breaking the settled output size stay behind all others.
