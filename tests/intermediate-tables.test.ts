@@ -2,13 +2,19 @@
  * Tables learned from grids the search made (src/search/intermediate-tables.ts): a rule that
  * crops first and then recolours cell by cell is found as a table applied to the crop; a test
  * input whose cells hold a key the demonstrations never showed gets no such program (the table
- * never guesses); with the mechanism off, no solution claims it.
+ * never guesses); with the mechanism off, no solution claims it; the README's example of it
+ * reproduces the task.
  *
  * The task is invented for this test (a harbour chart: 1 buoys, 2 the wake a buoy leaves to its
  * right, 5 a mooring), worked out by hand: crop to the drawn cells, then every empty cell
  * whose left neighbour is a buoy becomes wake.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { defaultLibrary } from '../dsl/index.ts';
+import { checkProgram } from '../src/language/checker.ts';
+import { runProgram } from '../src/language/interpreter.ts';
+import { parseProgram } from '../src/language/parser.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { solvePuzzle } from '../src/search/solve.ts';
 import type { Puzzle } from '../src/tasks/task.ts';
@@ -65,5 +71,18 @@ describe('tables learned from a grid the search made', () => {
     const result = solvePuzzle(puzzle, { ...options, intermediateGrids: 0 });
     expect(result.solutions.every((s) => !s.throughIntermediateTable)).toBe(true);
     expect(result.statistics.intermediateGrids).toBe(0);
+  });
+});
+
+describe("the README's example of a table learned from a grid the search made", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const block = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)].map((m) => m[1]!).find((b) => b.includes('crop_to_content(input)') && b.includes('cell_rule['));
+
+  it('is there, and reproduces every demonstration of the wake task and its test output', () => {
+    expect(block).toBeDefined();
+    const program = parseProgram(block!, 'README.md');
+    checkProgram(program, defaultLibrary);
+    for (const { input, output } of train) expect((runProgram(program, input, defaultLibrary).output as Grid).equals(output)).toBe(true);
+    expect((runProgram(program, testInput, defaultLibrary).output as Grid).equals(expected)).toBe(true);
   });
 });
