@@ -87,9 +87,9 @@ export interface EnumerationOutcome {
 }
 
 /** Costliest kept grid (bits) that tables are learned from: a dear one plus a table seldom beats the rest. */
-const INTERMEDIATE_MAXIMUM_COST = 16;
-/** Cells learned from per task (over all values of all kept grids tried): a few seconds' work at most. */
-const INTERMEDIATE_MAXIMUM_CELLS = 12_000;
+const INTERMEDIATE_MAXIMUM_COST = 22;
+/** Cells learned from per task (over all values of all kept grids tried): a second or two of work at most. */
+const INTERMEDIATE_MAXIMUM_CELLS = 100_000;
 
 class Stop extends Error {
   constructor(readonly reason: StopReason) {

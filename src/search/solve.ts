@@ -31,7 +31,7 @@ export interface SolveOptions {
   readonly extraBits?: number;
   /** Most bits of calls worked back from the outputs through inverses (default 12; 0 turns goals off). */
   readonly goalBits?: number;
-  /** Kept grids (cheapest first) to learn tables from on their way to the outputs (default 24; 0 turns it off). */
+  /** Kept grids (cheapest first) to learn tables from on their way to the outputs (default 200; 0 turns it off). */
   readonly intermediateGrids?: number;
   readonly library?: Library;
 }
@@ -93,7 +93,7 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     extraBits,
     pruning: options.pruning ?? true,
     goalBits: options.goalBits ?? 12,
-    intermediateGrids: options.intermediateGrids ?? 24,
+    intermediateGrids: options.intermediateGrids ?? 200,
   }, INPUT_NAME);
   const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
