@@ -10,14 +10,19 @@
  * program up to BITS, no candidate cap) with observational-equivalence pruning on and then
  * off, so the two are compared at the same depth rather than in the same time.
  *
+ * With `--from-results FILE` the sample is instead the tasks of an eval results file, all of
+ * them or (`--which`) only those it solved or did not solve, to see what a change does to each
+ * side of an earlier run.
+ *
  *   npm run bench:speed -- [--tasks N] [--candidates N] [--dataset DIR] [--programs FILE] [--pruning-at BITS]
- *                          [--no-goals] [--no-intermediate-tables]
+ *                          [--no-goals] [--no-intermediate-tables] [--from-results FILE [--which solved|unsolved]]
  */
 import { existsSync, writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
+import { readResults } from '../batch/results-file.ts';
 import { positiveNumber } from '../cli/solve-options.ts';
 import { solvePuzzle } from '../search/solve.ts';
 import { readTaskFile, taskFiles } from '../tasks/read-task.ts';
@@ -44,15 +49,18 @@ function main(): void {
     .option('--programs <file>', 'write each task\'s programs as JSON lines')
     .option('--no-goals', 'switch off working back from the outputs (goals)')
     .option('--no-intermediate-tables', 'switch off learning tables from the grids the search makes')
+    .option('--from-results <file>', 'take the sample from an eval results file instead (its task files, in its order)')
+    .option('--which <part>', 'with --from-results: all, solved or unsolved tasks', 'all')
     .option('--pruning-at <bits>', 'also compare pruning on and off, running every task to this cost level', positiveNumber('--pruning-at', true))
     .parse(process.argv);
-  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number; goals: boolean; intermediateTables: boolean }>();
+  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number; goals: boolean; intermediateTables: boolean; fromResults?: string; which: string }>();
   if (!existsSync(options.dataset)) {
     process.stderr.write(`${options.dataset}: not found; the speed probe needs the public training set there (see ../shared/datasets/arc-agi-1-training/SOURCE.md)\n`);
     process.exitCode = 2;
     return;
   }
-  const files = spreadSample(taskFiles(options.dataset), options.tasks);
+  const files = options.fromResults ? filesFromResults(options.fromResults, options.which) : spreadSample(taskFiles(options.dataset), options.tasks);
+  if (!files) return;
   let candidates = 0;
   let cpuSeconds = 0;
   let pruned = 0;
@@ -84,7 +92,7 @@ function main(): void {
   if (options.programs) writeFileSync(options.programs, lines.join('\n') + '\n');
   process.stdout.write(
     [
-      `tasks: ${files.length} spread over ${options.dataset}; cap ${options.candidates} candidates per task; one process; ${cpus()[0]?.model ?? 'unknown CPU'}`,
+      `tasks: ${files.length} ${options.fromResults ? `(${options.which}) from ${options.fromResults}` : `spread over ${options.dataset}`}; cap ${options.candidates} candidates per task; one process; ${cpus()[0]?.model ?? 'unknown CPU'}`,
       `candidates evaluated: ${candidates}`,
       `CPU seconds: ${cpuSeconds.toFixed(2)}`,
       `candidate evaluations per CPU second: ${Math.round(candidates / cpuSeconds)}`,
@@ -93,6 +101,35 @@ function main(): void {
     ].join('\n') + '\n',
   );
   if (options.pruningAt !== undefined) comparePruning(files, options.pruningAt);
+}
+
+/** The task files of an eval results file (all, solved or unsolved), or undefined after an error message. */
+function filesFromResults(path: string, which: string): string[] | undefined {
+  if (!['all', 'solved', 'unsolved'].includes(which)) {
+    process.stderr.write(`--which must be all, solved or unsolved, got '${which}'\n`);
+    process.exitCode = 2;
+    return undefined;
+  }
+  if (!existsSync(path)) {
+    process.stderr.write(`${path}: not found (an eval results file was expected)\n`);
+    process.exitCode = 2;
+    return undefined;
+  }
+  let read: ReturnType<typeof readResults>;
+  try {
+    read = readResults(path);
+  } catch (error) {
+    process.stderr.write(`${error instanceof Error ? error.message : String(error)}\n`);
+    process.exitCode = 2;
+    return undefined;
+  }
+  const lines = read.filter((l) => l.solved !== undefined && (which === 'all' || l.solved === (which === 'solved')));
+  if (lines.length === 0) {
+    process.stderr.write(`${path}: no ${which === 'all' ? '' : which + ' '}tasks with a score (an eval results file was expected)\n`);
+    process.exitCode = 2;
+    return undefined;
+  }
+  return lines.map((l) => l.file);
 }
 
 /** Every task to the same cost level, pruning on then off: candidates, kept, CPU seconds. */
