@@ -217,9 +217,10 @@ export class Enumerator {
     }
     if (reason !== 'solved') {
       // The budget ended (or every cost was tried): what goals and intermediate tables met is
-      // the best found, within the cost limit and the extra bits a first solution allows.
+      // the best found within the cost limit (also as later attempts beyond a first solution's
+      // extra bits: found already, they cost nothing more).
       try {
-        this.acceptPending(Math.min(this.limits.maxCost, this.firstSolutionCost + this.limits.extraBits));
+        this.acceptPending(this.limits.maxCost);
       } catch (error) {
         if (!(error instanceof Stop)) throw error;
       }
@@ -360,8 +361,8 @@ export class Enumerator {
         if (v === FAILURE || (i < this.trainCount && !(v as Grid).equals(this.outputs[i]!))) fits = false;
         else values[i] = v;
       }
-      if (!fits) continue;
       const cost = found.cost + table.production.bits + table.bits;
+      if (!fits || cost > this.limits.maxCost) continue;
       const candidate: Candidate = { type: 'Grid', typeId: this.gridType, cost, values, production: table.production, arguments: [found, leaf], leaf: undefined, signature: undefined };
       this.throughIntermediateTables.add(candidate);
       this.pending.push(candidate);
