@@ -11,6 +11,7 @@ import { MAXIMUM_NESTING } from '../src/language/parser.ts';
 import { printProgram } from '../src/language/printer.ts';
 import { loadProgramText, ProgramFileError } from '../src/cli/program-file.ts';
 import { programArbitrary } from './support/random-program.ts';
+import { mutate, textMutation } from './support/text-mutations.ts';
 
 const FILE = 'fuzz/dock.pithy';
 const demo = new URL('../tasks-demo/', import.meta.url).pathname;
@@ -64,16 +65,11 @@ describe('fuzzing the program reader', () => {
 
   it('valid programs (the demo references and random ones) with characters replaced, inserted or deleted', () => {
     const source = fc.oneof(fc.constantFrom(...demoPrograms), programArbitrary(defaultLibrary).map(printProgram));
-    const mutation = fc.tuple(fc.constantFrom('replace', 'insert', 'delete'), fc.double({ min: 0, max: 1, noNaN: true }), fc.constantFrom(...'()_,=#0123456789-> \n\tabcxyz{}'));
+    const mutation = textMutation('()_,=#0123456789-> \n\tabcxyz{}');
     const counts = tally();
     fc.assert(
       fc.property(source, fc.array(mutation, { minLength: 1, maxLength: 3 }), (text, mutations) => {
-        let t = text;
-        for (const [kind, share, character] of mutations) {
-          const at = Math.floor(share * t.length);
-          t = kind === 'insert' ? t.slice(0, at) + character + t.slice(at) : kind === 'delete' ? t.slice(0, at) + t.slice(at + 1) : t.slice(0, at) + character + t.slice(at + 1);
-        }
-        counts[outcome(t)]++;
+        counts[outcome(mutate(text, mutations))]++;
       }),
       { numRuns: 300 },
     );

@@ -10,6 +10,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { jsonErrorIndex } from '../src/tasks/json-error-place.ts';
 import { parseTask, readTaskFile, TaskFileError } from '../src/tasks/read-task.ts';
 import type { Task } from '../src/tasks/task.ts';
+import { mutate, textMutation } from './support/text-mutations.ts';
 
 const FILE = 'fuzz/quay.json';
 const demo = new URL('../tasks-demo/', import.meta.url).pathname;
@@ -123,16 +124,11 @@ describe('fuzzing the task reader', () => {
   });
 
   it('valid task files with characters replaced, inserted or deleted', () => {
-    const mutation = fc.tuple(fc.constantFrom('replace', 'insert', 'delete'), fc.double({ min: 0, max: 1, noNaN: true }), fc.constantFrom(...'{}[],:"0123456789 -.eatn\\x\n'));
+    const mutation = textMutation('{}[],:"0123456789 -.eatn\\x\n');
     const counts = tally();
     fc.assert(
       fc.property(fc.constantFrom(...demoTexts), fc.array(mutation, { minLength: 1, maxLength: 4 }), (text, mutations) => {
-        let t = text;
-        for (const [kind, share, character] of mutations) {
-          const at = Math.floor(share * t.length);
-          t = kind === 'insert' ? t.slice(0, at) + character + t.slice(at) : kind === 'delete' ? t.slice(0, at) + t.slice(at + 1) : t.slice(0, at) + character + t.slice(at + 1);
-        }
-        counts[outcome(t)]++;
+        counts[outcome(mutate(text, mutations))]++;
       }),
       { numRuns: 1000 },
     );
