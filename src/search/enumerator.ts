@@ -18,7 +18,7 @@ import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
-import { GoalTable, type Goal } from './goals.ts';
+import { GoalTable, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
@@ -352,27 +352,30 @@ export class Enumerator {
   /** Wraps a kept grid in each table learned from its values to the outputs; keeps those that reproduce them as pending solutions. */
   private learnTables(found: Candidate): void {
     for (const table of this.intermediate!.learn(found.values, found.cost)) {
+      if (found.cost + table.production.bits + table.bits > this.limits.maxCost) continue;
       const value = literalValue(table.literal);
       const leaf = this.leaf(table.literal.type, table.bits, new Array<unknown>(this.examples).fill(value), { kind: 'literal', literal: table.literal });
-      const values = new Array<unknown>(this.examples);
-      let fits = true;
-      for (let i = 0; i < this.examples && fits; i++) {
-        const v = applyOperation(table.production.primitive, [found.values[i], value]);
-        if (v === FAILURE || (i < this.trainCount && !(v as Grid).equals(this.outputs[i]!))) fits = false;
-        else values[i] = v;
-      }
-      const cost = found.cost + table.production.bits + table.bits;
-      if (!fits || cost > this.limits.maxCost) continue;
-      const candidate: Candidate = { type: 'Grid', typeId: this.gridType, cost, values, production: table.production, arguments: [found, leaf], leaf: undefined, signature: undefined };
+      const candidate = this.wrap(found, [{ production: table.production, rest: [leaf], bits: table.production.bits }]);
+      if (!candidate) continue;
       this.throughIntermediateTables.add(candidate);
       this.pending.push(candidate);
     }
   }
 
-  /** Wraps a candidate that equals a goal's wanted grids in the goal's calls; keeps the result as a pending solution. */
+  /** Keeps a candidate that meets a goal, wrapped in the goal's calls, as a pending solution. */
   private meetGoal(found: Candidate, goal: Goal): void {
+    const candidate = this.wrap(found, goal.steps);
+    if (candidate) this.pending.push(candidate);
+  }
+
+  /**
+   * A kept candidate wrapped in calls (innermost first; each call's other arguments are constant
+   * leaves), when every call runs on every input and the result equals every demonstration
+   * output; otherwise undefined.
+   */
+  private wrap(found: Candidate, steps: readonly GoalStep[]): Candidate | undefined {
     let current = found;
-    for (const step of goal.steps) {
+    for (const step of steps) {
       const operation = step.production.primitive;
       const values = new Array<unknown>(this.examples);
       const call = new Array<unknown>(1 + step.rest.length);
@@ -382,13 +385,13 @@ export class Enumerator {
         call[0] = current.values[i];
         for (let j = 0; j < step.rest.length; j++) call[j + 1] = step.rest[j]!.values[i];
         const v = applyOperation(operation, call);
-        if (v === FAILURE) return;
+        if (v === FAILURE) return undefined;
         values[i] = v;
       }
       current = { type: 'Grid', typeId: this.gridType, cost, values, production: step.production, arguments: [current, ...step.rest], leaf: undefined, signature: undefined };
     }
-    for (let i = 0; i < this.trainCount; i++) if (!(current.values[i] as Grid).equals(this.outputs[i]!)) return;
-    this.pending.push(current);
+    for (let i = 0; i < this.trainCount; i++) if (!(current.values[i] as Grid).equals(this.outputs[i]!)) return undefined;
+    return current;
   }
 
   /** Takes pending solutions (met through goals or intermediate tables) of at most this cost, cheapest first. */
