@@ -39,14 +39,6 @@ export interface ObjectRuleEntry {
   readonly outcome: ObjectOutcome;
 }
 
-export function isObjectGrouping(text: string): text is ObjectGrouping {
-  return (OBJECT_GROUPINGS as readonly string[]).includes(text);
-}
-
-export function isObjectProperty(text: string): text is ObjectProperty {
-  return (OBJECT_PROPERTIES as readonly string[]).includes(text);
-}
-
 /** What kind of key a property has. */
 export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 'yes or no' | 'shape' {
   if (property === 'colour') return 'colour';
