@@ -3,6 +3,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { applyCellRule, CellRule, EDGE, featureOfCells, type CellFeature, type CellRuleEntry } from '../src/grid/cell-rule-table.ts';
 import { Grid } from '../src/grid/grid.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 import { cellRuleArbitrary } from './support/random-table.ts';
 
 const G = Grid.fromRows;
@@ -39,6 +41,46 @@ describe('featureOfCells: enclosed and on_border', () => {
     const g = G([[2, 2, 2, 0], [2, 0, 2, 0], [2, 2, 2, 0]]);
     expect(Array.from(featureOfCells(g, { name: 'enclosed' }))).toEqual([0, 0, 0, 0, 0, 1, 0, 0, 0, 0, 0, 0]);
     expect(Array.from(featureOfCells(g, { name: 'on_border' }))).toEqual([1, 1, 1, 1, 1, 0, 0, 1, 1, 1, 1, 1]);
+  });
+});
+
+describe('featureOfCells: the sees_ features', () => {
+  it('gives the first colour other than the background met looking each way, by hand', () => {
+    //   0 3 0
+    //   0 0 0
+    //   4 0 3
+    // background 0; the cell itself is not counted
+    const g = G([[0, 3, 0], [0, 0, 0], [4, 0, 3]]);
+    const look = (name: CellFeature['name']) => Array.from(featureOfCells(g, { name }));
+    expect(look('sees_above')).toEqual([EDGE, EDGE, EDGE, EDGE, 3, EDGE, EDGE, 3, EDGE]);
+    expect(look('sees_below')).toEqual([4, EDGE, 3, 4, EDGE, 3, EDGE, EDGE, EDGE]);
+    expect(look('sees_left')).toEqual([EDGE, EDGE, 3, EDGE, EDGE, EDGE, EDGE, 4, 4]);
+    expect(look('sees_right')).toEqual([3, EDGE, EDGE, EDGE, EDGE, EDGE, 3, 3, EDGE]);
+  });
+
+  it('agrees with a step-by-step walk on random grids (law)', () => {
+    const steps = { sees_above: [-1, 0], sees_below: [1, 0], sees_left: [0, -1], sees_right: [0, 1] } as const;
+    fc.assert(
+      fc.property(arbitraryGrid(), fc.constantFrom(...(Object.keys(steps) as (keyof typeof steps)[])), (g, name) => {
+        const background = backgroundOf(g);
+        const [dr, dc] = steps[name];
+        const got = featureOfCells(g, { name });
+        for (let r = 0; r < g.height; r++) {
+          for (let c = 0; c < g.width; c++) {
+            let seen = EDGE;
+            for (let nr = r + dr, nc = c + dc; nr >= 0 && nr < g.height && nc >= 0 && nc < g.width; nr += dr, nc += dc) {
+              const v = g.cells[nr * g.width + nc]!;
+              if (v !== background) {
+                seen = v;
+                break;
+              }
+            }
+            if (got[r * g.width + c] !== seen) return false;
+          }
+        }
+        return true;
+      }),
+    );
   });
 });
 

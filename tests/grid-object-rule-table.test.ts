@@ -32,6 +32,45 @@ describe('objectKeys', () => {
     expect(shapePattern(objects[0]!)).toBe('xxx/x.x/xxx');
   });
 
+  it('reads the new properties of the harbour by hand: hollow, wide, tall, inside, unique, ranks', () => {
+    expect(objectKeys(harbour, boats, 'hollow')).toEqual([0, 0, 0]);
+    expect(objectKeys(harbour, boats, 'wide')).toEqual([1, 0, 0]);
+    expect(objectKeys(harbour, boats, 'tall')).toEqual([0, 1, 0]);
+    // the 3 is off the border but its neighbours are open water that reaches the edge
+    expect(objectKeys(harbour, boats, 'inside')).toEqual([0, 0, 0]);
+    expect(objectKeys(harbour, boats, 'unique_shape')).toEqual([1, 1, 1]);
+    expect(objectKeys(harbour, boats, 'unique_colour')).toEqual([1, 1, 1]);
+    // tops 0, 0, 2; lefts 0, 3, 1
+    expect(objectKeys(harbour, boats, 'top_rank')).toEqual([1, 1, 2]);
+    expect(objectKeys(harbour, boats, 'left_rank')).toEqual([1, 3, 2]);
+  });
+
+  it('tells a buoy inside a ring from one outside it, and repeated shapes and colours', () => {
+    //   0 0 0 0 0 0 0
+    //   0 5 5 5 0 4 0
+    //   0 5 4 5 0 0 0
+    //   0 5 5 5 0 0 7
+    //   0 0 0 0 0 0 0
+    const lagoon = G([
+      [0, 0, 0, 0, 0, 0, 0],
+      [0, 5, 5, 5, 0, 4, 0],
+      [0, 5, 4, 5, 0, 0, 0],
+      [0, 5, 5, 5, 0, 0, 7],
+      [0, 0, 0, 0, 0, 0, 0],
+    ]);
+    const objects = objectsOf(lagoon, 'by_colour');
+    // reading order of first cells: the ring (1,1), the buoy at (1,5), the buoy at (2,2), the 7 at (3,6)
+    expect(objects.map((o) => [o.top, o.left, o.mainColour])).toEqual([[1, 1, 5], [1, 5, 4], [2, 2, 4], [3, 6, 7]]);
+    expect(objectKeys(lagoon, objects, 'inside')).toEqual([0, 0, 1, 0]);
+    expect(objectKeys(lagoon, objects, 'hollow')).toEqual([1, 0, 0, 0]);
+    expect(objectKeys(lagoon, objects, 'unique_shape')).toEqual([1, 0, 0, 0]);
+    expect(objectKeys(lagoon, objects, 'unique_colour')).toEqual([1, 0, 0, 1]);
+    expect(objectKeys(lagoon, objects, 'wide')).toEqual([0, 0, 0, 0]);
+    // tops 1, 1, 2, 3; lefts 1, 5, 2, 6
+    expect(objectKeys(lagoon, objects, 'top_rank')).toEqual([1, 1, 2, 3]);
+    expect(objectKeys(lagoon, objects, 'left_rank')).toEqual([1, 3, 2, 4]);
+  });
+
   it('gives equal sizes one rank', () => {
     const g = G([[1, 0, 2], [0, 0, 0], [3, 3, 0]]);
     expect(objectKeys(g, objectsOf(g, 'by_colour'), 'size_rank')).toEqual([2, 2, 1]);

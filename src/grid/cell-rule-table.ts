@@ -2,7 +2,8 @@
  * Cell rules: a table that gives every output cell's colour from a few features of the input
  * cell and its neighbourhood (its colour, a neighbour's colour, how many neighbours have a
  * colour, whether its row or column holds a colour, the parity of its row or column, whether
- * it is a background cell enclosed by other colours, whether it lies on the grid's border).
+ * it is a background cell enclosed by other colours, whether it lies on the grid's border, the
+ * first colour other than the background met looking up, down, left or right from it).
  *
  * A rule is a list of features, the first always the cell's own colour, and a table from keys
  * (one value per feature) to colours. Applying it to a grid looks every cell's key up; a key the
@@ -33,6 +34,10 @@ export const CELL_FEATURE_NAMES = [
   'column_parity',
   'enclosed',
   'on_border',
+  'sees_above',
+  'sees_below',
+  'sees_left',
+  'sees_right',
 ] as const;
 export type CellFeatureName = (typeof CELL_FEATURE_NAMES)[number];
 
@@ -46,7 +51,9 @@ export interface CellFeature {
  * What values a feature takes: a colour; a colour or EDGE (a neighbour); a count of the 8
  * surrounding cells (0-8) or of the 4 edge neighbours (0-4); yes (1) or no (0); even (0) or
  * odd (1). `enclosed` is yes for a cell of the grid's background colour that cannot reach the
- * border through edge steps over background cells.
+ * border through edge steps over background cells. `sees_above` (and below, left, right) is the
+ * first cell's colour that is not the grid's background, going straight up from the cell (the
+ * cell itself not counted), or EDGE when only background lies between the cell and the border.
  */
 export type CellFeatureValues = 'colour' | 'neighbour' | 'count of 8' | 'count of 4' | 'yes or no' | 'parity';
 
@@ -146,6 +153,31 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
     case 'column_parity':
       for (let i = 0; i < cells.length; i++) out[i] = (i % width) & 1;
       return out;
+    case 'sees_above':
+    case 'sees_below':
+    case 'sees_left':
+    case 'sees_right': {
+      const [dr, dc] = OFFSETS[feature.name.slice(5)]!;
+      const background = backgroundColour(g);
+      // One sweep from the side looked at: the value at a cell is its neighbour's colour when the
+      // neighbour is not background, else the neighbour's own value.
+      const rowStart = dr > 0 ? height - 1 : 0;
+      const rowStep = dr > 0 ? -1 : 1;
+      const columnStart = dc > 0 ? width - 1 : 0;
+      const columnStep = dc > 0 ? -1 : 1;
+      for (let r = rowStart; r >= 0 && r < height; r += rowStep) {
+        for (let c = columnStart; c >= 0 && c < width; c += columnStep) {
+          const nr = r + dr;
+          const nc = c + dc;
+          if (nr < 0 || nr >= height || nc < 0 || nc >= width) out[r * width + c] = EDGE;
+          else {
+            const n = nr * width + nc;
+            out[r * width + c] = cells[n] !== background ? cells[n]! : out[n]!;
+          }
+        }
+      }
+      return out;
+    }
     case 'row_holds':
       for (let r = 0; r < height; r++) {
         let holds = 0;

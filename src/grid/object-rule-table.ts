@@ -1,7 +1,10 @@
 /**
  * Object rules: a table that says what happens to each object of a grid (it keeps its place,
- * is removed, takes one colour, or moves by an offset) from one property of the object (its
- * size, colour, height, width, size rank, whether it touches the edge, its holes, its shape).
+ * is removed, takes one colour, or moves by an offset) from one property of the object: what it
+ * is (size, colour, height, width, holes, shape, whether it is hollow, wider or taller than
+ * high), where it is (touching the edge, inside another object, the order of its top row or left
+ * column among the objects) and how it compares with the others (size rank, whether its shape or
+ * colour is the only one of its kind).
  *
  * Applying a rule cuts the grid into objects (one of four ways), looks each object's property
  * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed and
@@ -10,7 +13,7 @@
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid } from './grid.ts';
-import { holeCount } from './holes.ts';
+import { enclosedCells, holeCount } from './holes.ts';
 import { touchesEdge } from './object-properties.ts';
 import { paintObjectInto } from './paint-object.ts';
 
@@ -18,13 +21,37 @@ import { paintObjectInto } from './paint-object.ts';
 export const OBJECT_GROUPINGS = ['by_colour', 'by_colour_diagonal', 'multicolour', 'multicolour_diagonal'] as const;
 export type ObjectGrouping = (typeof OBJECT_GROUPINGS)[number];
 
-export const OBJECT_PROPERTIES = ['size', 'colour', 'height', 'width', 'size_rank', 'touches_edge', 'holes', 'shape'] as const;
+export const OBJECT_PROPERTIES = [
+  'size',
+  'colour',
+  'height',
+  'width',
+  'size_rank',
+  'touches_edge',
+  'holes',
+  'shape',
+  'hollow',
+  'wide',
+  'tall',
+  'inside',
+  'unique_shape',
+  'unique_colour',
+  'top_rank',
+  'left_rank',
+] as const;
 export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
 
 /**
- * A property's value: a whole number (size, height, width, size rank with 1 the largest, holes),
- * a colour, 1/0 for yes/no (touches_edge), or for `shape` the pattern of the object's box, rows
- * top to bottom joined by `/`, `x` for a cell of the object and `.` for one outside it.
+ * A property's value: a whole number (size, height, width, holes; a rank, 1 for the largest
+ * object or the topmost or leftmost, objects with equal values sharing a rank), a colour, 1/0
+ * for yes/no, or for `shape` the pattern of the object's box, rows top to bottom joined by `/`,
+ * `x` for a cell of the object and `.` for one outside it.
+ *
+ * The yes/no properties: `touches_edge` (a cell on the grid's border), `hollow` (at least one
+ * hole), `wide` / `tall` (its box is wider than high / higher than wide), `inside` (off the
+ * border, and no background cell beside it reaches the border through background: it lies in a
+ * region another object closes), `unique_shape` / `unique_colour` (no other object of the grid
+ * has its shape / its main colour).
  */
 export type ObjectKey = number | string;
 
@@ -41,10 +68,22 @@ export interface ObjectRuleEntry {
 
 /** What kind of key a property has. */
 export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 'yes or no' | 'shape' {
-  if (property === 'colour') return 'colour';
-  if (property === 'touches_edge') return 'yes or no';
-  if (property === 'shape') return 'shape';
-  return 'number';
+  switch (property) {
+    case 'colour':
+      return 'colour';
+    case 'shape':
+      return 'shape';
+    case 'touches_edge':
+    case 'hollow':
+    case 'wide':
+    case 'tall':
+    case 'inside':
+    case 'unique_shape':
+    case 'unique_colour':
+      return 'yes or no';
+    default:
+      return 'number';
+  }
 }
 
 /** A short code naming an outcome, equal for equal outcomes. */
@@ -102,11 +141,65 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return objects.map(holeCount);
     case 'shape':
       return objects.map(shapePattern);
-    case 'size_rank': {
-      const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
-      return objects.map((o) => sizes.indexOf(o.size) + 1);
-    }
+    case 'size_rank':
+      return ranks(objects.map((o) => -o.size));
+    case 'top_rank':
+      return ranks(objects.map((o) => o.top));
+    case 'left_rank':
+      return ranks(objects.map((o) => o.left));
+    case 'hollow':
+      return objects.map((o) => (holeCount(o) > 0 ? 1 : 0));
+    case 'wide':
+      return objects.map((o) => (o.width > o.height ? 1 : 0));
+    case 'tall':
+      return objects.map((o) => (o.height > o.width ? 1 : 0));
+    case 'inside':
+      return insideFlags(g, objects);
+    case 'unique_shape':
+      return uniqueFlags(objects.map(shapePattern));
+    case 'unique_colour':
+      return uniqueFlags(objects.map((o) => o.mainColour));
   }
+}
+
+/** Each value's rank among the distinct values, 1 for the lowest. */
+function ranks(values: readonly number[]): number[] {
+  const distinct = [...new Set(values)].sort((a, b) => a - b);
+  return values.map((v) => distinct.indexOf(v) + 1);
+}
+
+/** 1 for a value no other entry has, else 0. */
+function uniqueFlags<T>(values: readonly T[]): number[] {
+  const counts = new Map<T, number>();
+  for (const v of values) counts.set(v, (counts.get(v) ?? 0) + 1);
+  return values.map((v) => (counts.get(v) === 1 ? 1 : 0));
+}
+
+/**
+ * 1 for an object off the border none of whose edge neighbours is a background cell that
+ * reaches the border through background cells; else 0.
+ */
+function insideFlags(g: Grid, objects: readonly GridObject[]): number[] {
+  const background = backgroundColour(g);
+  const enclosed = enclosedCells(g, background);
+  const { height, width, cells } = g;
+  const open = (r: number, c: number): boolean => {
+    const i = r * width + c;
+    return cells[i] === background && enclosed[i] === 0;
+  };
+  return objects.map((o) => {
+    if (touchesEdge(o, g)) return 0;
+    const shape = o.shape;
+    for (let r = 0; r < shape.height; r++) {
+      for (let c = 0; c < shape.width; c++) {
+        if (shape.cells[r * shape.width + c] === EMPTY) continue;
+        const row = o.top + r;
+        const column = o.left + c;
+        if (open(row - 1, column) || open(row + 1, column) || open(row, column - 1) || open(row, column + 1)) return 0;
+      }
+    }
+    return 1;
+  });
 }
 
 /** A cut of a grid into objects, a property and a table from its values to outcomes. */

@@ -9,7 +9,8 @@
  * colour plus one or two of: a neighbour's colour (8 directions), how many of the 8 or 4
  * neighbours have a colour, whether the cell's row or column holds a colour (for each colour of
  * the task), the parity of its row or column, whether it is enclosed, whether it lies on the
- * border; and the colour plus all 4 or all 8 neighbours.
+ * border, the first colour other than the background met looking up, down, left or right; and the
+ * colour plus all 4 or all 8 neighbours.
  *
  * Object rules: every demonstration pair must keep its shape. For each way of cutting into
  * objects and each property, each object of a demonstration input is matched to what the output
@@ -81,6 +82,7 @@ function cellAtoms(colours: readonly number[]): CellFeature[] {
   const atoms: CellFeature[] = NEIGHBOURS_8.map((name) => ({ name }));
   for (const name of ['around', 'beside', 'row_holds', 'column_holds'] as const) for (const colour of colours) atoms.push({ name, colour });
   atoms.push({ name: 'row_parity' }, { name: 'column_parity' }, { name: 'enclosed' }, { name: 'on_border' });
+  for (const name of ['sees_above', 'sees_below', 'sees_left', 'sees_right'] as const) atoms.push({ name });
   return atoms;
 }
 

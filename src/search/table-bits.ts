@@ -6,9 +6,9 @@
  * the search charged for it (README, "Description length", gives the formula):
  *
  *   palette      1 + Σ entries 2c
- *   cell rule    γ(f + 1) + Σ extra features (4 + 4 when it names a colour)
+ *   cell rule    γ(f + 1) + Σ extra features (5 + 4 when it names a colour)
  *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c))
- *   object rule  2 + 3 + Σ entries (key value + outcome)
+ *   object rule  2 + 4 + Σ entries (key value + outcome)
  *
  * where c = max(1, ⌈log₂ k⌉) for the k distinct colours the table writes in its entries, f is
  * the number of features after the cell's own colour, and γ(n) = 2⌊log₂ n⌋ + 1 is the length of
@@ -33,12 +33,12 @@ export function colourBits(k: number): number {
   return Math.max(1, Math.ceil(Math.log2(Math.max(1, k))));
 }
 
-/** Bits for choosing a feature after the cell's own colour (16 kinds), and a colour it names. */
-export const FEATURE_CHOICE_BITS = 4;
+/** Bits for choosing a feature after the cell's own colour (20 kinds), and a colour it names. */
+export const FEATURE_CHOICE_BITS = 5;
 export const FEATURE_COLOUR_BITS = 4;
-/** Bits for an object rule's way of cutting into objects (4) and its property (8). */
+/** Bits for an object rule's way of cutting into objects (4) and its property (16). */
 export const GROUPING_BITS = 2;
-export const PROPERTY_BITS = 3;
+export const PROPERTY_BITS = 4;
 /** Bits for the kind of an object's outcome (keep, remove, recolour, move). */
 export const OUTCOME_KIND_BITS = 2;
 
