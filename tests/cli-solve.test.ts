@@ -117,7 +117,7 @@ describe('pithy eval', () => {
   it('records on every line the settings that shape it', () => {
     const lines = readFileSync(results, 'utf8').trimEnd().split('\n').map((l) => JSON.parse(l) as { settings: Record<string, unknown> });
     for (const line of lines) {
-      expect(line.settings).toMatchObject({ timeLimitSeconds: 600, attempts: 2, pruning: true, maxCandidates: 300000, memoryCapMb: 1500, sizeCap: 30, priors: null });
+      expect(line.settings).toMatchObject({ timeLimitSeconds: 600, attempts: 2, pruning: true, maxCandidates: 300000, goals: true, intermediateTables: true, memoryCapMb: 1500, sizeCap: 30, priors: null });
       expect(line.settings.library).toMatch(/^sha256:[0-9a-f]{16}$/);
       expect(line.settings.version).toBe(JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')).version);
     }
@@ -130,6 +130,36 @@ describe('pithy eval', () => {
     expect(run.stderr).toContain('time limit (s): 600 in the file, 5 now');
     expect(run.stderr).toContain('pruning: true in the file, false now');
     expect(readFileSync(results, 'utf8')).toBe(before);
+  });
+
+  it('refuses to resume with goals or intermediate tables switched off, naming them', () => {
+    const before = readFileSync(results, 'utf8');
+    const run = pithy('eval', dir, '--results', results, '--max-candidates', '300000', '--time-limit', '600', '--no-goals', '--no-intermediate-tables');
+    expect(run.status).toBe(2);
+    expect(run.stderr).toContain('goals: true in the file, false now');
+    expect(run.stderr).toContain('intermediate tables: true in the file, false now');
+    expect(readFileSync(results, 'utf8')).toBe(before);
+  });
+
+  it('resumes a file written before goals and intermediate tables were recorded (they were on then)', () => {
+    const before = readFileSync(results, 'utf8');
+    const older = before
+      .trimEnd()
+      .split('\n')
+      .map((l) => {
+        const line = JSON.parse(l) as { settings: Record<string, unknown> };
+        delete line.settings.goals;
+        delete line.settings.intermediateTables;
+        return JSON.stringify(line) + '\n';
+      })
+      .join('');
+    writeFileSync(results, older);
+    const run = pithy('eval', dir, '--results', results, '--json', '--max-candidates', '300000', '--time-limit', '600');
+    expect(run.stderr).toContain('2 of 2 tasks already done');
+    const refused = pithy('eval', dir, '--results', results, '--max-candidates', '300000', '--time-limit', '600', '--no-goals');
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toContain('goals: true in the file, false now');
+    writeFileSync(results, before);
   });
 
   it('solves again a task whose worker crashed, unless --no-retry', () => {

@@ -15,6 +15,10 @@ export interface RunSettings {
   readonly pruning: boolean;
   /** Candidate cap per task, or null for none. */
   readonly maxCandidates: number | null;
+  /** Working back from the outputs through inverses (src/search/goals.ts); off with --no-goals. */
+  readonly goals: boolean;
+  /** Tables learned from the grids the search makes (src/search/intermediate-tables.ts); off with --no-intermediate-tables. */
+  readonly intermediateTables: boolean;
   /** Memory cap per worker in megabytes (see memory-cap.ts). */
   readonly memoryCapMb: number;
   /** Largest grid height and width accepted (`pithy --size-cap`). */
@@ -33,6 +37,8 @@ export const SETTING_NAMES: Readonly<Record<keyof RunSettings, string>> = {
   attempts: 'attempts',
   pruning: 'pruning',
   maxCandidates: 'candidate cap',
+  goals: 'goals',
+  intermediateTables: 'intermediate tables',
   memoryCapMb: 'memory cap (MB)',
   sizeCap: 'size cap',
   priors: 'priors',
@@ -81,6 +87,8 @@ export interface SettingsInput {
   readonly attempts: number;
   readonly pruning: boolean;
   readonly maxCandidates?: number;
+  readonly goals?: boolean;
+  readonly intermediateTables?: boolean;
   readonly memoryCapMb: number;
   readonly priorsFile?: string;
 }
@@ -91,6 +99,8 @@ export function runSettings(input: SettingsInput): RunSettings {
     attempts: input.attempts,
     pruning: input.pruning,
     maxCandidates: input.maxCandidates ?? null,
+    goals: input.goals ?? true,
+    intermediateTables: input.intermediateTables ?? true,
     memoryCapMb: input.memoryCapMb,
     sizeCap: getSizeCap(),
     priors: priorsHash(input.priorsFile),
@@ -103,11 +113,18 @@ function shown(value: unknown): string {
   return value === null ? 'none' : value === undefined ? 'not recorded' : String(value);
 }
 
+/**
+ * Settings added after results files were first written, with the value a line that does not
+ * record them was made under (both switches were on, with no way to turn them off).
+ */
+const WHEN_NOT_RECORDED: Partial<RunSettings> = { goals: true, intermediateTables: true };
+
 /** The settings that differ, each as "name: A there, B here" (empty when they agree). */
 export function settingsDifferences(there: Partial<RunSettings>, here: RunSettings, thereName = 'in the file', hereName = 'now'): string[] {
   const out: string[] = [];
   for (const key of Object.keys(SETTING_NAMES) as (keyof RunSettings)[]) {
-    if (there[key] !== here[key]) out.push(`${SETTING_NAMES[key]}: ${shown(there[key])} ${thereName}, ${shown(here[key])} ${hereName}`);
+    const theirs = key in there ? there[key] : WHEN_NOT_RECORDED[key];
+    if (theirs !== here[key]) out.push(`${SETTING_NAMES[key]}: ${shown(theirs)} ${thereName}, ${shown(here[key])} ${hereName}`);
   }
   return out;
 }

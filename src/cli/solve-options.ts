@@ -20,6 +20,8 @@ export interface SharedSolveFlags {
   jobs: number;
   maxCandidates?: number;
   pruning: boolean;
+  goals: boolean;
+  intermediateTables: boolean;
   memoryCap: number;
   retry: boolean;
   priors?: string;
@@ -34,6 +36,8 @@ export function addSolveFlags(command: Command): Command {
     .option('--memory-cap <MB>', 'memory cap per worker in megabytes: the search stops a task with the reason memory when it holds this much', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
     .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')
     .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)')
+    .option('--no-goals', 'do not work back from the outputs through inverses (for measuring what goals add)')
+    .option('--no-intermediate-tables', 'do not learn tables from the grids the search makes (for measuring what they add)')
     .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
 }
 
@@ -43,6 +47,8 @@ export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'l
     attempts: flags.attempts,
     pruning: flags.pruning,
     ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
+    ...(flags.goals ? {} : { goalBits: 0 }),
+    ...(flags.intermediateTables ? {} : { intermediateGrids: 0 }),
   };
 }
 
@@ -53,6 +59,8 @@ export function settingsFrom(flags: SharedSolveFlags & { priors?: string }): Run
     attempts: flags.attempts,
     pruning: flags.pruning,
     ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
+    goals: flags.goals,
+    intermediateTables: flags.intermediateTables,
     memoryCapMb: flags.memoryCap,
     ...(flags.priors !== undefined ? { priorsFile: flags.priors } : {}),
   });
