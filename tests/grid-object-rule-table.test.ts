@@ -32,7 +32,7 @@ describe('objectKeys', () => {
     expect(shapePattern(objects[0]!)).toBe('xxx/x.x/xxx');
   });
 
-  it('reads the new properties of the harbour by hand: hollow, wide, tall, inside, unique, ranks', () => {
+  it('reads the new properties of the harbour by hand: hollow, wide, tall, inside, unique, largest, smallest', () => {
     expect(objectKeys(harbour, boats, 'hollow')).toEqual([0, 0, 0]);
     expect(objectKeys(harbour, boats, 'wide')).toEqual([1, 0, 0]);
     expect(objectKeys(harbour, boats, 'tall')).toEqual([0, 1, 0]);
@@ -40,9 +40,9 @@ describe('objectKeys', () => {
     expect(objectKeys(harbour, boats, 'inside')).toEqual([0, 0, 0]);
     expect(objectKeys(harbour, boats, 'unique_shape')).toEqual([1, 1, 1]);
     expect(objectKeys(harbour, boats, 'unique_colour')).toEqual([1, 1, 1]);
-    // tops 0, 0, 2; lefts 0, 3, 1
-    expect(objectKeys(harbour, boats, 'top_rank')).toEqual([1, 1, 2]);
-    expect(objectKeys(harbour, boats, 'left_rank')).toEqual([1, 3, 2]);
+    // sizes 2, 3, 1
+    expect(objectKeys(harbour, boats, 'largest')).toEqual([0, 1, 0]);
+    expect(objectKeys(harbour, boats, 'smallest')).toEqual([0, 0, 1]);
   });
 
   it('tells a buoy inside a ring from one outside it, and repeated shapes and colours', () => {
@@ -66,9 +66,9 @@ describe('objectKeys', () => {
     expect(objectKeys(lagoon, objects, 'unique_shape')).toEqual([1, 0, 0, 0]);
     expect(objectKeys(lagoon, objects, 'unique_colour')).toEqual([1, 0, 0, 1]);
     expect(objectKeys(lagoon, objects, 'wide')).toEqual([0, 0, 0, 0]);
-    // tops 1, 1, 2, 3; lefts 1, 5, 2, 6
-    expect(objectKeys(lagoon, objects, 'top_rank')).toEqual([1, 1, 2, 3]);
-    expect(objectKeys(lagoon, objects, 'left_rank')).toEqual([1, 3, 2, 4]);
+    // sizes 8, 1, 1, 1: the three single cells tie for smallest
+    expect(objectKeys(lagoon, objects, 'largest')).toEqual([1, 0, 0, 0]);
+    expect(objectKeys(lagoon, objects, 'smallest')).toEqual([0, 1, 1, 1]);
   });
 
   it('gives equal sizes one rank', () => {

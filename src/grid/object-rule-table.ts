@@ -1,10 +1,10 @@
 /**
  * Object rules: a table that says what happens to each object of a grid (it keeps its place,
  * is removed, takes one colour, or moves by an offset) from one property of the object: what it
- * is (size, colour, height, width, holes, shape, whether it is hollow, wider or taller than
- * high), where it is (touching the edge, inside another object, the order of its top row or left
- * column among the objects) and how it compares with the others (size rank, whether its shape or
- * colour is the only one of its kind).
+ * is (size, colour, height, width, holes, shape, whether it is hollow, wider than high or higher
+ * than wide), where it is (touching the edge, inside another object) and how it compares with the
+ * others (size rank, whether it is the largest or the smallest, whether its shape or colour is
+ * the only one of its kind).
  *
  * Applying a rule cuts the grid into objects (one of four ways), looks each object's property
  * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed and
@@ -36,22 +36,25 @@ export const OBJECT_PROPERTIES = [
   'inside',
   'unique_shape',
   'unique_colour',
-  'top_rank',
-  'left_rank',
+  'largest',
+  'smallest',
 ] as const;
 export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
 
 /**
- * A property's value: a whole number (size, height, width, holes; a rank, 1 for the largest
- * object or the topmost or leftmost, objects with equal values sharing a rank), a colour, 1/0
- * for yes/no, or for `shape` the pattern of the object's box, rows top to bottom joined by `/`,
- * `x` for a cell of the object and `.` for one outside it.
+ * A property's value: a whole number (size, height, width, holes; the size rank, 1 for the
+ * largest, objects of equal size sharing a rank), a colour, 1/0 for yes/no, or for `shape` the
+ * pattern of the object's box, rows top to bottom joined by `/`, `x` for a cell of the object and
+ * `.` for one outside it.
  *
  * The yes/no properties: `touches_edge` (a cell on the grid's border), `hollow` (at least one
  * hole), `wide` / `tall` (its box is wider than high / higher than wide), `inside` (off the
  * border, and no background cell beside it reaches the border through background: it lies in a
  * region another object closes), `unique_shape` / `unique_colour` (no other object of the grid
- * has its shape / its main colour).
+ * has its shape / its main colour), `largest` / `smallest` (no object of the grid is larger /
+ * smaller; ties all count). Unlike a rank, a yes/no key takes the same two values whatever the
+ * number of objects, so a test input with more objects than any demonstration still finds its
+ * keys in the table.
  */
 export type ObjectKey = number | string;
 
@@ -80,6 +83,8 @@ export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 
     case 'inside':
     case 'unique_shape':
     case 'unique_colour':
+    case 'largest':
+    case 'smallest':
       return 'yes or no';
     default:
       return 'number';
@@ -143,10 +148,14 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return objects.map(shapePattern);
     case 'size_rank':
       return ranks(objects.map((o) => -o.size));
-    case 'top_rank':
-      return ranks(objects.map((o) => o.top));
-    case 'left_rank':
-      return ranks(objects.map((o) => o.left));
+    case 'largest': {
+      const most = Math.max(...objects.map((o) => o.size));
+      return objects.map((o) => (o.size === most ? 1 : 0));
+    }
+    case 'smallest': {
+      const least = Math.min(...objects.map((o) => o.size));
+      return objects.map((o) => (o.size === least ? 1 : 0));
+    }
     case 'hollow':
       return objects.map((o) => (holeCount(o) > 0 ? 1 : 0));
     case 'wide':
