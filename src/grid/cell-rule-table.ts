@@ -5,9 +5,12 @@
  * it is a background cell enclosed by other colours, whether it lies on the grid's border, the
  * first colour other than the background met looking up, down, left or right from it).
  *
- * A rule is a list of features, the first always the cell's own colour, and a table from keys
- * (one value per feature) to colours. Applying it to a grid looks every cell's key up; a key the
- * table does not hold makes the whole application fail (null): a rule never guesses.
+ * A rule is a list of features, the first the cell's own colour or whether the cell is the
+ * grid's background, and a table from keys (one value per feature) to colours or `keep` (the
+ * cell keeps its colour). Starting with `background` makes a rule that does not name the colours
+ * of the objects, so it still applies when a test input brings a colour no demonstration shows.
+ * Applying a rule to a grid looks every cell's key up; a key the table does not hold makes the
+ * whole application fail (null): a rule never guesses.
  */
 import { backgroundColour } from './components.ts';
 import { Grid } from './grid.ts';
@@ -16,8 +19,15 @@ import { enclosedCells } from './holes.ts';
 /** The value a neighbour feature takes for a position outside the grid. */
 export const EDGE = 10;
 
+/** An entry's output meaning "the cell keeps its colour" (written `keep`). */
+export const KEEP = 11;
+
+/** The features a cell rule may start with: the cell's own colour, or whether it is background. */
+export const FIRST_FEATURES = ['colour', 'background'] as const;
+
 export const CELL_FEATURE_NAMES = [
   'colour',
+  'background',
   'above',
   'below',
   'left',
@@ -60,7 +70,7 @@ export type CellFeatureValues = 'colour' | 'neighbour' | 'count of 8' | 'count o
 export interface CellRuleEntry {
   /** One value per feature, in the rule's feature order. */
   readonly key: readonly number[];
-  /** The output colour. */
+  /** The output colour, or KEEP. */
   readonly colour: number;
 }
 
@@ -92,6 +102,7 @@ export function featureValues(name: CellFeatureName): CellFeatureValues {
       return 'count of 8';
     case 'beside':
       return 'count of 4';
+    case 'background':
     case 'row_holds':
     case 'column_holds':
     case 'enclosed':
@@ -140,6 +151,11 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
     case 'colour':
       out.set(cells);
       return out;
+    case 'background': {
+      const background = backgroundColour(g);
+      for (let i = 0; i < cells.length; i++) out[i] = cells[i] === background ? 1 : 0;
+      return out;
+    }
     case 'row_parity':
       for (let r = 0; r < height; r++) out.fill(r & 1, r * width, (r + 1) * width);
       return out;
@@ -282,18 +298,22 @@ export class CellRule {
   }
 }
 
+export function isFirstFeature(name: string): name is (typeof FIRST_FEATURES)[number] {
+  return (FIRST_FEATURES as readonly string[]).includes(name);
+}
+
 /**
  * The grid with every cell recoloured by the rule; null when some cell's key has no entry, or
- * when the rule's first feature is not the cell's colour.
+ * when the rule's first feature is neither the cell's colour nor `background`.
  */
 export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
-  if (rule.features.length === 0 || rule.features[0]!.name !== 'colour') return null;
+  if (rule.features.length === 0 || !isFirstFeature(rule.features[0]!.name)) return null;
   const keys = cellKeys(g, rule.features);
   const out = new Uint8Array(keys.length);
   for (let i = 0; i < keys.length; i++) {
     const colour = rule.colourFor(keys[i]!);
     if (colour === undefined) return null;
-    out[i] = colour;
+    out[i] = colour === KEEP ? g.cells[i]! : colour;
   }
   return new Grid(g.height, g.width, out);
 }

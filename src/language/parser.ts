@@ -9,6 +9,8 @@ import {
   featureTakesColour,
   featureValues,
   isCellFeatureName,
+  isFirstFeature,
+  KEEP,
   largestFeatureValue,
   packKey,
   type CellFeature,
@@ -165,7 +167,7 @@ function parseFeatureValue(r: LineReader, values: CellFeatureValues): number {
   }
 }
 
-/** `cell_rule[colour, ...]{key -> #c, ...}`, after the word `cell_rule`. */
+/** `cell_rule[colour or background, ...]{key -> #c or keep, ...}`, after the word `cell_rule`. */
 function parseCellRule(r: LineReader): LiteralValue {
   r.expect('[');
   const features: CellFeature[] = [];
@@ -173,9 +175,9 @@ function parseCellRule(r: LineReader): LiteralValue {
     r.skipSpaces();
     const start = r.position;
     const name = r.identifier('a cell feature');
-    if (features.length === 0 && name !== 'colour') {
+    if (features.length === 0 && !isFirstFeature(name)) {
       r.position = start;
-      r.fail("'colour', the first feature of every cell rule");
+      r.fail("'colour' or 'background', the first feature of every cell rule");
     }
     if (!isCellFeatureName(name)) {
       r.position = start;
@@ -202,7 +204,12 @@ function parseCellRule(r: LineReader): LiteralValue {
       }
       seen.add(packed);
       r.expect('->', "'->' after the key");
-      entries.push({ key, colour: r.colour() });
+      r.skipSpaces();
+      if (r.peek() === '#') entries.push({ key, colour: r.colour() });
+      else {
+        oneOf(r, ['keep'], "a colour such as '#3' or 'keep'");
+        entries.push({ key, colour: KEEP });
+      }
       if (r.peek() !== ',') break;
       r.expect(',');
     }

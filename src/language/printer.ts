@@ -19,7 +19,7 @@
  * (a number, a colour, `yes`/`no`, or a shape such as `xx/x.`) and what becomes of such
  * objects: `keep`, `remove`, a colour, or `move (rows, columns)`.
  */
-import { featureTakesColour, featureValues, EDGE, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { featureTakesColour, featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 
@@ -81,7 +81,7 @@ export function printLiteral(l: LiteralValue): string {
       return `{${l.pairs.map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`;
     case 'CellRule': {
       const kinds = l.features.map((f) => featureValues(f.name));
-      const entries = l.entries.map((e) => `${e.key.map((v, i) => printFeatureValue(kinds[i]!, v)).join(' ')} -> #${e.colour}`);
+      const entries = l.entries.map((e) => `${e.key.map((v, i) => printFeatureValue(kinds[i]!, v)).join(' ')} -> ${e.colour === KEEP ? 'keep' : `#${e.colour}`}`);
       return `cell_rule[${l.features.map(printFeature).join(', ')}]{${entries.join(', ')}}`;
     }
     case 'ObjectRule': {

@@ -23,6 +23,8 @@ import {
   CellRule,
   featureOfCells,
   featureTakesColour,
+  FIRST_FEATURES,
+  KEEP,
   type CellFeature,
   type CellFeatureName,
   type CellRuleEntry,
@@ -125,22 +127,45 @@ function unpackKey(packed: number, count: number): number[] {
  * The cell rule of the given features that the demonstrations show, or undefined when two
  * cells with one key want different colours, a test input holds a key the demonstrations do not,
  * the table would be too large, or it changes nothing.
+ *
+ * A rule that starts with the cell's colour maps each key to a colour (a cell that keeps its
+ * colour maps to that colour). One that starts with `background` maps a key to `keep` when every
+ * cell with that key kept its colour, else to the one colour they all became.
  */
 export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
-  if (!sameShapedPairs(puzzle) || features[0]?.name !== 'colour') return undefined;
+  const first = features[0]?.name;
+  if (!sameShapedPairs(puzzle) || (first !== 'colour' && first !== 'background')) return undefined;
+  const byColour = first === 'colour';
   // Keys are packed cell by cell (no array of keys per grid) so that a conflict, the common
-  // outcome, ends the work at the first cell that shows it.
+  // outcome, ends the work at the first cell that shows it. For a background-first rule an
+  // entry's state is the colour every cell with the key became (CONFLICT when they differ) plus
+  // KEPT while every one of them kept its colour.
   const table = new Map<number, number>();
   for (const { input, output } of puzzle.train) {
     const columns = features.map((f) => cache.of(input, f));
     const out = output.cells;
+    const before = input.cells;
     for (let i = 0; i < out.length; i++) {
       const key = packedKeyAt(columns, i);
       const known = table.get(key);
+      const colour = out[i]!;
+      if (byColour) {
+        if (known === undefined) {
+          if (table.size >= MAXIMUM_ENTRIES) return undefined;
+          table.set(key, colour);
+        } else if (known !== colour) return undefined;
+        continue;
+      }
+      const kept = colour === before[i] ? KEPT : 0;
       if (known === undefined) {
         if (table.size >= MAXIMUM_ENTRIES) return undefined;
-        table.set(key, out[i]!);
-      } else if (known !== out[i]) return undefined;
+        table.set(key, colour | kept);
+        continue;
+      }
+      const became = (known & CONFLICT) === colour ? colour : CONFLICT;
+      const stillKept = known & kept;
+      if (became === CONFLICT && stillKept === 0) return undefined;
+      if ((became | stillKept) !== known) table.set(key, became | stillKept);
     }
   }
   for (const g of puzzle.testInputs) {
@@ -149,9 +174,10 @@ export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], 
   }
   const entries: CellRuleEntry[] = [];
   let changes = false;
-  for (const [packed, colour] of table) {
+  for (const [packed, state] of table) {
     const key = unpackKey(packed, features.length);
-    if (key[0] !== colour) changes = true;
+    const colour = byColour ? state : state & KEPT ? KEEP : state & CONFLICT;
+    if (byColour ? key[0] !== colour : colour !== KEEP) changes = true;
     entries.push({ key, colour });
   }
   if (!changes) return undefined;
@@ -159,12 +185,20 @@ export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], 
   return { type: 'CellRule', features: [...features], entries };
 }
 
+/** In a background-first rule's learning state: the low bits hold a colour, or CONFLICT. */
+const CONFLICT = 15;
+/** In a background-first rule's learning state: every cell with the key kept its colour. */
+const KEPT = 16;
+
 /**
  * The cheapest cell rules the demonstrations show (at most `limit`, with distinct outputs on the
- * test inputs), cheapest first. The features tried after the cell's colour: none, each single
- * feature, each pair of them, all 4 and all 8 neighbours. A feature that takes one value on every cell of
- * every grid tells nothing and is left out; a pair is not tried when one of its features works
- * alone, since the pair's table would hold at least as many entries, each dearer.
+ * test inputs), cheapest first. The features tried after the first (the cell's colour, and
+ * `background`, each in turn): none, each single feature, each pair of them, all 4 and all 8
+ * neighbours. A feature that takes one value on every cell of every grid tells nothing and is
+ * left out. When a first feature alone works nothing longer is tried, and a pair is not tried
+ * when one of its features works alone: with the same first feature the longer table holds at
+ * least as many entries, each dearer. (Across the two first features this is a shortcut for
+ * speed, not a proof: a longer background-first rule could undercut a colour-first one.)
  */
 export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
@@ -176,13 +210,18 @@ export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
   });
   const found: LearnedTable[] = [];
   const worksAlone = new Set<number>();
+  // Each feature set is tried after the cell's colour and after `background`.
   const tryFeatures = (extra: readonly CellFeature[]): boolean => {
-    const literal = learnCellRule(puzzle, [{ name: 'colour' }, ...extra], cache);
-    if (literal) found.push({ literal, bits: tableBits(literal)! });
-    return literal !== undefined;
+    let works = false;
+    for (const name of FIRST_FEATURES) {
+      const literal = learnCellRule(puzzle, [{ name }, ...extra], cache);
+      if (literal) found.push({ literal, bits: tableBits(literal)! });
+      works ||= literal !== undefined;
+    }
+    return works;
   };
-  // The colour alone: every other set holds it, so when it works nothing else can be cheaper.
-  if (tryFeatures([])) return found;
+  // The first feature alone: every other set holds it and more, so when it works nothing else can be cheaper.
+  if (tryFeatures([])) return cheapestDistinct(found, limit, puzzle);
   atoms.forEach((a, i) => {
     if (tryFeatures([a])) worksAlone.add(i);
   });

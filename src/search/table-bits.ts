@@ -6,7 +6,7 @@
  * the search charged for it (README, "Description length", gives the formula):
  *
  *   palette      1 + Σ entries 2c
- *   cell rule    γ(f + 1) + Σ extra features (5 + 4 when it names a colour)
+ *   cell rule    γ(f + 1) + 1 (colour or background first) + Σ extra features (5 + 4 when it names a colour)
  *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c))
  *   object rule  2 + 4 + Σ entries (key value + outcome)
  *
@@ -14,7 +14,7 @@
  * the number of features after the cell's own colour, and γ(n) = 2⌊log₂ n⌋ + 1 is the length of
  * the Elias gamma code of a whole number n ≥ 1.
  */
-import { featureValues, EDGE, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { featureValues, EDGE, KEEP, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 
@@ -33,7 +33,9 @@ export function colourBits(k: number): number {
   return Math.max(1, Math.ceil(Math.log2(Math.max(1, k))));
 }
 
-/** Bits for choosing a feature after the cell's own colour (20 kinds), and a colour it names. */
+/** Bits for the first feature of a cell rule (the cell's colour or whether it is background). */
+export const FIRST_FEATURE_BITS = 1;
+/** Bits for choosing a feature after the first (20 kinds), and a colour it names. */
 export const FEATURE_CHOICE_BITS = 5;
 export const FEATURE_COLOUR_BITS = 4;
 /** Bits for an object rule's way of cutting into objects (4) and its property (16). */
@@ -97,18 +99,19 @@ export function tableBits(l: LiteralValue): number | undefined {
       const kinds = l.features.map((f) => featureValues(f.name));
       const colours = new Set<number>();
       for (const e of l.entries) {
-        colours.add(e.colour);
+        if (e.colour !== KEEP) colours.add(e.colour);
         e.key.forEach((v, i) => {
           if ((kinds[i] === 'colour' || kinds[i] === 'neighbour') && v !== EDGE) colours.add(v);
         });
       }
       const k = colours.size;
       const c = colourBits(k);
-      let bits = gammaBits(l.features.length);
+      let bits = gammaBits(l.features.length) + FIRST_FEATURE_BITS;
       for (let i = 1; i < l.features.length; i++) bits += FEATURE_CHOICE_BITS + (l.features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
       for (const e of l.entries) {
         for (let i = 0; i < e.key.length; i++) bits += featureValueBits(kinds[i]!, c, k);
-        bits += e.colour === e.key[0] ? 1 : 1 + c;
+        const keeps = e.colour === KEEP || (l.features[0]?.name === 'colour' && e.colour === e.key[0]);
+        bits += keeps ? 1 : 1 + c;
       }
       return bits;
     }

@@ -11,7 +11,8 @@
  * - Palette: `<palette>`, each pair as two colour tokens (from, to), then `</palette>`.
  * - CellRule: `<cell_rule>`, the features (`feature:NAME`, then a colour token for those that
  *   name one), `<entries>`, each entry as its key (one value per feature: a colour, `edge`, a
- *   count as a number token, `yes`/`no`, `even`/`odd`) and its colour, then `</cell_rule>`.
+ *   count as a number token, `yes`/`no`, `even`/`odd`) and its colour or `keep` (the token the
+ *   object rule's outcome uses too), then `</cell_rule>`.
  * - ObjectRule: `<object_rule>`, `grouping:NAME`, `property:NAME`, each entry as its key (a
  *   number, a colour, `yes`/`no`, or `<shape>` rows of `filled`/`empty` ended by `<row>`, then
  *   `</shape>`) and its outcome (`keep`, `remove`, a colour, or `move` and two numbers), then
@@ -23,6 +24,7 @@ import {
   featureTakesColour,
   featureValues,
   isCellFeatureName,
+  KEEP,
   type CellFeature,
   type CellFeatureValues,
   type CellRuleEntry,
@@ -262,7 +264,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       '<cell_rule>',
       ...l.features.flatMap((f) => (f.colour !== undefined ? [`feature:${f.name}`, colourToken(f.colour)] : [`feature:${f.name}`])),
       '<entries>',
-      ...l.entries.flatMap((e) => [...e.key.flatMap((v, i) => featureValueTokens(featureValues(l.features[i]!.name), v)), colourToken(e.colour)]),
+      ...l.entries.flatMap((e) => [...e.key.flatMap((v, i) => featureValueTokens(featureValues(l.features[i]!.name), v)), e.colour === KEEP ? 'keep' : colourToken(e.colour)]),
       '</cell_rule>',
     ],
     decode: (r) => {
@@ -278,7 +280,10 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       while (r.peek() !== '</cell_rule>') {
         if (r.atEnd()) r.fail("an entry or '</cell_rule>'");
         const key = features.map((f) => readFeatureValue(r, featureValues(f.name)));
-        entries.push({ key, colour: readColour(r) });
+        if (r.peek() === 'keep') {
+          r.expect('keep');
+          entries.push({ key, colour: KEEP });
+        } else entries.push({ key, colour: readColour(r) });
       }
       r.expect('</cell_rule>');
       return { type: 'CellRule', features, entries };

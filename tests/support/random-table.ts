@@ -9,6 +9,8 @@ import {
   CELL_FEATURE_NAMES,
   featureTakesColour,
   featureValues,
+  FIRST_FEATURES,
+  KEEP,
   largestFeatureValue,
   packKey,
   type CellFeature,
@@ -27,7 +29,7 @@ import type { LiteralValue } from '../../src/language/ast.ts';
 export type Chooser = (count: number) => number;
 
 export function randomCellRule(choose: Chooser): LiteralValue {
-  const features: CellFeature[] = [{ name: 'colour' }];
+  const features: CellFeature[] = [{ name: FIRST_FEATURES[choose(FIRST_FEATURES.length)]! }];
   const extra = choose(4);
   for (let i = 0; i < extra; i++) {
     const name = CELL_FEATURE_NAMES[choose(CELL_FEATURE_NAMES.length)]!;
@@ -41,7 +43,8 @@ export function randomCellRule(choose: Chooser): LiteralValue {
     const packed = packKey(key);
     if (seen.has(packed)) continue;
     seen.add(packed);
-    entries.push({ key, colour: choose(10) });
+    const output = choose(11);
+    entries.push({ key, colour: output === 10 ? KEEP : output });
   }
   return { type: 'CellRule', features, entries };
 }
