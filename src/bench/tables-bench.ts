@@ -17,10 +17,9 @@ import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
 import { defaultLibrary } from '../../dsl/index.ts';
-import type { Grid } from '../grid/grid.ts';
 import { printProgram } from '../language/printer.ts';
 import { taskConstants } from '../search/constants.ts';
-import { INPUT_NAME } from '../search/solve.ts';
+import { distinctAttempts, INPUT_NAME } from '../search/solve.ts';
 import { tablePrograms, type TableProgram } from '../search/table-programs.ts';
 import { readTasks } from '../tasks/read-task.ts';
 import { puzzleOf } from '../tasks/task.ts';
@@ -39,17 +38,10 @@ function tableKind(t: TableProgram): string {
   return l.type === 'Palette' ? 'palette' : 'other';
 }
 
-/** The two cheapest programs (by bits, ties in the order offered) with distinct test outputs. */
+/** The two cheapest programs (by bits, ties in the order offered) with distinct test outputs, as the solver takes attempts. */
 function attempts(found: readonly TableProgram[], trainCount: number): TableProgram[] {
-  const ordered = found.map((t, i) => ({ t, i })).sort((a, b) => a.t.bits - b.t.bits || a.i - b.i);
-  const kept: TableProgram[] = [];
-  for (const { t } of ordered) {
-    if (kept.length >= 2) break;
-    const mine = t.values.slice(trainCount);
-    if (kept.some((k) => k.values.slice(trainCount).every((g: Grid, i) => g.equals(mine[i]!)))) continue;
-    kept.push(t);
-  }
-  return kept;
+  const ordered = found.map((t, i) => ({ t, i })).sort((a, b) => a.t.bits - b.t.bits || a.i - b.i).map(({ t }) => t);
+  return distinctAttempts(ordered, (t) => t.values.slice(trainCount), 2);
 }
 
 function main(): void {

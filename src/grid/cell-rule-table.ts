@@ -85,6 +85,14 @@ const OFFSETS: Readonly<Record<string, readonly [number, number]>> = {
   below_right: [1, 1],
 };
 
+/** The step each `sees_` feature looks along. */
+const SIGHT_LINES: Readonly<Record<string, readonly [number, number]>> = {
+  sees_above: [-1, 0],
+  sees_below: [1, 0],
+  sees_left: [0, -1],
+  sees_right: [0, 1],
+};
+
 export function isCellFeatureName(text: string): text is CellFeatureName {
   return (CELL_FEATURE_NAMES as readonly string[]).includes(text);
 }
@@ -173,7 +181,7 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
     case 'sees_below':
     case 'sees_left':
     case 'sees_right': {
-      const [dr, dc] = OFFSETS[feature.name.slice(5)]!;
+      const [dr, dc] = SIGHT_LINES[feature.name]!;
       const background = backgroundColour(g);
       // One sweep from the side looked at: the value at a cell is its neighbour's colour when the
       // neighbour is not background, else the neighbour's own value.

@@ -24,6 +24,7 @@ import {
   featureOfCells,
   featureTakesColour,
   FIRST_FEATURES,
+  isFirstFeature,
   KEEP,
   type CellFeature,
   type CellFeatureName,
@@ -134,7 +135,7 @@ function unpackKey(packed: number, count: number): number[] {
  */
 export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
   const first = features[0]?.name;
-  if (!sameShapedPairs(puzzle) || (first !== 'colour' && first !== 'background')) return undefined;
+  if (!sameShapedPairs(puzzle) || first === undefined || !isFirstFeature(first)) return undefined;
   const byColour = first === 'colour';
   // Keys are packed cell by cell (no array of keys per grid) so that a conflict, the common
   // outcome, ends the work at the first cell that shows it. For a background-first rule an
@@ -220,7 +221,8 @@ export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
     }
     return works;
   };
-  // The first feature alone: every other set holds it and more, so when it works nothing else can be cheaper.
+  // A first feature alone: with the same first feature every longer set only adds entries, so
+  // nothing longer is tried when one works (see above for the shortcut this is across the two).
   if (tryFeatures([])) return cheapestDistinct(found, limit, puzzle);
   atoms.forEach((a, i) => {
     if (tryFeatures([a])) worksAlone.add(i);

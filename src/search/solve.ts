@@ -69,6 +69,21 @@ function productionsFor(library: Library): Production[] {
 
 export const INPUT_NAME = 'input';
 
+/**
+ * The first `limit` of `ordered` (best first) whose test outputs differ from those of every
+ * earlier one taken: the attempts, one program per distinct answer.
+ */
+export function distinctAttempts<T>(ordered: readonly T[], testOutputs: (t: T) => readonly Grid[], limit: number): T[] {
+  const taken: T[] = [];
+  for (const t of ordered) {
+    if (taken.length >= limit) break;
+    const mine = testOutputs(t);
+    if (taken.some((kept) => testOutputs(kept).every((g, i) => g.equals(mine[i]!)))) continue;
+    taken.push(t);
+  }
+  return taken;
+}
+
 export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveResult {
   const started = performance.now();
   const library = options.library ?? defaultLibrary;
@@ -105,14 +120,10 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
   for (const t of tables) {
     found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false });
   }
-  const solutions: Solution[] = [];
   // By bits, except that programs breaking the settled output size stay behind all others.
   const rank = (s: Solution): number => (lastResort.has(s) ? 1 : 0);
-  for (const s of found.map((s, i) => ({ s, i })).sort((a, b) => rank(a.s) - rank(b.s) || a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s)) {
-    if (solutions.length >= attempts) break;
-    if (solutions.some((kept) => kept.testOutputs.every((g, i) => g.equals(s.testOutputs[i]!)))) continue;
-    solutions.push(s);
-  }
+  const ordered = found.map((s, i) => ({ s, i })).sort((a, b) => rank(a.s) - rank(b.s) || a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s);
+  const solutions = distinctAttempts(ordered, (s) => s.testOutputs, attempts);
   const reason = solutions.length > 0 ? 'solved' : outcome.reason;
   return { task: puzzle.name, solutions, reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
 }

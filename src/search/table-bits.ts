@@ -106,11 +106,12 @@ export function tableBits(l: LiteralValue): number | undefined {
       }
       const k = colours.size;
       const c = colourBits(k);
+      const byColour = l.features[0]?.name === 'colour';
       let bits = gammaBits(l.features.length) + FIRST_FEATURE_BITS;
       for (let i = 1; i < l.features.length; i++) bits += FEATURE_CHOICE_BITS + (l.features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
       for (const e of l.entries) {
         for (let i = 0; i < e.key.length; i++) bits += featureValueBits(kinds[i]!, c, k);
-        const keeps = e.colour === KEEP || (l.features[0]?.name === 'colour' && e.colour === e.key[0]);
+        const keeps = e.colour === KEEP || (byColour && e.colour === e.key[0]);
         bits += keeps ? 1 : 1 + c;
       }
       return bits;
