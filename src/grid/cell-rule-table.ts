@@ -13,7 +13,7 @@
  * whole application fail (null): a rule never guesses.
  */
 import { backgroundColour } from './components.ts';
-import { Grid } from './grid.ts';
+import { Grid, newCells } from './grid.ts';
 import { enclosedCells } from './holes.ts';
 
 /** The value a neighbour feature takes for a position outside the grid. */
@@ -317,7 +317,7 @@ export function isFirstFeature(name: string): name is (typeof FIRST_FEATURES)[nu
 export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
   if (rule.features.length === 0 || !isFirstFeature(rule.features[0]!.name)) return null;
   const keys = cellKeys(g, rule.features);
-  const out = new Uint8Array(keys.length);
+  const out = newCells(keys.length);
   for (let i = 0; i < keys.length; i++) {
     const colour = rule.colourFor(keys[i]!);
     if (colour === undefined) return null;

@@ -5,25 +5,26 @@
  */
 import { Grid } from './grid.ts';
 
+/** Work array: per colour, cell count, sum of rows, sum of columns. */
+const sums = new Float64Array(30);
+
 export function colourBands(g: Grid): Grid | null {
   const { height, width, cells } = g;
-  const count = new Float64Array(10);
-  const rowSum = new Float64Array(10);
-  const columnSum = new Float64Array(10);
+  sums.fill(0);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       const v = cells[r * width + c]!;
       if (v === 0) continue;
-      count[v]!++;
-      rowSum[v]! += r;
-      columnSum[v]! += c;
+      sums[v]!++;
+      sums[10 + v]! += r;
+      sums[20 + v]! += c;
     }
   }
   const colours: number[] = [];
-  for (let v = 1; v < 10; v++) if (count[v]! > 0) colours.push(v);
+  for (let v = 1; v < 10; v++) if (sums[v]! > 0) colours.push(v);
   if (colours.length === 0) return null;
-  const meanRow = (v: number) => rowSum[v]! / count[v]!;
-  const meanColumn = (v: number) => columnSum[v]! / count[v]!;
+  const meanRow = (v: number) => sums[10 + v]! / sums[v]!;
+  const meanColumn = (v: number) => sums[20 + v]! / sums[v]!;
   const spread = (mean: (v: number) => number) => {
     let low = Infinity;
     let high = -Infinity;

@@ -6,7 +6,7 @@
  */
 import { backgroundColour } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { EMPTY, Grid, shapeAllowed, newCells } from './grid.ts';
+import { EMPTY, Grid, shapeAllowed, newCells, copyRun } from './grid.ts';
 
 /** An inclusive rectangle of cells: rows top..bottom, columns left..right. */
 export interface Bounds {
@@ -43,7 +43,7 @@ export function cropGrid(grid: Grid, top: number, left: number, height: number, 
   const source = grid.cells;
   for (let r = 0; r < height; r++) {
     const from = (top + r) * grid.width + left;
-    cells.set(source.subarray(from, from + width), r * width);
+    copyRun(source, from, cells, r * width, width);
   }
   return new Grid(height, width, cells);
 }
@@ -120,6 +120,6 @@ export function keepMiddleLine(g: Grid, column: boolean): Grid | null {
   const middle = (length - 1) / 2;
   const out = newCells(cells.length).fill(backgroundColour(g));
   if (column) for (let r = 0; r < height; r++) out[r * width + middle] = cells[r * width + middle]!;
-  else out.set(cells.subarray(middle * width, (middle + 1) * width), middle * width);
+  else copyRun(cells, middle * width, out, middle * width, width);
   return new Grid(height, width, out);
 }

@@ -1,6 +1,10 @@
 /** Squares of background cells of a given size, found and filled. */
 import { backgroundColour } from './components.ts';
 import { Grid, newCells, copyCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
+
+/** Work array for the prefix counts below. */
+const prefixCounts = new WorkArray(Uint16Array);
 
 /**
  * Squares of k×k background cells take the colour; they are found by their top-left corner in
@@ -13,7 +17,7 @@ export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | nul
   const background = backgroundColour(g);
   // filled[(r + 1) * (width + 1) + c + 1]: non-background cells above and left of (r, c), inclusive.
   const stride = width + 1;
-  const filled = new Uint16Array((height + 1) * stride);
+  const filled = prefixCounts.take((height + 1) * stride).fill(0, 0, (height + 1) * stride);
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
       const own = cells[r * width + c] !== background ? 1 : 0;

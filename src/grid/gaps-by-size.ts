@@ -4,14 +4,19 @@
  */
 import { backgroundColour } from './components.ts';
 import { Grid, copyCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
+
+/** Work arrays for the labelling below. */
+const labels = new WorkArray(Int32Array);
+const queues = new WorkArray(Int32Array);
 
 export function fillGapsBySize(g: Grid, colour: number, largest: boolean): Grid {
   const { height, width, cells } = g;
   const n = cells.length;
   const background = backgroundColour(g);
-  const label = new Int32Array(n).fill(-1);
+  const label = labels.take(n).fill(-1, 0, n);
   const sizes: number[] = [];
-  const queue = new Int32Array(n);
+  const queue = queues.take(n);
   for (let s = 0; s < n; s++) {
     if (cells[s] !== background || label[s] !== -1) continue;
     const id = sizes.length;

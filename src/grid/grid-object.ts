@@ -5,6 +5,9 @@
 import { EMPTY, Grid } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
+/** Work buffer for {@link GridObject.mainColour} (asked of most objects the search makes). */
+const mainColourCounts = new Uint16Array(10);
+
 export class GridObject {
   readonly top: number;
   readonly left: number;
@@ -38,7 +41,7 @@ export class GridObject {
 
   /** The colour of the object's most frequent cell (lowest colour on ties). */
   get mainColour(): number {
-    const counts = new Uint16Array(10);
+    const counts = mainColourCounts.fill(0);
     const cells = this.shape.cells;
     for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) counts[cells[i]!]!++;
     return mostFrequentColour(counts);

@@ -130,6 +130,14 @@ export function copyCells(cells: Uint8Array): Uint8Array {
   return out;
 }
 
+/**
+ * Copies `length` cells from `source` at `from` into `target` at `to`, with no view object: a
+ * `subarray` per row costs an allocation, and the search copies rows of millions of grids.
+ */
+export function copyRun(source: Uint8Array, from: number, target: Uint8Array, to: number, length: number): void {
+  for (let i = 0; i < length; i++) target[to + i] = source[from + i]!;
+}
+
 /** Bytes of cell storage handed out by {@link newCells} in this process so far (whole slabs). */
 export function cellBytesAllocated(): number {
   return cellBytes;

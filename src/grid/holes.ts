@@ -6,6 +6,7 @@
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid, newCells, copyCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
 
 /** Marks cells that are in no region; never a colour and never EMPTY. */
 const OUTSIDE = 10;
@@ -27,6 +28,10 @@ function spread(mark: Uint8Array, height: number, width: number, queue: Int32Arr
   }
 }
 
+/** Work arrays for the flood fills below. */
+const enclosedQueue = new WorkArray(Int32Array);
+const regionQueue = new WorkArray(Int32Array);
+
 /**
  * Marks, in a new array, the cells of colour `open` that are enclosed: not connected to the
  * border by edge steps through cells of that colour (1 = enclosed).
@@ -36,7 +41,7 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
   const n = cells.length;
   // 0 = not open, 1 = open and enclosed (so far), 2 = open and reached from the border
   const mark = newCells(n);
-  const queue = new Int32Array(n);
+  const queue = enclosedQueue.take(n);
   let tail = 0;
   for (let i = 0; i < n; i++) {
     if (cells[i] !== open) continue;
@@ -57,7 +62,7 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
 export function countEnclosedRegions(grid: Grid, open: number): number {
   const { height, width } = grid;
   const mark = enclosedCells(grid, open);
-  const queue = new Int32Array(mark.length);
+  const queue = regionQueue.take(mark.length);
   let regions = 0;
   for (let start = 0; start < mark.length; start++) {
     if (mark[start] !== 1) continue;

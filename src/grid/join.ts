@@ -1,5 +1,5 @@
 /** Joining two grids side by side or one above the other. */
-import { Grid, shapeAllowed, newCells } from './grid.ts';
+import { Grid, shapeAllowed, newCells, copyRun } from './grid.ts';
 
 /** The second grid placed right of the first; null unless their heights match and the result fits the size cap. */
 export function joinRight(a: Grid, b: Grid): Grid | null {
@@ -7,8 +7,8 @@ export function joinRight(a: Grid, b: Grid): Grid | null {
   const width = a.width + b.width;
   const out = newCells(a.height * width);
   for (let r = 0; r < a.height; r++) {
-    out.set(a.cells.subarray(r * a.width, (r + 1) * a.width), r * width);
-    out.set(b.cells.subarray(r * b.width, (r + 1) * b.width), r * width + a.width);
+    copyRun(a.cells, r * a.width, out, r * width, a.width);
+    copyRun(b.cells, r * b.width, out, r * width + a.width, b.width);
   }
   return new Grid(a.height, width, out);
 }

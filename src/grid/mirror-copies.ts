@@ -2,7 +2,7 @@
  * Mirrored copies: a grid followed by its mirror image to the right, below, or both (a
  * kaleidoscope), and a square grid with its quarter turns around it.
  */
-import { Grid, shapeAllowed, newCells } from './grid.ts';
+import { Grid, shapeAllowed, newCells, copyRun } from './grid.ts';
 import { rotateClockwise, rotateCounterclockwise, rotateHalf } from './rotate-reflect.ts';
 
 /**
@@ -41,7 +41,7 @@ export function fourRotationsSquare(g: Grid): Grid | null {
     const cells = quadrants[q]!.cells;
     const top = q >= 2 ? n : 0;
     const left = q % 2 === 1 ? n : 0;
-    for (let r = 0; r < n; r++) out.set(cells.subarray(r * n, (r + 1) * n), (top + r) * size + left);
+    for (let r = 0; r < n; r++) copyRun(cells, r * n, out, (top + r) * size + left, n);
   }
   return new Grid(size, size, out);
 }

@@ -4,6 +4,15 @@
  * with every known cell and tells the colour of every unknown one.
  */
 import { Grid, copyCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
+
+/** Work arrays for the search below (it runs on many grids the search makes). */
+const knownWork = new WorkArray(Int32Array);
+const unknownWork = new WorkArray(Int32Array);
+const rowWork = new WorkArray(Int32Array);
+const columnWork = new WorkArray(Int32Array);
+const tileWork = new WorkArray(Int8Array);
+const stampWork = new WorkArray(Int32Array);
 
 /** How many known cells the search may compare in all, over every tile it tries. */
 const CHECK_BUDGET = 60_000;
@@ -25,8 +34,9 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
   let holes = 0;
   for (let i = 0; i < size; i++) if (cells[i] === hole) holes++;
   if (holes === 0 || holes === size) return null;
-  const known = new Int32Array(size - holes);
-  const unknown = new Int32Array(holes);
+  const knownCount = size - holes;
+  const known = knownWork.take(knownCount);
+  const unknown = unknownWork.take(holes);
   for (let i = 0, k = 0, u = 0; i < size; i++) {
     if (cells[i] === hole) unknown[u++] = i;
     else known[k++] = i;
@@ -34,22 +44,22 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
   // Compare known cells in a fixed scattered order: two cells of one tile cell then meet early,
   // so a wrong tile is usually rejected after a few comparisons.
   let seed = 12345;
-  for (let k = known.length - 1; k > 0; k--) {
+  for (let k = knownCount - 1; k > 0; k--) {
     seed = (seed * 1103515245 + 12345) & 0x7fffffff;
     const j = seed % (k + 1);
     const swap = known[k]!;
     known[k] = known[j]!;
     known[j] = swap;
   }
-  const knownRow = new Int32Array(known.length);
-  const knownColumn = new Int32Array(known.length);
-  for (let k = 0; k < known.length; k++) {
+  const knownRow = rowWork.take(knownCount);
+  const knownColumn = columnWork.take(knownCount);
+  for (let k = 0; k < knownCount; k++) {
     knownRow[k] = (known[k]! / width) | 0;
     knownColumn[k] = known[k]! - knownRow[k]! * width;
   }
-  const tile = new Int8Array(size);
+  const tile = tileWork.take(size);
   // stamp[t] === trial marks tile cell t as set during the current trial (no clearing between trials).
-  const stamp = new Int32Array(size);
+  const stamp = stampWork.take(size).fill(0, 0, size);
   let trial = 0;
   // A fixed budget of cell checks keeps the worst case bounded on large, nearly repeating grids.
   let budget = CHECK_BUDGET;
@@ -72,7 +82,7 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
       for (let shift = 0; shift < shifts; shift++) {
         trial++;
         let agrees = true;
-        for (let k = 0; k < known.length && agrees; k++) {
+        for (let k = 0; k < knownCount && agrees; k++) {
           if (--budget < 0) return null;
           const r = knownRow[k]!;
           const band = (r / ph) | 0;
@@ -85,10 +95,10 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
         }
         if (!agrees) continue;
         let covered = true;
-        for (let u = 0; u < unknown.length && covered; u++) if (stamp[classOf(unknown[u]!, ph, pw, shift)] !== trial) covered = false;
+        for (let u = 0; u < holes && covered; u++) if (stamp[classOf(unknown[u]!, ph, pw, shift)] !== trial) covered = false;
         if (!covered) continue;
         const out = copyCells(cells);
-        for (let u = 0; u < unknown.length; u++) out[unknown[u]!] = tile[classOf(unknown[u]!, ph, pw, shift)]!;
+        for (let u = 0; u < holes; u++) out[unknown[u]!] = tile[classOf(unknown[u]!, ph, pw, shift)]!;
         return new Grid(height, width, out);
       }
     }

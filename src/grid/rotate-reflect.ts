@@ -2,7 +2,7 @@
  * Quarter turns, the half turn and the four mirrors of a grid (left-right, top-bottom and the
  * two diagonals): the grid's cells moved, none changed.
  */
-import { Grid, newCells, copyCells } from './grid.ts';
+import { Grid, newCells, copyCells, copyRun } from './grid.ts';
 
 /** A quarter turn clockwise. */
 export function rotateClockwise(g: Grid): Grid {
@@ -35,7 +35,7 @@ export function rotateHalf(g: Grid): Grid {
 export function flipUpDown(g: Grid): Grid {
   const { height, width, cells } = g;
   const out = newCells(height * width);
-  for (let r = 0; r < height; r++) out.set(cells.subarray((height - 1 - r) * width, (height - r) * width), r * width);
+  for (let r = 0; r < height; r++) copyRun(cells, (height - 1 - r) * width, out, r * width, width);
   return new Grid(height, width, out);
 }
 

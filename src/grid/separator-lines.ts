@@ -3,7 +3,7 @@
  * panes of a window), the panes they leave between them, and the colour of each pane.
  */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, copyRun } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 export interface SeparatorLines {
@@ -29,6 +29,10 @@ export function gaps(flags: Uint8Array): [number, number][] {
   return runs;
 }
 
+/** Work buffers for the line colours (this runs on most grids the search makes). */
+let rowScratch = new Int8Array(32);
+let columnScratch = new Int8Array(32);
+
 /**
  * The separator lines of the grid: for each colour, its full rows and columns; a colour
  * qualifies when its lines leave at least two panes. Non-background colours are preferred,
@@ -36,8 +40,10 @@ export function gaps(flags: Uint8Array): [number, number][] {
  */
 export function findSeparatorLines(grid: Grid): SeparatorLines | undefined {
   const { height, width, cells } = grid;
-  const rowColour = new Int8Array(height).fill(-1);
-  const columnColour = new Int8Array(width).fill(-1);
+  if (rowScratch.length < height) rowScratch = new Int8Array(height);
+  if (columnScratch.length < width) columnScratch = new Int8Array(width);
+  const rowColour = rowScratch.fill(-1, 0, height);
+  const columnColour = columnScratch.fill(-1, 0, width);
   for (let r = 0; r < height; r++) {
     const first = cells[r * width]!;
     let full = true;
@@ -51,24 +57,46 @@ export function findSeparatorLines(grid: Grid): SeparatorLines | undefined {
     if (full) columnColour[c] = first;
   }
   const background = backgroundColour(grid);
-  let best: SeparatorLines | undefined;
+  // Scored from the line colours alone; only the winner's flags are built (this runs on most
+  // grids the search makes, and nearly every colour has no lines).
+  let bestColour = -1;
   let bestScore = -1;
   for (let colour = 0; colour < 10; colour++) {
-    const rows = newCells(height);
-    const columns = newCells(width);
-    let lines = 0;
-    for (let r = 0; r < height; r++) if (rowColour[r] === colour) (rows[r] = 1), lines++;
-    for (let c = 0; c < width; c++) if (columnColour[c] === colour) (columns[c] = 1), lines++;
-    if (lines === 0) continue;
-    const panes = gaps(rows).length * gaps(columns).length;
-    if (panes < 2) continue;
-    const score = (colour === background ? 0 : 1000) + lines;
+    const rowLines = linesOf(rowColour, height, colour);
+    const columnLines = linesOf(columnColour, width, colour);
+    if (rowLines + columnLines === 0) continue;
+    if (gapCount(rowColour, height, colour) * gapCount(columnColour, width, colour) < 2) continue;
+    const score = (colour === background ? 0 : 1000) + rowLines + columnLines;
     if (score > bestScore) {
       bestScore = score;
-      best = { colour, rows, columns };
+      bestColour = colour;
     }
   }
-  return best;
+  if (bestColour < 0) return undefined;
+  const rows = newCells(height);
+  const columns = newCells(width);
+  for (let r = 0; r < height; r++) if (rowColour[r] === bestColour) rows[r] = 1;
+  for (let c = 0; c < width; c++) if (columnColour[c] === bestColour) columns[c] = 1;
+  return { colour: bestColour, rows, columns };
+}
+
+/** How many of the first `length` lines have the colour. */
+function linesOf(lineColours: Int8Array, length: number, colour: number): number {
+  let n = 0;
+  for (let i = 0; i < length; i++) if (lineColours[i] === colour) n++;
+  return n;
+}
+
+/** How many runs of lines not of the colour the first `length` lines hold (the gaps of its flags, as {@link gaps} finds them). */
+function gapCount(lineColours: Int8Array, length: number, colour: number): number {
+  let runs = 0;
+  let open = false;
+  for (let i = 0; i < length; i++) {
+    const gap = lineColours[i] !== colour;
+    if (gap && !open) runs++;
+    open = gap;
+  }
+  return runs;
 }
 
 /** The panes between the separator lines in reading order, or null when there are no lines. */
@@ -83,7 +111,7 @@ export function splitAtSeparatorLines(grid: Grid): Grid[] | null {
       const h = bottom - top;
       const w = right - left;
       const out = newCells(h * w);
-      for (let r = 0; r < h; r++) out.set(cells.subarray((top + r) * width + left, (top + r) * width + right), r * w);
+      for (let r = 0; r < h; r++) copyRun(cells, (top + r) * width + left, out, r * w, right - left);
       parts.push(new Grid(h, w, out));
     }
   }

@@ -1,5 +1,5 @@
 /** Splitting a grid into equal parts, side by side or stacked, with or without one-cell separators between them. */
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, copyRun } from './grid.ts';
 
 /**
  * Splits a length into n equal parts: either exactly, or with one-cell separator lines
@@ -22,7 +22,7 @@ export function splitAcross(g: Grid, n: number): Grid[] | null {
   for (let p = 0; p < n; p++) {
     const left = p * (w + gap);
     const out = newCells(g.height * w);
-    for (let r = 0; r < g.height; r++) out.set(g.cells.subarray(r * g.width + left, r * g.width + left + w), r * w);
+    for (let r = 0; r < g.height; r++) copyRun(g.cells, r * g.width + left, out, r * w, w);
     parts.push(new Grid(g.height, w, out));
   }
   return parts;

@@ -43,7 +43,26 @@ export function symmetrise(g: Grid, leftRight: boolean): Grid {
  * The index maps of the grid-centred symmetries that fit the shape: left-right, top-bottom,
  * half turn, and for square grids the two diagonal mirrors.
  */
-function symmetryMaps(height: number, width: number): Int32Array[] {
+function symmetryMaps(height: number, width: number): readonly Int32Array[] {
+  const key = height * 4096 + width;
+  let maps = mapsByShape.get(key);
+  if (!maps) {
+    if (entriesKept + 5 * height * width > MAXIMUM_ENTRIES_KEPT) {
+      mapsByShape.clear();
+      entriesKept = 0;
+    }
+    mapsByShape.set(key, (maps = buildSymmetryMaps(height, width)));
+    for (const map of maps) entriesKept += map.length;
+  }
+  return maps;
+}
+
+/** The maps depend on the shape alone: built once per shape (a 30 by 30 shape's take 18 kB), at most 8 MB kept. */
+const mapsByShape = new Map<number, readonly Int32Array[]>();
+const MAXIMUM_ENTRIES_KEPT = 2_000_000;
+let entriesKept = 0;
+
+function buildSymmetryMaps(height: number, width: number): Int32Array[] {
   const n = height * width;
   const maps: Int32Array[] = [];
   const leftRight = new Int32Array(n);

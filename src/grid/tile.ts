@@ -1,6 +1,6 @@
 /** Tiling: a grid repeated to a size or a number of times, and the grid made of copies of itself where its cells are drawn. */
 import { backgroundColour } from './components.ts';
-import { Grid, getSizeCap, shapeAllowed, newCells } from './grid.ts';
+import { Grid, getSizeCap, shapeAllowed, newCells, copyRun } from './grid.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
 
 /** The grid repeated to fill `height` × `width`, starting at the top-left corner; null for a size outside 1 to the size cap. */
@@ -34,7 +34,7 @@ export function fractalTile(g: Grid): Grid | null {
   for (let br = 0; br < height; br++) {
     for (let bc = 0; bc < width; bc++) {
       if (cells[br * width + bc] === background) continue;
-      for (let r = 0; r < height; r++) out.set(cells.subarray(r * width, (r + 1) * width), (br * height + r) * outWidth + bc * width);
+      for (let r = 0; r < height; r++) copyRun(cells, r * width, out, (br * height + r) * outWidth + bc * width, width);
     }
   }
   return new Grid(outHeight, outWidth, out);

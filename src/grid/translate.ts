@@ -1,6 +1,6 @@
 /** Shifting the whole picture of a grid inside its frame. */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, copyRun } from './grid.ts';
 import type { Position } from './position.ts';
 
 /** The picture shifted by the offset in rows and columns; cells shifted out are lost, vacated cells become the background. */
@@ -14,7 +14,7 @@ export function translate(g: Grid, offset: Position): Grid {
   const columnTo = Math.min(width, width - dc);
   for (let r = Math.max(0, -dr); r < Math.min(height, height - dr); r++) {
     const source = r * width;
-    out.set(cells.subarray(source + columnFrom, source + columnTo), (r + dr) * width + columnFrom + dc);
+    copyRun(cells, source + columnFrom, out, (r + dr) * width + columnFrom + dc, columnTo - columnFrom);
   }
   return new Grid(height, width, out);
 }

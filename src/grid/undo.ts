@@ -3,14 +3,14 @@
  * must have been given (null when no grid gives it). Each answer is checked by running the
  * operation forwards, so an inverse never claims a grid that does not work.
  */
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, copyRun } from './grid.ts';
 import { mirrorCopies, fourRotationsSquare } from './mirror-copies.ts';
 import { scaleDown } from './scale.ts';
 import { tile } from './tile.ts';
 
 function topLeft(g: Grid, height: number, width: number): Grid {
   const out = newCells(height * width);
-  for (let r = 0; r < height; r++) out.set(g.cells.subarray(r * g.width, r * g.width + width), r * width);
+  for (let r = 0; r < height; r++) copyRun(g.cells, r * g.width, out, r * width, width);
   return new Grid(height, width, out);
 }
 
