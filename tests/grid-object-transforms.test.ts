@@ -19,7 +19,8 @@ describe('object transforms', () => {
   it('shiftObject moves the place and keeps the shape', () => {
     const s = shiftObject(L, -1, 4)!;
     expect([s.top, s.left]).toEqual([1, 7]);
-    expect(s.shape).toBe(L.shape);
+    expect(s.shape.equals(L.shape)).toBe(true);
+    expect(s.cells).toBe(L.cells);
   });
 
   it('shiftObject refuses to go further than twice the size cap', () => {

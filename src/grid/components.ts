@@ -35,7 +35,7 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   if (known) return known;
   const found = computeComponents(grid, options);
   analysisBytes += 96 + 8 * found.length;
-  for (const o of found) analysisBytes += 200 + o.shape.cells.length;
+  for (const o of found) analysisBytes += 200 + o.cells.length;
   if (!forGrid) grid.componentsMemo = forGrid = new Map();
   forGrid.set(key, found);
   return found;
@@ -97,7 +97,7 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
       const c = index - r * width;
       shape[(r - top) * w + (c - left)] = cells[index]!;
     }
-    objects.push(new GridObject(top, left, new Grid(h, w, shape)));
+    objects.push(new GridObject(top, left, h, w, shape));
   }
   return objects;
 }

@@ -78,7 +78,7 @@ export function cropToObject(g: Grid, o: GridObject): Grid | null {
 
 /** The object's own cells on a background of colour 0, the size of its bounding box. */
 export function objectPicture(o: GridObject): Grid {
-  const source = o.shape.cells;
+  const source = o.cells;
   const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? 0 : source[i]!;
   return new Grid(o.height, o.width, cells);

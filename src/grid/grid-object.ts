@@ -1,8 +1,12 @@
 /**
  * An object: a set of coloured cells at a position on a larger grid. Its `shape` grid is the
  * bounding box, with EMPTY where a cell is not part of the object.
+ *
+ * The box's cells are held directly and the `shape` Grid is made only when asked for: the search
+ * cuts every grid it keeps into objects several ways, and most of those objects are only counted,
+ * compared or painted, which the cells serve without a Grid of their own.
  */
-import { EMPTY, Grid } from './grid.ts';
+import { EMPTY, Grid, hashCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Work buffer for {@link GridObject.mainColour} (asked of most objects the search makes). */
@@ -11,39 +15,69 @@ const mainColourCounts = new Uint16Array(10);
 export class GridObject {
   readonly top: number;
   readonly left: number;
-  readonly shape: Grid;
+  /** The bounding box's height and width. */
+  readonly height: number;
+  readonly width: number;
+  /** The bounding box's cells, row-major, EMPTY where a cell is not part of the object; never changed. */
+  readonly cells: Uint8Array;
   /** Number of cells that belong to the object. */
   readonly size: number;
   readonly hash: number;
+  private shapeMemo: Grid | undefined;
 
-  constructor(top: number, left: number, shape: Grid) {
+  /** The object whose bounding box is the grid, at (top, left). */
+  constructor(top: number, left: number, shape: Grid);
+  /** An object from its bounding box's cells (taken over, not copied), with no Grid made for them yet. */
+  constructor(top: number, left: number, height: number, width: number, cells: Uint8Array);
+  constructor(top: number, left: number, shapeOrHeight: Grid | number, width?: number, cells?: Uint8Array) {
     this.top = top;
     this.left = left;
-    this.shape = shape;
-    let size = 0;
-    const cells = shape.cells;
-    for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) size++;
-    this.size = size;
-    this.hash = (Math.imul(shape.hash ^ (top * 64 + left), 0x85ebca6b) ^ 0x5bd1e995) >>> 0;
+    if (typeof shapeOrHeight === 'number') {
+      this.height = shapeOrHeight;
+      this.width = width!;
+      this.cells = cells!;
+      this.shapeMemo = undefined;
+      this.size = countFilled(cells!);
+      this.hash = objectHash(hashCells(shapeOrHeight, width!, cells!), top, left);
+    } else {
+      this.height = shapeOrHeight.height;
+      this.width = shapeOrHeight.width;
+      this.cells = shapeOrHeight.cells;
+      this.shapeMemo = shapeOrHeight;
+      this.size = countFilled(shapeOrHeight.cells);
+      this.hash = objectHash(shapeOrHeight.hash, top, left);
+    }
   }
 
-  get height(): number {
-    return this.shape.height;
-  }
-
-  get width(): number {
-    return this.shape.width;
+  /** The bounding box as a grid (made on first use). */
+  get shape(): Grid {
+    return (this.shapeMemo ??= new Grid(this.height, this.width, this.cells));
   }
 
   equals(other: GridObject): boolean {
-    return this.top === other.top && this.left === other.left && this.shape.equals(other.shape);
+    if (this === other) return true;
+    if (this.hash !== other.hash || this.top !== other.top || this.left !== other.left || this.height !== other.height || this.width !== other.width) return false;
+    const a = this.cells;
+    const b = other.cells;
+    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+    return true;
   }
 
   /** The colour of the object's most frequent cell (lowest colour on ties). */
   get mainColour(): number {
     const counts = mainColourCounts.fill(0);
-    const cells = this.shape.cells;
+    const cells = this.cells;
     for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) counts[cells[i]!]!++;
     return mostFrequentColour(counts);
   }
+}
+
+function countFilled(cells: Uint8Array): number {
+  let size = 0;
+  for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) size++;
+  return size;
+}
+
+function objectHash(shapeHash: number, top: number, left: number): number {
+  return (Math.imul(shapeHash ^ (top * 64 + left), 0x85ebca6b) ^ 0x5bd1e995) >>> 0;
 }

@@ -7,12 +7,12 @@ import { EMPTY, type Grid } from './grid.ts';
 
 /** Whether any cell of the object has the colour. */
 export function hasColour(o: GridObject, colour: number): boolean {
-  return o.shape.cells.indexOf(colour) >= 0;
+  return o.cells.indexOf(colour) >= 0;
 }
 
 /** How many cells of the object have the colour. */
 export function countColourInObject(o: GridObject, colour: number): number {
-  const cells = o.shape.cells;
+  const cells = o.cells;
   let n = 0;
   for (let i = 0; i < cells.length; i++) if (cells[i] === colour) n++;
   return n;
@@ -21,7 +21,7 @@ export function countColourInObject(o: GridObject, colour: number): number {
 /** How many different colours the object has. */
 export function colourCount(o: GridObject): number {
   let seen = 0;
-  const cells = o.shape.cells;
+  const cells = o.cells;
   for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) seen |= 1 << cells[i]!;
   let count = 0;
   for (; seen; seen &= seen - 1) count++;
@@ -30,7 +30,7 @@ export function colourCount(o: GridObject): number {
 
 /** Whether the object fills its whole bounding box. */
 export function isSolidRectangle(o: GridObject): boolean {
-  return o.size === o.shape.cells.length;
+  return o.size === o.cells.length;
 }
 
 /** Whether the object is a straight line one cell thick: a single full row or column. */
@@ -41,15 +41,15 @@ export function isLine(o: GridObject): boolean {
 /** Whether two objects occupy the same cells of their boxes, colours and places aside. */
 export function sameShape(a: GridObject, b: GridObject): boolean {
   if (a.height !== b.height || a.width !== b.width || a.size !== b.size) return false;
-  const x = a.shape.cells;
-  const y = b.shape.cells;
+  const x = a.cells;
+  const y = b.cells;
   for (let i = 0; i < x.length; i++) if ((x[i] === EMPTY) !== (y[i] === EMPTY)) return false;
   return true;
 }
 
 /** Whether a cell of the object lies on the outer border of the grid. */
 export function touchesEdge(o: GridObject, g: Grid): boolean {
-  const { height, width, cells } = o.shape;
+  const { height, width, cells } = o;
   for (let r = 0; r < height; r++) {
     const row = o.top + r;
     for (let c = 0; c < width; c++) {
@@ -63,7 +63,7 @@ export function touchesEdge(o: GridObject, g: Grid): boolean {
 
 /** Whether the object has a neighbour (edge or corner) of a colour on a grid, outside itself. */
 export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
-  const shape = o.shape;
+  const shape = o;
   const { height, width } = g;
   for (let r = 0; r < shape.height; r++) {
     for (let c = 0; c < shape.width; c++) {

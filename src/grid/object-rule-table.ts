@@ -120,7 +120,7 @@ export function objectsOf(g: Grid, grouping: ObjectGrouping): readonly GridObjec
 
 /** The pattern of an object's box: rows joined by `/`, `x` for its cells and `.` for the rest. */
 export function shapePattern(o: GridObject): string {
-  const { height, width, cells } = o.shape;
+  const { height, width, cells } = o;
   let text = '';
   for (let r = 0; r < height; r++) {
     if (r > 0) text += '/';
@@ -198,7 +198,7 @@ function insideFlags(g: Grid, objects: readonly GridObject[]): number[] {
   };
   return objects.map((o) => {
     if (touchesEdge(o, g)) return 0;
-    const shape = o.shape;
+    const shape = o;
     for (let r = 0; r < shape.height; r++) {
       for (let c = 0; c < shape.width; c++) {
         if (shape.cells[r * shape.width + c] === EMPTY) continue;
@@ -303,7 +303,7 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   if (input.height !== output.height || input.width !== output.width) return found;
   const { width } = input;
   const background = backgroundColour(input);
-  const shape = o.shape;
+  const shape = o;
   let kept = true;
   let single = -1;
   for (let r = 0; r < shape.height; r++) {
@@ -332,7 +332,7 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
 }
 
 function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
-  const shape = o.shape;
+  const shape = o;
   for (let r = 0; r < shape.height; r++) {
     for (let c = 0; c < shape.width; c++) {
       const v = shape.cells[r * shape.width + c]!;

@@ -8,10 +8,10 @@ import { flipLeftRight, flipUpDown } from './rotate-reflect.ts';
 
 /** The same object with every cell in the colour. */
 export function recolourObject(o: GridObject, colour: number): GridObject {
-  const source = o.shape.cells;
+  const source = o.cells;
   const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = source[i] === EMPTY ? EMPTY : colour;
-  return new GridObject(o.top, o.left, new Grid(o.height, o.width, cells));
+  return new GridObject(o.top, o.left, o.height, o.width, cells);
 }
 
 /**
@@ -23,7 +23,7 @@ export function shiftObject(o: GridObject, rows: number, columns: number): GridO
   const top = o.top + rows;
   const left = o.left + columns;
   if (Math.abs(top) > far || Math.abs(left) > far) return null;
-  return new GridObject(top, left, o.shape);
+  return new GridObject(top, left, o.height, o.width, o.cells);
 }
 
 /** The object mirrored left to right in place, within its bounding box. */

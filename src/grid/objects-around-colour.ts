@@ -20,7 +20,7 @@ export interface ObjectsAroundColour {
 
 /** The colour of a one-colour object: the colour of its first cell in reading order. */
 export function firstCellColour(o: GridObject): number {
-  const cells = o.shape.cells;
+  const cells = o.cells;
   return cells[cells.findIndex((v) => v !== EMPTY)]!;
 }
 

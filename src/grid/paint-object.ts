@@ -21,7 +21,7 @@ export function paintObjectInto(
   rowShift = 0,
   columnShift = 0,
 ): void {
-  const shape = object.shape;
+  const shape = object;
   const top = object.top + rowShift;
   const left = object.left + columnShift;
   const rowFrom = Math.max(0, -top);

@@ -25,7 +25,7 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
   const taken = newCells(height * width);
   for (const index of order) {
     const o = objects[index]!;
-    const shape = o.shape;
+    const shape = o;
     const limit = rowStep !== 0 ? height : width;
     let distance = 0;
     for (let d = 1; d <= limit; d++) {

@@ -31,7 +31,7 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
   const moves: number[] = [];
   for (let i = 0; i < objects.length; i++) {
     const o = objects[i]!;
-    const shape = o.shape;
+    const shape = o;
     if (scene.ofTarget[i]) {
       moves.push(0, 0);
       continue;

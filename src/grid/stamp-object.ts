@@ -17,11 +17,11 @@ export function stampObjectOnColour(g: Grid, template: GridObject, colour: numbe
   for (const m of markers) {
     for (let r = 0; r < m.height; r++) {
       for (let c = 0; c < m.width; c++) {
-        if (m.shape.cells[r * m.width + c] !== EMPTY) out[(m.top + r) * width + m.left + c] = background;
+        if (m.cells[r * m.width + c] !== EMPTY) out[(m.top + r) * width + m.left + c] = background;
       }
     }
   }
-  const shape = template.shape;
+  const shape = template;
   for (const m of markers) {
     // Centres of the two bounding boxes meet; odd differences round toward the top left.
     const top = m.top + Math.floor((m.height - shape.height) / 2);

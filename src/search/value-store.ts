@@ -34,7 +34,7 @@ export interface Candidate {
  */
 export function approximateBytes(value: unknown): number {
   if (value instanceof Grid) return gridBytes(value);
-  if (value instanceof GridObject) return 64 + gridBytes(value.shape);
+  if (value instanceof GridObject) return 64 + 120 + value.cells.length;
   if (Array.isArray(value)) {
     let sum = 48 + 8 * value.length;
     for (const v of value) sum += approximateBytes(v);
