@@ -66,9 +66,10 @@ export class IntermediateTables {
   /**
    * Tables from a kept grid candidate's values (demonstrations first, then test inputs) to the
    * outputs; empty when the candidate is too dear, a value's shape differs from its output's, or
-   * nothing is learned.
+   * nothing is learned. Only tables with which the program (candidate, applying call, table) costs
+   * at most `maxTotal` bits are returned, and learning stops early on the others.
    */
-  learn(values: readonly unknown[], cost: number): IntermediateTable[] {
+  learn(values: readonly unknown[], cost: number, maxTotal = Infinity): IntermediateTable[] {
     if (!this.open || cost > this.limits.maxCost) return [];
     const outputs = this.outputs;
     let equal = true;
@@ -99,9 +100,9 @@ export class IntermediateTables {
       return found;
     }
     const cell = this.appliers.get('CellRule');
-    if (cell) for (const t of learnCellRules(puzzle, 1)) found.push({ literal: t.literal, bits: t.bits, production: cell });
+    if (cell) for (const t of learnCellRules(puzzle, 1, maxTotal - cost - cell.bits)) found.push({ literal: t.literal, bits: t.bits, production: cell });
     const object = this.appliers.get('ObjectRule');
-    if (object) for (const t of learnObjectRules(puzzle, 1)) found.push({ literal: t.literal, bits: t.bits, production: object });
+    if (object) for (const t of learnObjectRules(puzzle, 1, maxTotal - cost - object.bits)) found.push({ literal: t.literal, bits: t.bits, production: object });
     return found;
   }
 }

@@ -47,7 +47,7 @@ import {
 } from '../grid/object-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 import type { Puzzle } from '../tasks/task.ts';
-import { tableBits } from './table-bits.ts';
+import { cellRuleBitsAtLeast, tableBits } from './table-bits.ts';
 
 export interface LearnedTable {
   readonly literal: LiteralValue;
@@ -134,6 +134,19 @@ function unpackKey(packed: number, count: number): number[] {
  * cell with that key kept its colour, else to the one colour they all became.
  */
 export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
+  const found = learnCellRuleWithin(puzzle, features, cache, Infinity);
+  return found === OVER_BUDGET ? undefined : found;
+}
+
+/** A rule the demonstrations show, but dearer than the budget it was learned under. */
+const OVER_BUDGET = Symbol('over budget');
+
+/**
+ * As {@link learnCellRule}, but a rule dearer than `maxBits` comes back as OVER_BUDGET without
+ * its literal being built or its bits counted when its number of entries already says so
+ * (`cellRuleBitsAtLeast`): learning tables from many made grids finds many such rules.
+ */
+function learnCellRuleWithin(puzzle: Puzzle, features: readonly CellFeature[], cache: FeatureCache, maxBits: number): LiteralValue | undefined | typeof OVER_BUDGET {
   const first = features[0]?.name;
   if (!sameShapedPairs(puzzle) || first === undefined || !isFirstFeature(first)) return undefined;
   const byColour = first === 'colour';
@@ -173,17 +186,24 @@ export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], 
     const columns = features.map((f) => cache.of(g, f));
     for (let i = 0; i < g.cells.length; i++) if (!table.has(packedKeyAt(columns, i))) return undefined;
   }
-  const entries: CellRuleEntry[] = [];
   let changes = false;
+  for (const [packed, state] of table) {
+    if (byColour ? packed % 16 !== state : (state & KEPT) === 0) {
+      changes = true;
+      break;
+    }
+  }
+  if (!changes) return undefined;
+  if (cellRuleBitsAtLeast(features, table.size) > maxBits) return OVER_BUDGET;
+  const entries: CellRuleEntry[] = [];
   for (const [packed, state] of table) {
     const key = unpackKey(packed, features.length);
     const colour = byColour ? state : state & KEPT ? KEEP : state & CONFLICT;
-    if (byColour ? key[0] !== colour : colour !== KEEP) changes = true;
     entries.push({ key, colour });
   }
-  if (!changes) return undefined;
   entries.sort((a, b) => compareKeys(a.key, b.key));
-  return { type: 'CellRule', features: [...features], entries };
+  const literal: LiteralValue = { type: 'CellRule', features: [...features], entries };
+  return maxBits === Infinity || tableBits(literal)! <= maxBits ? literal : OVER_BUDGET;
 }
 
 /** In a background-first rule's learning state: the low bits hold a colour, or CONFLICT. */
@@ -200,8 +220,13 @@ const KEPT = 16;
  * when one of its features works alone: with the same first feature the longer table holds at
  * least as many entries, each dearer. (Across the two first features this is a shortcut for
  * speed, not a proof: a longer background-first rule could undercut a colour-first one.)
+ *
+ * With `maxBits`, only tables of at most that many bits are returned: a rule whose number of
+ * entries already puts it over is neither built nor priced (learning tables from made grids finds
+ * many). The rules tried are the same as without the budget, so the tables returned are too, less
+ * those over it.
  */
-export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
+export function learnCellRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
   const cache = new FeatureCache();
   const grids = [...puzzle.train.map((p) => p.input), ...puzzle.testInputs];
@@ -215,8 +240,9 @@ export function learnCellRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
   const tryFeatures = (extra: readonly CellFeature[]): boolean => {
     let works = false;
     for (const name of FIRST_FEATURES) {
-      const literal = learnCellRule(puzzle, [{ name }, ...extra], cache);
-      if (literal) found.push({ literal, bits: tableBits(literal)! });
+      const literal = learnCellRuleWithin(puzzle, [{ name }, ...extra], cache, maxBits);
+      if (literal !== undefined && literal !== OVER_BUDGET) found.push({ literal, bits: tableBits(literal)! });
+      // A rule over the budget still works: the longer sets it rules out would cost more again.
       works ||= literal !== undefined;
     }
     return works;
@@ -293,8 +319,8 @@ function learnObjectRuleFrom(
   return { type: 'ObjectRule', grouping, property, entries };
 }
 
-/** The cheapest object rules the demonstrations show (at most `limit`), cheapest first. */
-export function learnObjectRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
+/** The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each), cheapest first. */
+export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
   const found: LearnedTable[] = [];
   for (const grouping of OBJECT_GROUPINGS) {
@@ -323,7 +349,9 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2): LearnedTable[] {
     if (!usable) continue;
     for (const property of OBJECT_PROPERTIES) {
       const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, property);
-      if (literal) found.push({ literal, bits: tableBits(literal)! });
+      if (!literal) continue;
+      const bits = tableBits(literal)!;
+      if (bits <= maxBits) found.push({ literal, bits });
     }
   }
   return cheapestDistinct(found, limit, puzzle);

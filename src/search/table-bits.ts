@@ -87,6 +87,22 @@ function outcomeBits(o: ObjectOutcome, c: number): number {
   }
 }
 
+/**
+ * A lower bound on the bits of a cell rule with these features and at least `entries` entries,
+ * whatever its keys and colours: the features' bits plus, per entry, one bit per key value at
+ * least (more for counts) and one for what it writes. Learning stops once a table under way
+ * passes a budget by this bound: more entries only cost more.
+ */
+export function cellRuleBitsAtLeast(features: readonly { readonly name: Parameters<typeof featureValues>[0]; readonly colour?: number }[], entries: number): number {
+  let bits = gammaBits(features.length) + FIRST_FEATURE_BITS;
+  let perEntry = 1;
+  for (let i = 0; i < features.length; i++) {
+    if (i > 0) bits += FEATURE_CHOICE_BITS + (features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
+    perEntry += featureValueBits(featureValues(features[i]!.name), 1, 0);
+  }
+  return bits + entries * perEntry;
+}
+
 /** The bits of a table literal, or undefined for a literal that is not a table. */
 export function tableBits(l: LiteralValue): number | undefined {
   switch (l.type) {
