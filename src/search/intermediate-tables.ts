@@ -67,7 +67,7 @@ export class IntermediateTables {
    * Tables from a kept grid candidate's values (demonstrations first, then test inputs) to the
    * outputs; empty when the candidate is too dear, a value's shape differs from its output's, or
    * nothing is learned. Only tables with which the program (candidate, applying call, table) costs
-   * at most `maxTotal` bits are returned, and learning stops early on the others.
+   * at most `maxTotal` bits are returned; a cell rule whose entries already put it over is not built.
    */
   learn(values: readonly unknown[], cost: number, maxTotal = Infinity): IntermediateTable[] {
     if (!this.open || cost > this.limits.maxCost) return [];

@@ -14,7 +14,7 @@
  * the number of features after the cell's own colour, and γ(n) = 2⌊log₂ n⌋ + 1 is the length of
  * the Elias gamma code of a whole number n ≥ 1.
  */
-import { featureValues, EDGE, KEEP, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 
@@ -90,10 +90,10 @@ function outcomeBits(o: ObjectOutcome, c: number): number {
 /**
  * A lower bound on the bits of a cell rule with these features and at least `entries` entries,
  * whatever its keys and colours: the features' bits plus, per entry, one bit per key value at
- * least (more for counts) and one for what it writes. Learning stops once a table under way
- * passes a budget by this bound: more entries only cost more.
+ * least (more for counts) and one for what it writes. A learned rule that passes a budget by this
+ * bound is not built (learned-tables.ts).
  */
-export function cellRuleBitsAtLeast(features: readonly { readonly name: Parameters<typeof featureValues>[0]; readonly colour?: number }[], entries: number): number {
+export function cellRuleBitsAtLeast(features: readonly CellFeature[], entries: number): number {
   let bits = gammaBits(features.length) + FIRST_FEATURE_BITS;
   let perEntry = 1;
   for (let i = 0; i < features.length; i++) {

@@ -34,6 +34,7 @@ export interface Candidate {
  */
 export function approximateBytes(value: unknown): number {
   if (value instanceof Grid) return gridBytes(value);
+  // The object, and its box as a grid would hold it (counted whether or not its shape Grid is made yet).
   if (value instanceof GridObject) return 64 + 120 + value.cells.length;
   if (Array.isArray(value)) {
     let sum = 48 + 8 * value.length;
