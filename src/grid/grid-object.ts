@@ -30,23 +30,15 @@ export class GridObject {
   /** An object from its bounding box's cells (taken over, not copied), with no Grid made for them yet. */
   constructor(top: number, left: number, height: number, width: number, cells: Uint8Array);
   constructor(top: number, left: number, shapeOrHeight: Grid | number, width?: number, cells?: Uint8Array) {
+    const shape = typeof shapeOrHeight === 'number' ? undefined : shapeOrHeight;
     this.top = top;
     this.left = left;
-    if (typeof shapeOrHeight === 'number') {
-      this.height = shapeOrHeight;
-      this.width = width!;
-      this.cells = cells!;
-      this.shapeMemo = undefined;
-      this.size = countFilled(cells!);
-      this.hash = objectHash(hashCells(shapeOrHeight, width!, cells!), top, left);
-    } else {
-      this.height = shapeOrHeight.height;
-      this.width = shapeOrHeight.width;
-      this.cells = shapeOrHeight.cells;
-      this.shapeMemo = shapeOrHeight;
-      this.size = countFilled(shapeOrHeight.cells);
-      this.hash = objectHash(shapeOrHeight.hash, top, left);
-    }
+    this.height = shape ? shape.height : (shapeOrHeight as number);
+    this.width = shape ? shape.width : width!;
+    this.cells = shape ? shape.cells : cells!;
+    this.shapeMemo = shape;
+    this.size = countFilled(this.cells);
+    this.hash = objectHash(shape ? shape.hash : hashCells(this.height, this.width, this.cells), top, left);
   }
 
   /** The bounding box as a grid (made on first use). */

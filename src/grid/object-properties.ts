@@ -63,11 +63,10 @@ export function touchesEdge(o: GridObject, g: Grid): boolean {
 
 /** Whether the object has a neighbour (edge or corner) of a colour on a grid, outside itself. */
 export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
-  const shape = o;
   const { height, width } = g;
-  for (let r = 0; r < shape.height; r++) {
-    for (let c = 0; c < shape.width; c++) {
-      if (shape.cells[r * shape.width + c] === EMPTY) continue;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      if (o.cells[r * o.width + c] === EMPTY) continue;
       const row = o.top + r;
       const column = o.left + c;
       for (let nr = row - 1; nr <= row + 1; nr++) {
@@ -76,7 +75,7 @@ export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
           if (nc < 0 || nc >= width || g.cells[nr * width + nc] !== colour) continue;
           const sr = nr - o.top;
           const sc = nc - o.left;
-          const inside = sr >= 0 && sr < shape.height && sc >= 0 && sc < shape.width && shape.cells[sr * shape.width + sc] !== EMPTY;
+          const inside = sr >= 0 && sr < o.height && sc >= 0 && sc < o.width && o.cells[sr * o.width + sc] !== EMPTY;
           if (!inside) return true;
         }
       }

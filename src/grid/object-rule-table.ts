@@ -198,10 +198,9 @@ function insideFlags(g: Grid, objects: readonly GridObject[]): number[] {
   };
   return objects.map((o) => {
     if (touchesEdge(o, g)) return 0;
-    const shape = o;
-    for (let r = 0; r < shape.height; r++) {
-      for (let c = 0; c < shape.width; c++) {
-        if (shape.cells[r * shape.width + c] === EMPTY) continue;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        if (o.cells[r * o.width + c] === EMPTY) continue;
         const row = o.top + r;
         const column = o.left + c;
         if (open(row - 1, column) || open(row + 1, column) || open(row, column - 1) || open(row, column + 1)) return 0;
@@ -303,12 +302,11 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   if (input.height !== output.height || input.width !== output.width) return found;
   const { width } = input;
   const background = backgroundColour(input);
-  const shape = o;
   let kept = true;
   let single = -1;
-  for (let r = 0; r < shape.height; r++) {
-    for (let c = 0; c < shape.width; c++) {
-      if (shape.cells[r * shape.width + c] === EMPTY) continue;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      if (o.cells[r * o.width + c] === EMPTY) continue;
       const i = (o.top + r) * width + o.left + c;
       const after = output.cells[i]!;
       if (after !== input.cells[i]) kept = false;
@@ -320,8 +318,8 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   if (single === background) found.push({ kind: 'remove' });
   else if (single >= 0) found.push({ kind: 'recolour', colour: single });
   const moves: [number, number][] = [];
-  for (let dr = -o.top; dr + o.top + shape.height <= input.height; dr++) {
-    for (let dc = -o.left; dc + o.left + shape.width <= input.width; dc++) {
+  for (let dr = -o.top; dr + o.top + o.height <= input.height; dr++) {
+    for (let dc = -o.left; dc + o.left + o.width <= input.width; dc++) {
       if (dr === 0 && dc === 0) continue;
       if (matchesAt(o, output, o.top + dr, o.left + dc)) moves.push([dr, dc]);
     }
@@ -332,10 +330,9 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
 }
 
 function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
-  const shape = o;
-  for (let r = 0; r < shape.height; r++) {
-    for (let c = 0; c < shape.width; c++) {
-      const v = shape.cells[r * shape.width + c]!;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      const v = o.cells[r * o.width + c]!;
       if (v !== EMPTY && g.cells[(top + r) * g.width + left + c] !== v) return false;
     }
   }

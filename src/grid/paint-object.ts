@@ -21,18 +21,17 @@ export function paintObjectInto(
   rowShift = 0,
   columnShift = 0,
 ): void {
-  const shape = object;
   const top = object.top + rowShift;
   const left = object.left + columnShift;
   const rowFrom = Math.max(0, -top);
-  const rowTo = Math.min(shape.height, height - top);
+  const rowTo = Math.min(object.height, height - top);
   const columnFrom = Math.max(0, -left);
-  const columnTo = Math.min(shape.width, width - left);
+  const columnTo = Math.min(object.width, width - left);
   for (let r = rowFrom; r < rowTo; r++) {
-    const source = r * shape.width;
+    const source = r * object.width;
     const target = (top + r) * width + left;
     for (let c = columnFrom; c < columnTo; c++) {
-      const v = shape.cells[source + c]!;
+      const v = object.cells[source + c]!;
       if (v !== EMPTY) cells[target + c] = colour ?? v;
     }
   }

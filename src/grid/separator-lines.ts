@@ -5,6 +5,7 @@
 import { backgroundColour } from './components.ts';
 import { Grid, newCells, copyRun } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
+import { WorkArray } from './work-array.ts';
 
 export interface SeparatorLines {
   readonly colour: number;
@@ -29,9 +30,9 @@ export function gaps(flags: Uint8Array): [number, number][] {
   return runs;
 }
 
-/** Work buffers for the line colours (this runs on most grids the search makes). */
-let rowScratch = new Int8Array(32);
-let columnScratch = new Int8Array(32);
+/** Work arrays for the line colours (this runs on most grids the search makes). */
+const rowColours = new WorkArray(Int8Array);
+const columnColours = new WorkArray(Int8Array);
 
 /**
  * The separator lines of the grid: for each colour, its full rows and columns; a colour
@@ -40,10 +41,8 @@ let columnScratch = new Int8Array(32);
  */
 export function findSeparatorLines(grid: Grid): SeparatorLines | undefined {
   const { height, width, cells } = grid;
-  if (rowScratch.length < height) rowScratch = new Int8Array(height);
-  if (columnScratch.length < width) columnScratch = new Int8Array(width);
-  const rowColour = rowScratch.fill(-1, 0, height);
-  const columnColour = columnScratch.fill(-1, 0, width);
+  const rowColour = rowColours.take(height).fill(-1, 0, height);
+  const columnColour = columnColours.take(width).fill(-1, 0, width);
   for (let r = 0; r < height; r++) {
     const first = cells[r * width]!;
     let full = true;

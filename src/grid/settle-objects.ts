@@ -25,14 +25,13 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
   const taken = newCells(height * width);
   for (const index of order) {
     const o = objects[index]!;
-    const shape = o;
     const limit = rowStep !== 0 ? height : width;
     let distance = 0;
     for (let d = 1; d <= limit; d++) {
       let fits = true;
-      for (let r = 0; r < shape.height && fits; r++) {
-        for (let c = 0; c < shape.width; c++) {
-          if (shape.cells[r * shape.width + c] === EMPTY) continue;
+      for (let r = 0; r < o.height && fits; r++) {
+        for (let c = 0; c < o.width; c++) {
+          if (o.cells[r * o.width + c] === EMPTY) continue;
           const gr = o.top + r + rowStep * d;
           const gc = o.left + c + columnStep * d;
           if (gr < 0 || gr >= height || gc < 0 || gc >= width || taken[gr * width + gc]) {
@@ -44,9 +43,9 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
       if (!fits) break;
       distance = d;
     }
-    for (let r = 0; r < shape.height; r++) {
-      for (let c = 0; c < shape.width; c++) {
-        const v = shape.cells[r * shape.width + c]!;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        const v = o.cells[r * o.width + c]!;
         if (v === EMPTY) continue;
         const i = (o.top + r + rowStep * distance) * width + (o.left + c + columnStep * distance);
         out[i] = v;

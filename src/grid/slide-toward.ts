@@ -31,7 +31,6 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
   const moves: number[] = [];
   for (let i = 0; i < objects.length; i++) {
     const o = objects[i]!;
-    const shape = o;
     if (scene.ofTarget[i]) {
       moves.push(0, 0);
       continue;
@@ -49,9 +48,9 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
           stopped = true;
           break;
         }
-        for (let r = 0; r < shape.height && !stopped; r++) {
-          for (let c = 0; c < shape.width; c++) {
-            if (shape.cells[r * shape.width + c] === EMPTY) continue;
+        for (let r = 0; r < o.height && !stopped; r++) {
+          for (let c = 0; c < o.width; c++) {
+            if (o.cells[r * o.width + c] === EMPTY) continue;
             const nr = o.top + r + k * dr;
             const nc = o.left + c + k * dc;
             if (nr < 0 || nr >= height || nc < 0 || nc >= width) {

@@ -21,18 +21,17 @@ export function stampObjectOnColour(g: Grid, template: GridObject, colour: numbe
       }
     }
   }
-  const shape = template;
   for (const m of markers) {
     // Centres of the two bounding boxes meet; odd differences round toward the top left.
-    const top = m.top + Math.floor((m.height - shape.height) / 2);
-    const left = m.left + Math.floor((m.width - shape.width) / 2);
-    for (let r = 0; r < shape.height; r++) {
+    const top = m.top + Math.floor((m.height - template.height) / 2);
+    const left = m.left + Math.floor((m.width - template.width) / 2);
+    for (let r = 0; r < template.height; r++) {
       const row = top + r;
       if (row < 0 || row >= height) continue;
-      for (let c = 0; c < shape.width; c++) {
+      for (let c = 0; c < template.width; c++) {
         const column = left + c;
         if (column < 0 || column >= width) continue;
-        const v = shape.cells[r * shape.width + c]!;
+        const v = template.cells[r * template.width + c]!;
         if (v !== EMPTY) out[row * width + column] = v;
       }
     }

@@ -351,8 +351,8 @@ export class Enumerator {
 
   /** Wraps a kept grid in each table learned from its values to the outputs; keeps those that reproduce them as pending solutions. */
   private learnTables(found: Candidate): void {
+    // Only tables within the cost limit come back (learn checks it, sparing the dear ones' work).
     for (const table of this.intermediate!.learn(found.values, found.cost, this.limits.maxCost)) {
-      if (found.cost + table.production.bits + table.bits > this.limits.maxCost) continue;
       const value = literalValue(table.literal);
       const leaf = this.leaf(table.literal.type, table.bits, new Array<unknown>(this.examples).fill(value), { kind: 'literal', literal: table.literal });
       const candidate = this.wrap(found, [{ production: table.production, rest: [leaf], bits: table.production.bits }]);

@@ -95,7 +95,9 @@ export class IntermediateTables {
     const palette = this.appliers.get('Palette') && demonstratedPalette(puzzle);
     if (palette) {
       const literal: LiteralValue = { type: 'Palette', pairs: palette };
-      found.push({ literal, bits: tableBits(literal)!, production: this.appliers.get('Palette')! });
+      const production = this.appliers.get('Palette')!;
+      const bits = tableBits(literal)!;
+      if (cost + production.bits + bits <= maxTotal) found.push({ literal, bits, production });
       // A colour map explains every cell: a cell or object rule could only cost more.
       return found;
     }

@@ -47,6 +47,7 @@ import {
 } from '../grid/object-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 import type { Puzzle } from '../tasks/task.ts';
+import { distinctAttempts } from './distinct-attempts.ts';
 import { cellRuleBitsAtLeast, tableBits } from './table-bits.ts';
 
 export interface LearnedTable {
@@ -135,7 +136,7 @@ function unpackKey(packed: number, count: number): number[] {
  */
 export function learnCellRule(puzzle: Puzzle, features: readonly CellFeature[], cache = new FeatureCache()): LiteralValue | undefined {
   const found = learnCellRuleWithin(puzzle, features, cache, Infinity);
-  return found === OVER_BUDGET ? undefined : found;
+  return found === OVER_BUDGET ? undefined : found?.literal;
 }
 
 /** A rule the demonstrations show, but dearer than the budget it was learned under. */
@@ -146,7 +147,7 @@ const OVER_BUDGET = Symbol('over budget');
  * its literal being built or its bits counted when its number of entries already says so
  * (`cellRuleBitsAtLeast`): learning tables from many made grids finds many such rules.
  */
-function learnCellRuleWithin(puzzle: Puzzle, features: readonly CellFeature[], cache: FeatureCache, maxBits: number): LiteralValue | undefined | typeof OVER_BUDGET {
+function learnCellRuleWithin(puzzle: Puzzle, features: readonly CellFeature[], cache: FeatureCache, maxBits: number): LearnedTable | undefined | typeof OVER_BUDGET {
   const first = features[0]?.name;
   if (!sameShapedPairs(puzzle) || first === undefined || !isFirstFeature(first)) return undefined;
   const byColour = first === 'colour';
@@ -203,7 +204,8 @@ function learnCellRuleWithin(puzzle: Puzzle, features: readonly CellFeature[], c
   }
   entries.sort((a, b) => compareKeys(a.key, b.key));
   const literal: LiteralValue = { type: 'CellRule', features: [...features], entries };
-  return maxBits === Infinity || tableBits(literal)! <= maxBits ? literal : OVER_BUDGET;
+  const bits = tableBits(literal)!;
+  return bits <= maxBits ? { literal, bits } : OVER_BUDGET;
 }
 
 /** In a background-first rule's learning state: the low bits hold a colour, or CONFLICT. */
@@ -240,10 +242,10 @@ export function learnCellRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
   const tryFeatures = (extra: readonly CellFeature[]): boolean => {
     let works = false;
     for (const name of FIRST_FEATURES) {
-      const literal = learnCellRuleWithin(puzzle, [{ name }, ...extra], cache, maxBits);
-      if (literal !== undefined && literal !== OVER_BUDGET) found.push({ literal, bits: tableBits(literal)! });
+      const table = learnCellRuleWithin(puzzle, [{ name }, ...extra], cache, maxBits);
+      if (table !== undefined && table !== OVER_BUDGET) found.push(table);
       // A rule over the budget still works: the longer sets it rules out would cost more again.
-      works ||= literal !== undefined;
+      works ||= table !== undefined;
     }
     return works;
   };
@@ -374,16 +376,7 @@ function cheapestDistinct(found: LearnedTable[], limit: number, puzzle: Puzzle):
     .map((t, i) => ({ t, i }))
     .sort((a, b) => a.t.bits - b.t.bits || a.i - b.i)
     .map(({ t }) => t);
-  const kept: LearnedTable[] = [];
-  const outputs: (Grid | null)[][] = [];
-  for (const t of ordered) {
-    if (kept.length >= limit) break;
-    const mine = puzzle.testInputs.map((g) => applyTable(t.literal, g));
-    if (outputs.some((theirs) => theirs.every((o, i) => o !== null && mine[i] !== null && o.equals(mine[i]!)))) continue;
-    kept.push(t);
-    outputs.push(mine);
-  }
-  return kept;
+  return distinctAttempts(ordered, (t) => puzzle.testInputs.map((g) => applyTable(t.literal, g)), limit);
 }
 
 /** Every learned table the search is offered: cell rules, then object rules. */

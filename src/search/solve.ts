@@ -9,6 +9,7 @@ import { defaultLibrary } from '../../dsl/index.ts';
 import type { Library } from '../library/library.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { taskConstants } from './constants.ts';
+import { distinctAttempts } from './distinct-attempts.ts';
 import { enumerate, type EnumerationStatistics, type StopReason } from './enumerator.ts';
 import { programFromCandidate } from './program-from-candidate.ts';
 import { buildProductions, type Production } from './productions.ts';
@@ -68,21 +69,6 @@ function productionsFor(library: Library): Production[] {
 }
 
 export const INPUT_NAME = 'input';
-
-/**
- * The first `limit` of `ordered` (best first) whose test outputs differ from those of every
- * earlier one taken: the attempts, one program per distinct answer.
- */
-export function distinctAttempts<T>(ordered: readonly T[], testOutputs: (t: T) => readonly Grid[], limit: number): T[] {
-  const taken: T[] = [];
-  for (const t of ordered) {
-    if (taken.length >= limit) break;
-    const mine = testOutputs(t);
-    if (taken.some((kept) => testOutputs(kept).every((g, i) => g.equals(mine[i]!)))) continue;
-    taken.push(t);
-  }
-  return taken;
-}
 
 export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveResult {
   const started = performance.now();

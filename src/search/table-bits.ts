@@ -94,13 +94,16 @@ function outcomeBits(o: ObjectOutcome, c: number): number {
  * bound is not built (learned-tables.ts).
  */
 export function cellRuleBitsAtLeast(features: readonly CellFeature[], entries: number): number {
-  let bits = gammaBits(features.length) + FIRST_FEATURE_BITS;
   let perEntry = 1;
-  for (let i = 0; i < features.length; i++) {
-    if (i > 0) bits += FEATURE_CHOICE_BITS + (features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
-    perEntry += featureValueBits(featureValues(features[i]!.name), 1, 0);
-  }
-  return bits + entries * perEntry;
+  for (const f of features) perEntry += featureValueBits(featureValues(f.name), 1, 0);
+  return cellRuleFeatureBits(features) + entries * perEntry;
+}
+
+/** The bits a cell rule spends naming its features: their count, the first, and each after it (with a colour it names). */
+function cellRuleFeatureBits(features: readonly CellFeature[]): number {
+  let bits = gammaBits(features.length) + FIRST_FEATURE_BITS;
+  for (let i = 1; i < features.length; i++) bits += FEATURE_CHOICE_BITS + (features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
+  return bits;
 }
 
 /** The bits of a table literal, or undefined for a literal that is not a table. */
@@ -123,8 +126,7 @@ export function tableBits(l: LiteralValue): number | undefined {
       const k = colours.size;
       const c = colourBits(k);
       const byColour = l.features[0]?.name === 'colour';
-      let bits = gammaBits(l.features.length) + FIRST_FEATURE_BITS;
-      for (let i = 1; i < l.features.length; i++) bits += FEATURE_CHOICE_BITS + (l.features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
+      let bits = cellRuleFeatureBits(l.features);
       for (const e of l.entries) {
         for (let i = 0; i < e.key.length; i++) bits += featureValueBits(kinds[i]!, c, k);
         const keeps = e.colour === KEEP || (byColour && e.colour === e.key[0]);
