@@ -162,13 +162,13 @@ describe('the solver', () => {
   });
 
   it('stops when the value store is full with its reason', () => {
-    const result = solvePuzzle(hard, { maxStoreBytes: 20_000 });
+    const result = solvePuzzle(hard, { maxStoreBytes: 20_000, lastStepsWhenFull: false });
     expect(result.reason).toBe('memory');
   });
 
   it('holds memory to the cap: it stops once the counted bytes reach it, not long after', () => {
     for (const cap of [50_000, 400_000, 2_000_000]) {
-      const result = solvePuzzle(hard, { maxStoreBytes: cap, maxCandidates: 10_000_000, timeLimitSeconds: 3600 });
+      const result = solvePuzzle(hard, { maxStoreBytes: cap, maxCandidates: 10_000_000, timeLimitSeconds: 3600, lastStepsWhenFull: false });
       expect(result.reason).toBe('memory');
       expect(result.statistics.bytesHeld).toBeGreaterThanOrEqual(cap);
       // Budgets are checked every 1,024 candidates: what those can add is the only overshoot.
@@ -183,7 +183,7 @@ describe('the solver', () => {
       train: hard.train.map((p) => ({ input: wide(p.input.toRows(), size), output: Grid.fromRows([[1, 2], [3, 4], [5, 6], [7, 8], [9, 0]]) })),
       testInputs: [wide([[1]], size)],
     });
-    const options = { maxStoreBytes: 3_000_000, maxCandidates: 10_000_000, timeLimitSeconds: 3600 };
+    const options = { maxStoreBytes: 3_000_000, maxCandidates: 10_000_000, timeLimitSeconds: 3600, lastStepsWhenFull: false };
     const big = solvePuzzle(task(30), options);
     const small = solvePuzzle(task(2), options);
     expect(big.reason).toBe('memory');

@@ -4,8 +4,10 @@
  *
  * - the search's own count: the bytes its value store holds (every kept value with the cells
  *   of every grid, which live in typed arrays outside the JavaScript heap limit) plus what
- *   grids memoise while it runs (colour counts and the component cache). Reaching the cap stops
- *   the task with the reason `memory`;
+ *   grids memoise while it runs (colour counts and the component cache). At the cap the search
+ *   keeps nothing more and tries only last steps on what it holds (src/search/enumerator.ts),
+ *   stopping all the same when the real heap reaches 80% of the limit below; a task with nothing
+ *   found then has the reason `memory`;
  * - the worker's JavaScript heap limit (V8's old generation). The count runs short of the heap
  *   it stands for: measured on tasks-demo/tallest-mast.json stopped by the cap, the heap held
  *   288 MB at a count of 200 MB and 870 MB at 600 MB (about 1.45 times the count, garbage

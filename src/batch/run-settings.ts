@@ -19,6 +19,8 @@ export interface RunSettings {
   readonly goals: boolean;
   /** Tables learned from the grids the search makes (src/search/intermediate-tables.ts); off with --no-intermediate-tables. */
   readonly intermediateTables: boolean;
+  /** At the memory cap, going on with last steps on the values held (src/search/enumerator.ts); off with --no-last-steps. */
+  readonly lastSteps: boolean;
   /** Memory cap per worker in megabytes (see memory-cap.ts). */
   readonly memoryCapMb: number;
   /** Largest grid height and width accepted (`pithy --size-cap`). */
@@ -39,6 +41,7 @@ export const SETTING_NAMES: Readonly<Record<keyof RunSettings, string>> = {
   maxCandidates: 'candidate cap',
   goals: 'goals',
   intermediateTables: 'intermediate tables',
+  lastSteps: 'last steps at the memory cap',
   memoryCapMb: 'memory cap (MB)',
   sizeCap: 'size cap',
   priors: 'priors',
@@ -89,6 +92,7 @@ export interface SettingsInput {
   readonly maxCandidates?: number;
   readonly goals?: boolean;
   readonly intermediateTables?: boolean;
+  readonly lastSteps?: boolean;
   readonly memoryCapMb: number;
   readonly priorsFile?: string;
 }
@@ -101,6 +105,7 @@ export function runSettings(input: SettingsInput): RunSettings {
     maxCandidates: input.maxCandidates ?? null,
     goals: input.goals ?? true,
     intermediateTables: input.intermediateTables ?? true,
+    lastSteps: input.lastSteps ?? true,
     memoryCapMb: input.memoryCapMb,
     sizeCap: getSizeCap(),
     priors: priorsHash(input.priorsFile),
@@ -115,9 +120,10 @@ function shown(value: unknown): string {
 
 /**
  * Settings added after results files were first written, with the value a line that does not
- * record them was made under (both switches were on, with no way to turn them off).
+ * record them was made under: goals and intermediate tables were on with no way to turn them
+ * off; a full store stopped the search (no last steps).
  */
-const WHEN_NOT_RECORDED: Partial<RunSettings> = { goals: true, intermediateTables: true };
+const WHEN_NOT_RECORDED: Partial<RunSettings> = { goals: true, intermediateTables: true, lastSteps: false };
 
 /** The settings that differ, each as "name: A there, B here" (empty when they agree). */
 export function settingsDifferences(there: Partial<RunSettings>, here: RunSettings, thereName = 'in the file', hereName = 'now'): string[] {

@@ -22,6 +22,7 @@ export interface SharedSolveFlags {
   pruning: boolean;
   goals: boolean;
   intermediateTables: boolean;
+  lastSteps: boolean;
   memoryCap: number;
   retry: boolean;
   priors?: string;
@@ -33,11 +34,12 @@ export function addSolveFlags(command: Command): Command {
     .option('--attempts <n>', 'attempts per test input, from the cheapest programs with distinct outputs', positiveNumber('--attempts', true), 2)
     .option('--jobs <n>', 'tasks solved in parallel (worker threads)', positiveNumber('--jobs', true), 1)
     .option('--max-candidates <n>', 'cap on candidate programs evaluated per task', positiveNumber('--max-candidates', true))
-    .option('--memory-cap <MB>', 'memory cap per worker in megabytes: the search stops a task with the reason memory when it holds this much', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
+    .option('--memory-cap <MB>', 'memory cap per worker in megabytes: once the search holds this much it keeps no more values, tries only last steps on those it holds, and reports the reason memory if nothing is found', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
     .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')
     .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)')
     .option('--no-goals', 'do not work back from the outputs through inverses (for measuring what goals add)')
     .option('--no-intermediate-tables', 'do not learn tables from the grids the search makes (for measuring what they add)')
+    .option('--no-last-steps', 'stop a task at the memory cap instead of going on with last steps on the values held (for measuring what they add)')
     .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
 }
 
@@ -49,6 +51,7 @@ export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'l
     ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
     ...(flags.goals ? {} : { goalBits: 0 }),
     ...(flags.intermediateTables ? {} : { intermediateGrids: 0 }),
+    ...(flags.lastSteps ? {} : { lastStepsWhenFull: false }),
   };
 }
 
@@ -61,6 +64,7 @@ export function settingsFrom(flags: SharedSolveFlags & { priors?: string }): Run
     ...(flags.maxCandidates !== undefined ? { maxCandidates: flags.maxCandidates } : {}),
     goals: flags.goals,
     intermediateTables: flags.intermediateTables,
+    lastSteps: flags.lastSteps,
     memoryCapMb: flags.memoryCap,
     ...(flags.priors !== undefined ? { priorsFile: flags.priors } : {}),
   });

@@ -9,6 +9,7 @@
  * Types are integer ids here (type-table.ts), and each production knows, per argument
  * position, the cheapest cost its remaining arguments can have.
  */
+import { getHeapStatistics } from 'node:v8';
 import { analysisBytesSoFar } from '../grid/components.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { Expression } from '../language/ast.ts';
@@ -43,6 +44,12 @@ export interface EnumerationLimits {
   readonly goalBits: number;
   /** Kept grids to learn tables from on their way to the outputs (0: none; see intermediate-tables.ts). */
   readonly intermediateGrids: number;
+  /**
+   * When the store reaches maxStoreBytes: true goes on with last steps only (grid-valued calls
+   * on what the store holds, checked against the outputs and goals, nothing new kept) until
+   * another budget ends; false stops there.
+   */
+  readonly lastStepsWhenFull: boolean;
 }
 
 export interface EnumerationStatistics {
@@ -68,8 +75,10 @@ export interface EnumerationStatistics {
   intermediateSolutions: number;
   /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
   sizeRejected: number;
-  /** Bytes the search held when it stopped: kept values (cells counted) and memoised analyses. */
+  /** Bytes the search held when it stopped (when the store filled, if it did): kept values (cells counted) and memoised analyses. */
   bytesHeld: number;
+  /** The cost level being built when the store filled, after which only last steps were tried (0: it never filled). */
+  fullAtCost: number;
   /** Seconds from the start of the search to the first solution (absent when none). */
   secondsToFirstSolution?: number;
 }
@@ -91,6 +100,9 @@ const INTERMEDIATE_MAXIMUM_COST = 22;
 /** Cells learned from per task (over all values of all kept grids tried): a second or two of work at most. */
 const INTERMEDIATE_MAXIMUM_CELLS = 100_000;
 
+/** With the store full, the share of the JavaScript heap limit at which the search stops all the same. */
+const HEAP_SHARE_WHEN_FULL = 0.8;
+
 class Stop extends Error {
   constructor(readonly reason: StopReason) {
     super(reason);
@@ -108,7 +120,7 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0, fullAtCost: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
@@ -132,6 +144,10 @@ export class Enumerator {
   private readonly analysisBytesAtStart = analysisBytesSoFar();
   private deadline: number;
   private firstSolutionCost = Infinity;
+  /** The cost level being built. */
+  private level = 0;
+  /** The store is full: only last steps are tried, nothing more is kept (see lastStepsWhenFull). */
+  private full = false;
   /** Argument slots being filled. */
   private readonly args: Candidate[] = [];
   /** Values of the candidate being evaluated (copied when kept). */
@@ -202,6 +218,7 @@ export class Enumerator {
       let nextLeaf = 0;
       for (let cost = 1; cost <= this.limits.maxCost; cost++) {
         if (this.solutions.length > 0 && cost > this.firstSolutionCost + this.limits.extraBits) break;
+        this.level = cost;
         while (nextLeaf < this.leaves.length && this.leaves[nextLeaf]!.cost === cost) {
           const leaf = this.leaves[nextLeaf++]!;
           this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
@@ -227,7 +244,9 @@ export class Enumerator {
     }
     this.addSizeFallbacks();
     if (this.solutions.length > 0) reason = 'solved';
-    this.statistics.bytesHeld = this.bytesHeld;
+    // A search that went on past a full store was not complete at the levels it reached.
+    else if (this.full) reason = 'memory';
+    if (!this.full) this.statistics.bytesHeld = this.bytesHeld;
     this.statistics.intermediateGrids = this.intermediate?.tried ?? 0;
     return {
       solutions: this.solutions,
@@ -247,6 +266,8 @@ export class Enumerator {
       const rule = this.rules[r]!;
       const remaining = cost - rule.bits;
       if (remaining < 0 || rule.restMinimum[0]! > remaining) continue;
+      // With the store full only a grid can still matter: it may be an answer or meet a goal.
+      if (this.full && (rule.resultType !== this.gridType || rule.production.section)) continue;
       args.length = 0;
       if (rule.argumentTypes.length === 0) {
         if (remaining === 0) this.evaluate(rule, cost);
@@ -323,10 +344,15 @@ export class Enumerator {
   /** Keeps a candidate unless an equal one is kept; `values` may be scratch (copied when kept). */
   private offer(typeId: number, cost: number, values: readonly unknown[], production: Production | undefined, leaf: Expression | undefined, signature: unknown[] | undefined): void {
     const store = this.store;
+    if (this.full && typeId !== this.gridType) return;
     const hash = store.hashOf(typeId, values, signature);
     if (store.has(typeId, hash, values, signature)) {
       this.statistics.pruned++;
       if (signature) this.statistics.sectionsPruned++;
+      return;
+    }
+    if (this.full) {
+      if (production) this.offerLastStep(cost, values, production);
       return;
     }
     const candidate: Candidate = {
@@ -347,6 +373,24 @@ export class Enumerator {
       // The input's own tables are constants of the search already.
       if (production && this.intermediate?.open) this.learnTables(candidate);
     }
+  }
+
+  /**
+   * With the store full: a new grid is kept as a candidate only when it is an answer or meets a
+   * goal (it could not be an argument of anything now); everything else is dropped at once.
+   */
+  private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
+    const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
+    if (!this.answers(values) && (!goals || goals.length === 0)) return;
+    const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
+    this.checkSolution(candidate);
+    if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
+  }
+
+  /** True when the values equal every demonstration output. */
+  private answers(values: readonly unknown[]): boolean {
+    for (let i = 0; i < this.trainCount; i++) if (!(values[i] as Grid).equals(this.outputs[i]!)) return false;
+    return true;
   }
 
   /** Wraps a kept grid in each table learned from its values to the outputs; keeps those that reproduce them as pending solutions. */
@@ -403,8 +447,7 @@ export class Enumerator {
 
   /** A kept grid candidate equal to every demonstration output is a solution. */
   private checkSolution(candidate: Candidate): void {
-    const values = candidate.values;
-    for (let i = 0; i < this.trainCount; i++) if (!(values[i] as Grid).equals(this.outputs[i]!)) return;
+    if (!this.answers(candidate.values)) return;
     this.acceptPending(candidate.cost - 1);
     this.accept(candidate, false);
   }
@@ -461,7 +504,16 @@ export class Enumerator {
   private checkBudget(): void {
     if (performance.now() > this.deadline) throw new Stop('time');
     if (this.statistics.candidates >= this.limits.maxCandidates) throw new Stop('candidates');
-    if (this.bytesHeld >= this.limits.maxStoreBytes) throw new Stop('memory');
+    if (this.full) {
+      // Nothing is kept now, but grids still memoise analyses: the real heap is the bound.
+      const heap = getHeapStatistics();
+      if (heap.used_heap_size > HEAP_SHARE_WHEN_FULL * heap.heap_size_limit) throw new Stop('memory');
+    } else if (this.bytesHeld >= this.limits.maxStoreBytes) {
+      if (!this.limits.lastStepsWhenFull) throw new Stop('memory');
+      this.full = true;
+      this.statistics.fullAtCost = this.level;
+      this.statistics.bytesHeld = this.bytesHeld;
+    }
   }
 }
 

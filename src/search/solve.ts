@@ -34,6 +34,12 @@ export interface SolveOptions {
   readonly goalBits?: number;
   /** Kept grids (cheapest first) to learn tables from on their way to the outputs (default 200; 0 turns it off). */
   readonly intermediateGrids?: number;
+  /**
+   * When the store reaches maxStoreBytes, go on with last steps only — grid-valued calls on the
+   * values held, checked against the outputs and goals, nothing new kept — until another budget
+   * ends (default on); off stops the search there.
+   */
+  readonly lastStepsWhenFull?: boolean;
   readonly library?: Library;
 }
 
@@ -95,6 +101,7 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     pruning: options.pruning ?? true,
     goalBits: options.goalBits ?? 12,
     intermediateGrids: options.intermediateGrids ?? 200,
+    lastStepsWhenFull: options.lastStepsWhenFull ?? true,
   }, INPUT_NAME);
   const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
