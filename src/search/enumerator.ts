@@ -175,6 +175,12 @@ export class Enumerator {
       bits: production.bits,
       restMinimum: new Float64Array(production.argumentTypes.length + 1),
     }));
+    // Within a level, calls that make a grid come first: only a grid can be an answer or meet a
+    // goal, and a level cut short by the time limit has then checked all of its grids it could.
+    // Each type's candidates keep their order, so the same values are kept under the same
+    // programs once a level is done (the sort is stable).
+    const last = (rule: Rule): number => (rule.resultType === this.gridType && !rule.production.section ? 0 : 1);
+    this.rules.sort((a, b) => last(a) - last(b));
     this.leaves.push(this.leaf('Grid', 1, inputs, { kind: 'variable', name: inputName }));
     for (const c of constants) {
       const value = literalValue(c.literal);
