@@ -21,6 +21,7 @@ import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
+import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
 import { TypeTable } from './type-table.ts';
@@ -79,6 +80,12 @@ export interface EnumerationStatistics {
   bytesHeld: number;
   /** The cost level being built when the store filled, after which only last steps were tried (0: it never filled). */
   fullAtCost: number;
+  /**
+   * The cost level from which only last steps were tried (0: never): where the store filled, or
+   * the first level whose values other than grids the time left could not have made in time to
+   * use them.
+   */
+  lastStepsFromCost: number;
   /** Seconds from the start of the search to the first solution (absent when none). */
   secondsToFirstSolution?: number;
 }
@@ -100,7 +107,7 @@ const INTERMEDIATE_MAXIMUM_COST = 22;
 /** Cells learned from per task (over all values of all kept grids tried): a second or two of work at most. */
 const INTERMEDIATE_MAXIMUM_CELLS = 100_000;
 
-/** With the store full, the share of the JavaScript heap limit at which the search stops all the same. */
+/** With only last steps tried, the share of the JavaScript heap limit at which the search stops all the same. */
 const HEAP_SHARE_WHEN_FULL = 0.8;
 
 class Stop extends Error {
@@ -120,7 +127,7 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0, fullAtCost: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0, fullAtCost: 0, lastStepsFromCost: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
@@ -146,8 +153,15 @@ export class Enumerator {
   private firstSolutionCost = Infinity;
   /** The cost level being built. */
   private level = 0;
-  /** The store is full: only last steps are tried, nothing more is kept (see lastStepsWhenFull). */
+  /** Only last steps are tried from now on, and nothing more is kept: the store is full (see lastStepsWhenFull) or the time left is short. */
+  private lastStepsOnly = false;
+  /** The store reached maxStoreBytes. */
   private full = false;
+  /** Index of the first rule that does not make a grid (rules making grids come first). */
+  private readonly firstOtherRule: number;
+  /** Milliseconds each finished level spent on its grids and on its other values, by cost. */
+  private readonly gridMilliseconds: Float64Array;
+  private readonly otherMilliseconds: Float64Array;
   /** Argument slots being filled. */
   private readonly args: Candidate[] = [];
   /** Values of the candidate being evaluated (copied when kept). */
@@ -181,6 +195,10 @@ export class Enumerator {
     // programs once a level is done (the sort is stable).
     const last = (rule: Rule): number => (rule.resultType === this.gridType && !rule.production.section ? 0 : 1);
     this.rules.sort((a, b) => last(a) - last(b));
+    this.firstOtherRule = this.rules.findIndex((rule) => last(rule) === 1);
+    if (this.firstOtherRule < 0) this.firstOtherRule = this.rules.length;
+    this.gridMilliseconds = new Float64Array(limits.maxCost + 2);
+    this.otherMilliseconds = new Float64Array(limits.maxCost + 2);
     this.leaves.push(this.leaf('Grid', 1, inputs, { kind: 'variable', name: inputName }));
     for (const c of constants) {
       const value = literalValue(c.literal);
@@ -252,7 +270,7 @@ export class Enumerator {
     if (this.solutions.length > 0) reason = 'solved';
     // A search that went on past a full store was not complete at the levels it reached.
     else if (this.full) reason = 'memory';
-    if (!this.full) this.statistics.bytesHeld = this.bytesHeld;
+    if (!this.lastStepsOnly) this.statistics.bytesHeld = this.bytesHeld;
     this.statistics.intermediateGrids = this.intermediate?.tried ?? 0;
     return {
       solutions: this.solutions,
@@ -268,12 +286,25 @@ export class Enumerator {
   private expandLevel(cost: number): void {
     this.refreshMinimums();
     const args = this.args;
+    const started = performance.now();
+    let gridsDone = started;
     for (let r = 0; r < this.rules.length; r++) {
+      if (r === this.firstOtherRule) {
+        // Last steps only: a grid can still be an answer or meet a goal; nothing else can matter.
+        if (this.lastStepsOnly) return;
+        gridsDone = performance.now();
+        this.gridMilliseconds[cost] = gridsDone - started;
+        const last = { grids: this.gridMilliseconds[cost - 1]!, others: this.otherMilliseconds[cost - 1]! };
+        if (!othersInTime(last, this.gridMilliseconds[cost]!, gridsDone, this.deadline)) {
+          this.beginLastSteps(cost);
+          return;
+        }
+      }
       const rule = this.rules[r]!;
       const remaining = cost - rule.bits;
       if (remaining < 0 || rule.restMinimum[0]! > remaining) continue;
-      // With the store full only a grid can still matter: it may be an answer or meet a goal.
-      if (this.full && (rule.resultType !== this.gridType || rule.production.section)) continue;
+      // The store filled part-way through this level's other values.
+      if (this.lastStepsOnly && r > this.firstOtherRule) return;
       args.length = 0;
       if (rule.argumentTypes.length === 0) {
         if (remaining === 0) this.evaluate(rule, cost);
@@ -281,6 +312,14 @@ export class Enumerator {
       }
       this.fill(rule, 0, remaining, cost);
     }
+    this.otherMilliseconds[cost] = performance.now() - gridsDone;
+  }
+
+  /** From this level on, only last steps: calls that make a grid from the values held, checked and dropped. */
+  private beginLastSteps(cost: number): void {
+    this.lastStepsOnly = true;
+    this.statistics.lastStepsFromCost = cost;
+    this.statistics.bytesHeld = this.bytesHeld;
   }
 
   private refreshMinimums(): void {
@@ -350,14 +389,14 @@ export class Enumerator {
   /** Keeps a candidate unless an equal one is kept; `values` may be scratch (copied when kept). */
   private offer(typeId: number, cost: number, values: readonly unknown[], production: Production | undefined, leaf: Expression | undefined, signature: unknown[] | undefined): void {
     const store = this.store;
-    if (this.full && typeId !== this.gridType) return;
+    if (this.lastStepsOnly && typeId !== this.gridType) return;
     const hash = store.hashOf(typeId, values, signature);
     if (store.has(typeId, hash, values, signature)) {
       this.statistics.pruned++;
       if (signature) this.statistics.sectionsPruned++;
       return;
     }
-    if (this.full) {
+    if (this.lastStepsOnly) {
       if (production) this.offerLastStep(cost, values, production);
       return;
     }
@@ -382,7 +421,7 @@ export class Enumerator {
   }
 
   /**
-   * With the store full: a new grid is kept as a candidate only when it is an answer or meets a
+   * Last steps only: a new grid is kept as a candidate only when it is an answer or meets a
    * goal (it could not be an argument of anything now); everything else is dropped at once.
    */
   private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
@@ -510,7 +549,7 @@ export class Enumerator {
   private checkBudget(): void {
     if (performance.now() > this.deadline) throw new Stop('time');
     if (this.statistics.candidates >= this.limits.maxCandidates) throw new Stop('candidates');
-    if (this.full) {
+    if (this.lastStepsOnly) {
       // Nothing is kept now, but grids still memoise analyses: the real heap is the bound.
       const heap = getHeapStatistics();
       if (heap.used_heap_size > HEAP_SHARE_WHEN_FULL * heap.heap_size_limit) throw new Stop('memory');
@@ -518,7 +557,7 @@ export class Enumerator {
       if (!this.limits.lastStepsWhenFull) throw new Stop('memory');
       this.full = true;
       this.statistics.fullAtCost = this.level;
-      this.statistics.bytesHeld = this.bytesHeld;
+      this.beginLastSteps(this.level);
     }
   }
 }
