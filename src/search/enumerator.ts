@@ -270,6 +270,8 @@ export class Enumerator {
     if (this.solutions.length > 0) reason = 'solved';
     // A search that went on past a full store was not complete at the levels it reached.
     else if (this.full) reason = 'memory';
+    // Nor was one that turned to last steps for want of time, even if it then ran out of levels.
+    else if (this.lastStepsOnly && reason === 'exhausted') reason = 'time';
     if (!this.lastStepsOnly) this.statistics.bytesHeld = this.bytesHeld;
     this.statistics.intermediateGrids = this.intermediate?.tried ?? 0;
     return {
