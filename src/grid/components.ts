@@ -31,13 +31,12 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   // Kept with the grid: the search asks for the same grid's objects many times (each
   // extractor, and primitives that work object by object).
   let forGrid = grid.componentsMemo;
-  const known = forGrid?.get(key) as readonly GridObject[] | undefined;
-  if (known) return known;
+  if (forGrid) for (let i = 0; i < forGrid.length; i += 2) if (forGrid[i] === key) return forGrid[i + 1] as readonly GridObject[];
   const found = computeComponents(grid, options);
   analysisBytes += 96 + 8 * found.length;
   for (const o of found) analysisBytes += 200 + o.cells.length;
-  if (!forGrid) grid.componentsMemo = forGrid = new Map();
-  forGrid.set(key, found);
+  if (!forGrid) grid.componentsMemo = forGrid = [];
+  forGrid.push(key, found);
   return found;
 }
 

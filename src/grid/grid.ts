@@ -40,7 +40,8 @@ export class Grid {
    */
   colourCountsMemo: Uint32Array | undefined = undefined;
   backgroundMemo = -1;
-  componentsMemo: Map<number, unknown> | undefined = undefined;
+  /** Components by option key, as key, list, key, list, ... (a grid is cut a few ways at most; a Map per grid costs far more). */
+  componentsMemo: unknown[] | undefined = undefined;
 
   /** Takes ownership of `cells` (length height × width). */
   constructor(height: number, width: number, cells: Uint8Array) {

@@ -361,6 +361,8 @@ export class Enumerator {
     const stats = this.statistics;
     stats.candidates++;
     if ((stats.candidates & 1023) === 0) this.checkBudget();
+    // Last steps only: what is not a grid cannot matter any more (a rule begun before the switch).
+    if (this.lastStepsOnly && rule.resultType !== this.gridType) return;
     const operation = rule.production.primitive;
     const values = this.scratch;
     const args = this.args;
@@ -376,7 +378,21 @@ export class Enumerator {
       return;
     }
     const call = (this.callScratch[arity] ??= new Array<unknown>(arity));
-    for (let i = 0; i < this.examples; i++) {
+    let from = 0;
+    if (this.lastStepsOnly && this.trainCount > 0) {
+      // Nothing is kept now, so a grid matters only as an answer or a goal's argument: one that
+      // is neither on the first demonstration is dropped before the other inputs are run.
+      for (let j = 0; j < arity; j++) call[j] = args[j]!.values[0];
+      const first = applyOperation(operation, call);
+      if (first === FAILURE) {
+        stats.failed++;
+        return;
+      }
+      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid)) return;
+      values[0] = first;
+      from = 1;
+    }
+    for (let i = from; i < this.examples; i++) {
       for (let j = 0; j < arity; j++) call[j] = args[j]!.values[i];
       const v = applyOperation(operation, call);
       if (v === FAILURE) {

@@ -61,6 +61,8 @@ function constantChoices(types: readonly number[], leavesByType: ReadonlyMap<num
 
 export class GoalTable {
   private readonly byHash = new Map<number, Goal[]>();
+  /** Hashes of every goal's wanted grid on the first demonstration. */
+  private readonly firstHashes = new Set<number>();
   count = 0;
 
   /**
@@ -110,12 +112,18 @@ export class GoalTable {
           const list = this.byHash.get(hash);
           if (list) list.push(next);
           else this.byHash.set(hash, [next]);
+          this.firstHashes.add(wanted[0]!.hash);
           this.count++;
           frontier.push(next);
           if (this.count >= limits.maxGoals) break;
         }
       }
     }
+  }
+
+  /** False when no goal wants this grid on the first demonstration (true may still match none). */
+  mayWantFirst(grid: Grid): boolean {
+    return this.firstHashes.has(grid.hash);
   }
 
   /** Goals whose wanted grids equal the first `count` values. */
