@@ -6,7 +6,7 @@
  */
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import type { Grid } from '../src/grid/grid.ts';
+import { Grid } from '../src/grid/grid.ts';
 import { runProgram } from '../src/language/interpreter.ts';
 import { defaultLibrary } from '../dsl/index.ts';
 import { solvePuzzle } from '../src/search/solve.ts';
@@ -47,5 +47,31 @@ describe('last steps when the store is full', () => {
     expect(going.statistics.candidates).toBeGreaterThan(stopping.statistics.candidates);
     expect(going.statistics.costReached).toBeGreaterThan(stopping.statistics.costReached);
     expect(stopping.statistics.fullAtCost).toBe(0);
+  });
+
+  it('meets a goal in last steps: a grid that the first demonstration\'s goal wants is run on the other inputs too', () => {
+    // An invented task: the input reflected left to right, then tiled 2 down and 2 across.
+    const reflect = (rows: number[][]) => rows.map((row) => [...row].reverse());
+    const tiled = (rows: number[][]) => [...rows, ...rows].map((row) => [...row, ...row]);
+    const inputs = [
+      [[6, 0], [0, 7], [7, 7]],
+      [[0, 0, 9], [4, 0, 0]],
+      [[2, 3, 0], [0, 0, 3], [1, 0, 0]],
+    ];
+    const testInput = [[5, 0, 0], [0, 8, 8]];
+    const task: Puzzle = {
+      name: 'reflected-and-tiled',
+      train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(tiled(reflect(rows))) })),
+      testInputs: [Grid.fromRows(testInput)],
+    };
+    // 1,000 bytes: the store is full with the leaves, so every call is a last step.
+    const options = { maxStoreBytes: 1_000, timeLimitSeconds: 600, maxCandidates: 200_000, attempts: 1 };
+    const withGoals = solvePuzzle(task, options);
+    expect(withGoals.statistics.lastStepsFromCost).toBeLessThanOrEqual(2);
+    expect(withGoals.solutions).toHaveLength(1);
+    expect(withGoals.solutions[0]!.throughGoal).toBe(true);
+    expect(withGoals.solutions[0]!.testOutputs[0]!.toRows()).toEqual(tiled(reflect(testInput)));
+    // Without goals the tiling would need the reflection kept, and nothing is.
+    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
   });
 });
