@@ -100,6 +100,7 @@ export const compositionPrimitives = [
       output: [[1, 0], [0, 1]],
     },
     run: overlay,
+    laysOver: true,
   }),
   primitive({
     name: 'overlay_all',

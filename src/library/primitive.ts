@@ -61,6 +61,13 @@ export interface Primitive extends Operation {
    * src/search/goals.ts). Law: when it returns x, `run(x, ...rest)` equals the wanted result.
    */
   readonly inverse?: (wanted: never, ...rest: never[]) => unknown;
+  /**
+   * True for a primitive called as `run(bottom, top, colour)` that lays the top grid over the
+   * bottom one, the top's cells of the colour see-through. The search then works back from the
+   * outputs with the input as either layer (layer goals, src/search/layer-goals.ts). Law: the
+   * result holds the top's cell wherever that is not the colour, the bottom's cell elsewhere.
+   */
+  readonly laysOver?: boolean;
 }
 
 /** Declares a primitive with its implementation typed from its signature. */
@@ -74,6 +81,7 @@ export function primitive<const P extends readonly Type[], const R extends Type>
   example: WorkedExample;
   run: (...args: ValuesOf<P>) => ValueOf<R> | Failure | null;
   inverse?: (wanted: ValueOf<R>, ...rest: ValuesOf<Rest<P>>) => ValueOf<P[0]> | null;
+  laysOver?: boolean;
 }): Primitive {
   return record as unknown as Primitive;
 }

@@ -10,7 +10,7 @@
  * position, the cheapest cost its remaining arguments can have.
  */
 import { getHeapStatistics } from 'node:v8';
-import { analysisBytesSoFar } from '../grid/components.ts';
+import { analysisBytesSoFar, backgroundColour } from '../grid/components.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { Expression } from '../language/ast.ts';
 import { FAILURE } from '../language/failure.ts';
@@ -21,6 +21,7 @@ import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
+import { layerGoals, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
@@ -142,6 +143,11 @@ export class Enumerator {
   /** Programs that fit the demonstrations but break the settled output size: attempts only when nothing better comes. */
   private readonly sizeFallbacks: Candidate[] = [];
   private readonly goals: GoalTable | undefined;
+  /** Goals through a layering call with the input as one layer (layer-goals.ts); empty with goals off. */
+  private readonly layers: readonly LayerGoal[];
+  private readonly inputs: readonly Grid[];
+  /** The leaf that stands for the input. */
+  private readonly inputLeaf: Candidate;
   /** Per test input, the output size the demonstrations settle. */
   private readonly predictedSizes: readonly PredictedSize[];
   private readonly examples: number;
@@ -199,7 +205,8 @@ export class Enumerator {
     if (this.firstOtherRule < 0) this.firstOtherRule = this.rules.length;
     this.gridMilliseconds = new Float64Array(limits.maxCost + 2);
     this.otherMilliseconds = new Float64Array(limits.maxCost + 2);
-    this.leaves.push(this.leaf('Grid', 1, inputs, { kind: 'variable', name: inputName }));
+    this.inputLeaf = this.leaf('Grid', 1, inputs, { kind: 'variable', name: inputName });
+    this.leaves.push(this.inputLeaf);
     for (const c of constants) {
       const value = literalValue(c.literal);
       this.leaves.push(this.leaf(c.literal.type, c.bits, new Array(this.examples).fill(value), { kind: 'literal', literal: c.literal }));
@@ -212,7 +219,9 @@ export class Enumerator {
     const pairs = outputs.map((output, i) => ({ input: inputs[i]!, output }));
     this.predictedSizes = predictOutputSizes(pairs, inputs.slice(this.trainCount));
     this.goals = limits.goalBits > 0 ? this.buildGoals(limits.goalBits) : undefined;
-    this.statistics.goals = this.goals?.count ?? 0;
+    this.inputs = inputs;
+    this.layers = limits.goalBits > 0 ? this.buildLayerGoals(limits.goalBits) : [];
+    this.statistics.goals = (this.goals?.count ?? 0) + this.layers.length;
     this.intermediate = limits.intermediateGrids > 0 ? new IntermediateTables(outputs, productions, { maxGrids: limits.intermediateGrids, maxCost: INTERMEDIATE_MAXIMUM_COST, maxCells: INTERMEDIATE_MAXIMUM_CELLS }) : undefined;
   }
 
@@ -229,6 +238,53 @@ export class Enumerator {
       .filter((r) => !r.production.section && r.production.primitive.inverse && r.resultType === this.gridType && r.argumentTypes[0] === this.gridType)
       .map((r) => ({ production: r.production, restTypes: Array.from(r.argumentTypes.subarray(1)) }));
     return new GoalTable(this.outputs, invertible, leavesByType, { maxCost, maxGoals: 2000 });
+  }
+
+  /**
+   * Layer goals for every layering production, see-through colour the background that every
+   * demonstration input shares (a constant of the task): each goal is tested on every kept grid,
+   * so they are kept few.
+   */
+  private buildLayerGoals(maxCost: number): LayerGoal[] {
+    const input = this.inputLeaf;
+    const background = backgroundColour(this.inputs[0]!);
+    for (let i = 1; i < this.trainCount; i++) if (backgroundColour(this.inputs[i]!) !== background) return [];
+    const colours = this.leaves.filter((leaf) => leaf.type === 'Colour' && leaf.leaf?.kind === 'literal' && leaf.values[0] === background);
+    const goals: LayerGoal[] = [];
+    for (const rule of this.rules) {
+      if (rule.production.section || !rule.production.primitive.laysOver) continue;
+      const trainInputs = this.inputs.slice(0, this.trainCount);
+      for (const goal of layerGoals(trainInputs, this.outputs, rule.production, input, colours)) if (goal.cost <= maxCost) goals.push(goal);
+    }
+    return goals;
+  }
+
+  /** The layer goals these grid values meet on every demonstration. */
+  private layersMet(values: readonly unknown[]): LayerGoal[] | undefined {
+    let met: LayerGoal[] | undefined;
+    for (const goal of this.layers) {
+      let meets = true;
+      for (let i = 0; i < this.trainCount && meets; i++) meets = meetsLayerGoal(goal, i, values[i] as Grid, this.inputs[i]!);
+      if (meets) (met ??= []).push(goal);
+    }
+    return met;
+  }
+
+  /** Keeps a kept grid that meets a layer goal, laid as the goal says, as a pending solution. */
+  private meetLayerGoal(found: Candidate, goal: LayerGoal): void {
+    const input = this.inputLeaf;
+    const args = goal.side === 'over' ? [input, found, goal.transparent] : [found, input, goal.transparent];
+    const operation = goal.production.primitive;
+    const values = new Array<unknown>(this.examples);
+    const call = new Array<unknown>(3);
+    for (let i = 0; i < this.examples; i++) {
+      for (let j = 0; j < 3; j++) call[j] = args[j]!.values[i];
+      const v = applyOperation(operation, call);
+      if (v === FAILURE) return;
+      values[i] = v;
+    }
+    if (!this.answers(values)) return;
+    this.pending.push({ type: 'Grid', typeId: this.gridType, cost: found.cost + goal.cost, values, production: goal.production, arguments: args, leaf: undefined, signature: undefined });
   }
 
   private leaf(type: Type, cost: number, values: readonly unknown[], expression: Expression): Candidate {
@@ -388,7 +444,7 @@ export class Enumerator {
         stats.failed++;
         return;
       }
-      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid)) return;
+      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid) && !this.layerMayMeetFirst(first as Grid)) return;
       values[0] = first;
       from = 1;
     }
@@ -433,6 +489,7 @@ export class Enumerator {
     if (typeId === this.gridType) {
       this.checkSolution(candidate);
       if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
+      if (this.layers.length > 0) for (const goal of this.layersMet(candidate.values) ?? []) this.meetLayerGoal(candidate, goal);
       // The input's own tables are constants of the search already.
       if (production && this.intermediate?.open) this.learnTables(candidate);
     }
@@ -444,10 +501,18 @@ export class Enumerator {
    */
   private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
-    if (!this.answers(values) && (!goals || goals.length === 0)) return;
+    const layers = this.layers.length > 0 ? this.layersMet(values) : undefined;
+    if (!this.answers(values) && (!goals || goals.length === 0) && !layers) return;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
     this.checkSolution(candidate);
     if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
+    if (layers) for (const goal of layers) this.meetLayerGoal(candidate, goal);
+  }
+
+  /** True when the grid meets some layer goal on the first demonstration. */
+  private layerMayMeetFirst(grid: Grid): boolean {
+    for (const goal of this.layers) if (meetsLayerGoal(goal, 0, grid, this.inputs[0]!)) return true;
+    return false;
   }
 
   /** True when the values equal every demonstration output. */

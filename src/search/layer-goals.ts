@@ -1,0 +1,107 @@
+/**
+ * Layer goals: working back from the outputs through a call that lays one grid over another with
+ * a see-through colour, with the input as one of the two layers. Many tasks draw something (rays,
+ * lines, a reflected copy, a filled region) on a grid made from the input and lay it back over the
+ * input, or fill the input's background from another grid. The grid to lay is not one wanted grid
+ * but any of many (wherever a cell may show through, it may hold anything that does), so these
+ * goals are tested cell by cell against a pattern instead of looked up by hash:
+ *
+ * - **over**: `lay(input, X, t)` equals the output exactly when, on every demonstration, X holds
+ *   the output's colour on each cell the output changes, and elsewhere either `t` or the input's
+ *   own colour. It applies when no changed cell turns to `t` (nothing laid on top could show it).
+ * - **under**: `lay(X, input, t)` equals the output exactly when the input keeps every cell that is
+ *   not `t`, and X holds the output's colour on each cell where the input is `t`.
+ *
+ * Both tests are exact (tests/layer-goals.test.ts checks them against the primitive), so a kept
+ * grid that meets one becomes a solution once wrapped in the call; like a goal's, it waits until
+ * every cheaper cost has been tried.
+ */
+import type { Grid } from '../grid/grid.ts';
+import type { Production } from './productions.ts';
+import type { Candidate } from './value-store.ts';
+
+/** In a pattern: the cell may hold anything the test allows there (never a colour). */
+const FREE = 255;
+
+export type LayerSide = 'over' | 'under';
+
+export interface LayerGoal {
+  /** over: the found grid is laid over the input; under: the input is laid over it. */
+  readonly side: LayerSide;
+  /** The layering call. */
+  readonly production: Production;
+  /** The see-through colour, a constant of the task. */
+  readonly transparent: Candidate;
+  /** Per demonstration, what the found grid must hold on each cell (FREE: see the test). */
+  readonly patterns: readonly Uint8Array[];
+  /** Bits of the call, the input and the colour. */
+  readonly cost: number;
+}
+
+/** The goals for one layering production, every see-through colour the task offers and both sides. */
+export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], production: Production, inputLeaf: Candidate, colours: readonly Candidate[]): LayerGoal[] {
+  const goals: LayerGoal[] = [];
+  if (outputs.length === 0) return goals;
+  for (let i = 0; i < outputs.length; i++) if (inputs[i]!.height !== outputs[i]!.height || inputs[i]!.width !== outputs[i]!.width) return goals;
+  // The input itself needs no layer: at least one demonstration must change.
+  if (outputs.every((o, i) => o.equals(inputs[i]!))) return goals;
+  for (const colour of colours) {
+    const t = colour.values[0] as number;
+    for (const side of ['over', 'under'] as const) {
+      const patterns: Uint8Array[] = [];
+      for (let i = 0; i < outputs.length; i++) {
+        const pattern = side === 'over' ? overPattern(inputs[i]!.cells, outputs[i]!.cells, t) : underPattern(inputs[i]!.cells, outputs[i]!.cells, t);
+        if (!pattern) break;
+        patterns.push(pattern);
+      }
+      if (patterns.length < outputs.length) continue;
+      goals.push({ side, production, transparent: colour, patterns, cost: production.bits + inputLeaf.cost + colour.cost });
+    }
+  }
+  return goals;
+}
+
+/** Over: the output's colour where it changes, FREE elsewhere; null when a changed cell becomes `t`. */
+function overPattern(input: Uint8Array, output: Uint8Array, t: number): Uint8Array | null {
+  const pattern = new Uint8Array(output.length).fill(FREE);
+  for (let c = 0; c < output.length; c++) {
+    if (output[c] === input[c]) continue;
+    if (output[c] === t) return null;
+    pattern[c] = output[c]!;
+  }
+  return pattern;
+}
+
+/** Under: the output's colour where the input is `t`, FREE elsewhere; null when the input loses a cell that is not `t`. */
+function underPattern(input: Uint8Array, output: Uint8Array, t: number): Uint8Array | null {
+  const pattern = new Uint8Array(output.length).fill(FREE);
+  for (let c = 0; c < output.length; c++) {
+    if (input[c] !== t) {
+      if (output[c] !== input[c]) return null;
+    } else pattern[c] = output[c]!;
+  }
+  return pattern;
+}
+
+/**
+ * True when the grid meets the goal on demonstration i (`input` is that demonstration's input):
+ * laid as the goal says, it gives the output there.
+ */
+export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Grid): boolean {
+  if (grid.height !== input.height || grid.width !== input.width) return false;
+  const pattern = goal.patterns[i]!;
+  const cells = grid.cells;
+  if (goal.side === 'under') {
+    for (let c = 0; c < cells.length; c++) if (pattern[c] !== FREE && cells[c] !== pattern[c]) return false;
+    return true;
+  }
+  const t = goal.transparent.values[0] as number;
+  const under = input.cells;
+  for (let c = 0; c < cells.length; c++) {
+    const v = cells[c]!;
+    // What shows on this cell once laid over the input: v, unless v is see-through or the same.
+    const shown = v === t || v === under[c] ? FREE : v;
+    if (shown !== pattern[c]) return false;
+  }
+  return true;
+}
