@@ -489,7 +489,8 @@ export class Enumerator {
     if (typeId === this.gridType) {
       this.checkSolution(candidate);
       if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
-      if (this.layers.length > 0) for (const goal of this.layersMet(candidate.values) ?? []) this.meetLayerGoal(candidate, goal);
+      // An answer itself needs no laying (laid over the input it would only be a dearer copy).
+      if (this.layers.length > 0 && !this.answers(candidate.values)) for (const goal of this.layersMet(candidate.values) ?? []) this.meetLayerGoal(candidate, goal);
       // The input's own tables are constants of the search already.
       if (production && this.intermediate?.open) this.learnTables(candidate);
     }
@@ -501,7 +502,7 @@ export class Enumerator {
    */
   private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
-    const layers = this.layers.length > 0 ? this.layersMet(values) : undefined;
+    const layers = this.layers.length > 0 && !this.answers(values) ? this.layersMet(values) : undefined;
     if (!this.answers(values) && (!goals || goals.length === 0) && !layers) return;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
     this.checkSolution(candidate);
