@@ -353,7 +353,7 @@ export class Enumerator {
         gridsDone = performance.now();
         this.gridMilliseconds[cost] = gridsDone - started;
         const last = { grids: this.gridMilliseconds[cost - 1]!, others: this.otherMilliseconds[cost - 1]! };
-        if (!othersInTime(last, this.gridMilliseconds[cost]!, gridsDone, this.deadline)) {
+        if (!othersInTime(last, this.gridMilliseconds[cost]!, this.started, gridsDone, this.deadline)) {
           this.beginLastSteps(cost);
           return;
         }
