@@ -77,7 +77,7 @@ export interface EnumerationStatistics {
   intermediateSolutions: number;
   /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
   sizeRejected: number;
-  /** Bytes the search held when it stopped (when the store filled, if it did): kept values (cells counted) and memoised analyses. */
+  /** Bytes the search held when it stopped (when last steps began, if they did): kept values (cells counted) and memoised analyses. */
   bytesHeld: number;
   /** The cost level being built when the store filled, after which only last steps were tried (0: it never filled). */
   fullAtCost: number;
@@ -501,9 +501,10 @@ export class Enumerator {
    * goal (it could not be an argument of anything now); everything else is dropped at once.
    */
   private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
+    const answers = this.answers(values);
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
-    const layers = this.layers.length > 0 && !this.answers(values) ? this.layersMet(values) : undefined;
-    if (!this.answers(values) && (!goals || goals.length === 0) && !layers) return;
+    const layers = this.layers.length > 0 && !answers ? this.layersMet(values) : undefined;
+    if (!answers && (!goals || goals.length === 0) && !layers) return;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
     this.checkSolution(candidate);
     if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
