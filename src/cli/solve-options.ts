@@ -37,7 +37,7 @@ export function addSolveFlags(command: Command): Command {
     .option('--memory-cap <MB>', 'memory cap per worker in megabytes: once the search holds this much it keeps no more values, tries only last steps on those it holds, and reports the reason memory if nothing is found', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
     .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')
     .option('--no-pruning', 'keep observationally equivalent candidates (for measuring the pruning only)')
-    .option('--no-goals', 'do not work back from the outputs through inverses (for measuring what goals add)')
+    .option('--no-goals', 'do not work back from the outputs through inverses or layers (for measuring what goals add)')
     .option('--no-intermediate-tables', 'do not learn tables from the grids the search makes (for measuring what they add)')
     .option('--no-last-steps', 'stop a task at the memory cap instead of going on with last steps on the values held (for measuring what they add)')
     .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
