@@ -161,8 +161,6 @@ export class Enumerator {
   private level = 0;
   /** Only last steps are tried from now on, and nothing more is kept: the store is full (see lastStepsWhenFull) or the time left is short. */
   private lastStepsOnly = false;
-  /** The store reached maxStoreBytes. */
-  private full = false;
   /** Index of the first rule that does not make a grid (rules making grids come first). */
   private readonly firstOtherRule: number;
   /** Milliseconds each finished level spent on its grids and on its other values, by cost. */
@@ -251,9 +249,9 @@ export class Enumerator {
     for (let i = 1; i < this.trainCount; i++) if (backgroundColour(this.inputs[i]!) !== background) return [];
     const colours = this.leaves.filter((leaf) => leaf.type === 'Colour' && leaf.leaf?.kind === 'literal' && leaf.values[0] === background);
     const goals: LayerGoal[] = [];
+    const trainInputs = this.inputs.slice(0, this.trainCount);
     for (const rule of this.rules) {
       if (rule.production.section || !rule.production.primitive.laysOver) continue;
-      const trainInputs = this.inputs.slice(0, this.trainCount);
       for (const goal of layerGoals(trainInputs, this.outputs, rule.production, input, colours)) if (goal.cost <= maxCost) goals.push(goal);
     }
     return goals;
@@ -274,17 +272,8 @@ export class Enumerator {
   private meetLayerGoal(found: Candidate, goal: LayerGoal): void {
     const input = this.inputLeaf;
     const args = goal.side === 'over' ? [input, found, goal.transparent] : [found, input, goal.transparent];
-    const operation = goal.production.primitive;
-    const values = new Array<unknown>(this.examples);
-    const call = new Array<unknown>(3);
-    for (let i = 0; i < this.examples; i++) {
-      for (let j = 0; j < 3; j++) call[j] = args[j]!.values[i];
-      const v = applyOperation(operation, call);
-      if (v === FAILURE) return;
-      values[i] = v;
-    }
-    if (!this.answers(values)) return;
-    this.pending.push({ type: 'Grid', typeId: this.gridType, cost: found.cost + goal.cost, values, production: goal.production, arguments: args, leaf: undefined, signature: undefined });
+    const laid = this.callOnEveryInput(goal.production, args, found.cost + goal.cost);
+    if (laid && this.answers(laid.values)) this.pending.push(laid);
   }
 
   private leaf(type: Type, cost: number, values: readonly unknown[], expression: Expression): Candidate {
@@ -325,7 +314,7 @@ export class Enumerator {
     this.addSizeFallbacks();
     if (this.solutions.length > 0) reason = 'solved';
     // A search that went on past a full store was not complete at the levels it reached.
-    else if (this.full) reason = 'memory';
+    else if (this.statistics.fullAtCost > 0) reason = 'memory';
     // Nor was one that turned to last steps for want of time, even if it then ran out of levels.
     else if (this.lastStepsOnly && reason === 'exhausted') reason = 'time';
     if (!this.lastStepsOnly) this.statistics.bytesHeld = this.bytesHeld;
@@ -550,22 +539,26 @@ export class Enumerator {
   private wrap(found: Candidate, steps: readonly GoalStep[]): Candidate | undefined {
     let current = found;
     for (const step of steps) {
-      const operation = step.production.primitive;
-      const values = new Array<unknown>(this.examples);
-      const call = new Array<unknown>(1 + step.rest.length);
       let cost = current.cost + step.bits;
       for (const leaf of step.rest) cost += leaf.cost;
-      for (let i = 0; i < this.examples; i++) {
-        call[0] = current.values[i];
-        for (let j = 0; j < step.rest.length; j++) call[j + 1] = step.rest[j]!.values[i];
-        const v = applyOperation(operation, call);
-        if (v === FAILURE) return undefined;
-        values[i] = v;
-      }
-      current = { type: 'Grid', typeId: this.gridType, cost, values, production: step.production, arguments: [current, ...step.rest], leaf: undefined, signature: undefined };
+      const call = this.callOnEveryInput(step.production, [current, ...step.rest], cost);
+      if (!call) return undefined;
+      current = call;
     }
-    for (let i = 0; i < this.trainCount; i++) if (!(current.values[i] as Grid).equals(this.outputs[i]!)) return undefined;
-    return current;
+    return this.answers(current.values) ? current : undefined;
+  }
+
+  /** The grid-valued call of a production on these candidates, run on every input (undefined when it fails on one). Off the hot path: goals only. */
+  private callOnEveryInput(production: Production, args: Candidate[], cost: number): Candidate | undefined {
+    const values = new Array<unknown>(this.examples);
+    const call = new Array<unknown>(args.length);
+    for (let i = 0; i < this.examples; i++) {
+      for (let j = 0; j < args.length; j++) call[j] = args[j]!.values[i];
+      const v = applyOperation(production.primitive, call);
+      if (v === FAILURE) return undefined;
+      values[i] = v;
+    }
+    return { type: 'Grid', typeId: this.gridType, cost, values, production, arguments: args, leaf: undefined, signature: undefined };
   }
 
   /** Takes pending solutions (met through goals or intermediate tables) of at most this cost, cheapest first. */
@@ -640,7 +633,6 @@ export class Enumerator {
       if (heap.used_heap_size > HEAP_SHARE_WHEN_FULL * heap.heap_size_limit) throw new Stop('memory');
     } else if (this.bytesHeld >= this.limits.maxStoreBytes) {
       if (!this.limits.lastStepsWhenFull) throw new Stop('memory');
-      this.full = true;
       this.statistics.fullAtCost = this.level;
       this.beginLastSteps(this.level);
     }
