@@ -3,7 +3,9 @@
  * (or the input over it) with the see-through colour gives the output — checked against the
  * library's layering primitive under fast-check, on random grids and on grids built to meet the
  * goal — and in the search, a program that lays a made grid over the input is found within a
- * candidate cap where the plain search finds nothing. The task below is invented.
+ * candidate cap where the plain search finds nothing, and so is one that lays a made grid over
+ * another made grid (a made layer) when the input itself cannot be a layer. The tasks below are
+ * invented.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -100,6 +102,32 @@ describe('layer goals', () => {
     expect(found.solutions).toHaveLength(1);
     expect(found.solutions[0]!.throughGoal).toBe(true);
     expect(found.solutions[0]!.text).toContain('overlay(input,');
+    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
+    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+  });
+
+  it('lays a made grid over a cheap made grid when the input cannot be a layer (a cell is erased)', () => {
+    // An invented task: the cells of colour 3 turn half a turn, leaving background where they were.
+    // The input is no layer here (a 3 becomes 0), but the input without its 3s is.
+    const turn = (rows: number[][]) => rows.map((row) => [...row].reverse()).reverse();
+    const rule = (rows: number[][]) => {
+      const top = turn(rows.map((row) => row.map((v) => (v === 3 ? 3 : 0))));
+      return rows.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v === 3 ? 0 : v)));
+    };
+    const inputs = [
+      [[3, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 3], [0, 0, 0, 0]],
+      [[0, 3, 0, 4], [0, 0, 0, 0], [4, 0, 0, 0]],
+      [[0, 0, 0, 0, 0], [3, 3, 0, 0, 2], [0, 0, 0, 0, 0], [0, 2, 0, 0, 0]],
+    ];
+    const testInput = [[0, 3, 0], [5, 0, 0], [0, 0, 0], [0, 0, 5]];
+    const task = { name: 'turned-threes-moved', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
+    const train = task.train.map((pair) => ({ input: pair.input, output: pair.output }));
+    for (const { input, output } of train) expect(layerGoals([input], [output], layering[0]!, leaf('Grid', 1, input), [leaf('Colour', 2, 0)]).map((goal) => goal.side)).toEqual([]);
+    const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600 };
+    const found = solvePuzzle(task, options);
+    expect(found.solutions).toHaveLength(1);
+    expect(found.solutions[0]!.throughGoal).toBe(true);
+    expect(found.solutions[0]!.text).toMatch(/answer overlay\((?!input,)/);
     expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
     expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
   });

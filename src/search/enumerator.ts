@@ -111,6 +111,12 @@ const INTERMEDIATE_MAXIMUM_CELLS = 100_000;
 /** With only last steps tried, the share of the JavaScript heap limit at which the search stops all the same. */
 const HEAP_SHARE_WHEN_FULL = 0.8;
 
+/** Made layers (addMadeLayers): grids of at most this many bits, taken once that level is done. */
+const MADE_LAYER_MAXIMUM_COST = 10;
+
+/** At most this many layer goals with a made layer: each is tested on every grid kept after. */
+const MADE_LAYER_GOALS = 24;
+
 class Stop extends Error {
   constructor(readonly reason: StopReason) {
     super(reason);
@@ -143,8 +149,10 @@ export class Enumerator {
   /** Programs that fit the demonstrations but break the settled output size: attempts only when nothing better comes. */
   private readonly sizeFallbacks: Candidate[] = [];
   private readonly goals: GoalTable | undefined;
-  /** Goals through a layering call with the input as one layer (layer-goals.ts); empty with goals off. */
-  private readonly layers: readonly LayerGoal[];
+  /** Goals through a layering call with the input, or a cheap made grid, as one layer (layer-goals.ts); empty with goals off. */
+  private readonly layers: LayerGoal[];
+  /** Each layering call and see-through colour the layer goals use (also for made layers). */
+  private readonly layerCalls: { production: Production; transparent: Candidate }[] = [];
   private readonly inputs: readonly Grid[];
   /** The leaf that stands for the input. */
   private readonly inputLeaf: Candidate;
@@ -252,25 +260,62 @@ export class Enumerator {
     const trainInputs = this.inputs.slice(0, this.trainCount);
     for (const rule of this.rules) {
       if (rule.production.section || !rule.production.primitive.laysOver) continue;
+      for (const colour of colours) this.layerCalls.push({ production: rule.production, transparent: colour });
       for (const goal of layerGoals(trainInputs, this.outputs, rule.production, input, colours)) if (goal.cost <= maxCost) goals.push(goal);
     }
     return goals;
   }
 
+  /**
+   * Once every grid of up to `cost` bits is kept: layer goals whose fixed layer is one of those
+   * grids instead of the input (the input with something erased or moved, say), cheapest first and
+   * at most MADE_LAYER_GOALS of them, each with free cells left (a pattern with none wants one grid
+   * and is not worth a test on every kept grid). The grids kept so far are tested against them at
+   * once; later ones as they are kept.
+   */
+  private addMadeLayers(cost: number): void {
+    const made: LayerGoal[] = [];
+    const trainInputs = this.inputs.slice(0, this.trainCount);
+    for (let c = 1; c <= cost && made.length < MADE_LAYER_GOALS; c++) {
+      for (const grid of this.store.at(this.gridType, c)) {
+        if (this.answers(grid.values)) continue;
+        const values = grid.values.slice(0, this.trainCount) as Grid[];
+        if (values.every((v, i) => v.equals(trainInputs[i]!))) continue;
+        for (const call of this.layerCalls) {
+          for (const next of layerGoals(values, this.outputs, call.production, grid, [call.transparent])) {
+            if (!next.fixed.every((f, i) => f.length === next.patterns[i]!.length)) made.push(next);
+          }
+        }
+        if (made.length >= MADE_LAYER_GOALS) break;
+      }
+    }
+    made.length = Math.min(made.length, MADE_LAYER_GOALS);
+    if (made.length === 0) return;
+    this.statistics.goals += made.length;
+    for (let c = 1; c <= cost; c++) {
+      for (const found of this.store.at(this.gridType, c)) {
+        if (this.answers(found.values)) continue;
+        for (const goal of made) if (this.meetsEverywhere(goal, found.values)) this.meetLayerGoal(found, goal);
+      }
+    }
+    this.layers.push(...made);
+  }
+
+  private meetsEverywhere(goal: LayerGoal, values: readonly unknown[]): boolean {
+    for (let i = 0; i < this.trainCount; i++) if (!meetsLayerGoal(goal, i, values[i] as Grid, goal.layer.values[i] as Grid)) return false;
+    return true;
+  }
+
   /** The layer goals these grid values meet on every demonstration. */
   private layersMet(values: readonly unknown[]): LayerGoal[] | undefined {
     let met: LayerGoal[] | undefined;
-    for (const goal of this.layers) {
-      let meets = true;
-      for (let i = 0; i < this.trainCount && meets; i++) meets = meetsLayerGoal(goal, i, values[i] as Grid, this.inputs[i]!);
-      if (meets) (met ??= []).push(goal);
-    }
+    for (const goal of this.layers) if (this.meetsEverywhere(goal, values)) (met ??= []).push(goal);
     return met;
   }
 
   /** Keeps a kept grid that meets a layer goal, laid as the goal says, as a pending solution. */
   private meetLayerGoal(found: Candidate, goal: LayerGoal): void {
-    const input = this.inputLeaf;
+    const input = goal.layer;
     const args = goal.side === 'over' ? [input, found, goal.transparent] : [found, input, goal.transparent];
     const laid = this.callOnEveryInput(goal.production, args, found.cost + goal.cost);
     if (laid && this.answers(laid.values)) this.pending.push(laid);
@@ -293,6 +338,7 @@ export class Enumerator {
           this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
         }
         this.expandLevel(cost);
+        if (cost === MADE_LAYER_MAXIMUM_COST && this.layerCalls.length > 0 && !this.lastStepsOnly) this.addMadeLayers(cost);
         this.acceptPending(cost);
         this.statistics.costReached = cost;
         this.checkBudget();
@@ -502,7 +548,7 @@ export class Enumerator {
 
   /** True when the grid meets some layer goal on the first demonstration. */
   private layerMayMeetFirst(grid: Grid): boolean {
-    for (const goal of this.layers) if (meetsLayerGoal(goal, 0, grid, this.inputs[0]!)) return true;
+    for (const goal of this.layers) if (meetsLayerGoal(goal, 0, grid, goal.layer.values[0] as Grid)) return true;
     return false;
   }
 

@@ -15,6 +15,11 @@
  * Both tests are exact (tests/layer-goals.test.ts checks them against the primitive), so a kept
  * grid that meets one becomes a solution once wrapped in the call; like a goal's, it waits until
  * every cheaper cost has been tried.
+ *
+ * The fixed layer is the input, or a cheap grid the search made from it (a made layer: the input
+ * with an object erased, say, for tasks that move something): the tests are the same with that
+ * grid's values in place of the input's. The cells a pattern fixes are listed, and checked
+ * before the free ones, so that most grids fail at their first cell.
  */
 import type { Grid } from '../grid/grid.ts';
 import type { Production } from './productions.ts';
@@ -26,19 +31,26 @@ const FREE = 255;
 export type LayerSide = 'over' | 'under';
 
 export interface LayerGoal {
-  /** over: the found grid is laid over the input; under: the input is laid over it. */
+  /** over: the found grid is laid over the fixed layer; under: the fixed layer is laid over it. */
   readonly side: LayerSide;
+  /** The fixed layer: the input, or a grid the search made. */
+  readonly layer: Candidate;
   /** The layering call. */
   readonly production: Production;
   /** The see-through colour, a constant of the task. */
   readonly transparent: Candidate;
   /** Per demonstration, what the found grid must hold on each cell (FREE: see the test). */
   readonly patterns: readonly Uint8Array[];
-  /** Bits of the call, the input and the colour. */
+  /** Per demonstration, the cells whose pattern is not FREE. */
+  readonly fixed: readonly Int32Array[];
+  /** Bits of the call, the fixed layer and the colour. */
   readonly cost: number;
 }
 
-/** The goals for one layering production, every see-through colour the task offers and both sides. */
+/**
+ * The goals for one layering production, every see-through colour the task offers and both
+ * sides; `inputs` are the fixed layer's values on the demonstrations (the input's, or a made grid's).
+ */
 export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], production: Production, inputLeaf: Candidate, colours: readonly Candidate[]): LayerGoal[] {
   const goals: LayerGoal[] = [];
   if (outputs.length === 0) return goals;
@@ -55,7 +67,7 @@ export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], pr
         patterns.push(pattern);
       }
       if (patterns.length < outputs.length) continue;
-      goals.push({ side, production, transparent: colour, patterns, cost: production.bits + inputLeaf.cost + colour.cost });
+      goals.push({ side, layer: inputLeaf, production, transparent: colour, patterns, fixed: patterns.map(fixedCells), cost: production.bits + inputLeaf.cost + colour.cost });
     }
   }
   return goals;
@@ -83,25 +95,35 @@ function underPattern(input: Uint8Array, output: Uint8Array, t: number): Uint8Ar
   return pattern;
 }
 
+function fixedCells(pattern: Uint8Array): Int32Array {
+  let count = 0;
+  for (let c = 0; c < pattern.length; c++) if (pattern[c] !== FREE) count++;
+  const fixed = new Int32Array(count);
+  count = 0;
+  for (let c = 0; c < pattern.length; c++) if (pattern[c] !== FREE) fixed[count++] = c;
+  return fixed;
+}
+
 /**
- * True when the grid meets the goal on demonstration i (`input` is that demonstration's input):
- * laid as the goal says, it gives the output there.
+ * True when the grid meets the goal on demonstration i (`input` is the fixed layer's value on
+ * that demonstration): laid as the goal says, it gives the output there.
  */
 export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Grid): boolean {
   if (grid.height !== input.height || grid.width !== input.width) return false;
   const pattern = goal.patterns[i]!;
+  const fixed = goal.fixed[i]!;
   const cells = grid.cells;
-  if (goal.side === 'under') {
-    for (let c = 0; c < cells.length; c++) if (pattern[c] !== FREE && cells[c] !== pattern[c]) return false;
-    return true;
-  }
+  // Under, and the changed cells over: the grid must hold the pattern's colour (over, a changed
+  // cell's colour is neither see-through nor the input's, so it shows only if the grid holds it).
+  for (let k = 0; k < fixed.length; k++) if (cells[fixed[k]!] !== pattern[fixed[k]!]) return false;
+  if (goal.side === 'under') return true;
   const t = goal.transparent.values[0] as number;
   const under = input.cells;
   for (let c = 0; c < cells.length; c++) {
-    const v = cells[c]!;
+    if (pattern[c] !== FREE) continue;
     // What shows on this cell once laid over the input: v, unless v is see-through or the same.
-    const shown = v === t || v === under[c] ? FREE : v;
-    if (shown !== pattern[c]) return false;
+    const v = cells[c]!;
+    if (v !== t && v !== under[c]) return false;
   }
   return true;
 }
