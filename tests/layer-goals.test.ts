@@ -29,6 +29,16 @@ const triples = shapes.chain(({ height, width }) =>
   fc.record({ input: cells(height * width), output: cells(height * width), layer: cells(height * width), mix: cells(height * width), colour: fc.integer({ min: 0, max: 3 }) }).map((r) => ({ height, width, ...r })),
 );
 
+/** Demonstration inputs of the two invented tasks below: a few cells of colour 3 among others. */
+const threesInputs = [
+  [[3, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 3], [0, 0, 0, 0]],
+  [[0, 3, 0, 4], [0, 0, 0, 0], [4, 0, 0, 0]],
+  [[0, 0, 0, 0, 0], [3, 3, 0, 0, 2], [0, 0, 0, 0, 0], [0, 2, 0, 0, 0]],
+];
+
+/** Rows turned half a turn. */
+const turn = (rows: number[][]) => rows.map((row) => [...row].reverse()).reverse();
+
 describe('layer goals', () => {
   it('the library has a layering primitive, and each one so marked lays the top grid over the bottom one', () => {
     expect(layering.map((p) => p.primitive.name)).toEqual(['overlay']);
@@ -84,18 +94,12 @@ describe('layer goals', () => {
 
   it('finds a program that lays a made grid over the input within a cap where the plain search finds nothing', () => {
     // An invented task: the cells of colour 3, turned half a turn, laid over the input.
-    const turn = (rows: number[][]) => rows.map((row) => [...row].reverse()).reverse();
     const rule = (rows: number[][]) => {
       const top = turn(rows.map((row) => row.map((v) => (v === 3 ? 3 : 0))));
       return rows.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v)));
     };
-    const inputs = [
-      [[3, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 3], [0, 0, 0, 0]],
-      [[0, 3, 0, 4], [0, 0, 0, 0], [4, 0, 0, 0]],
-      [[0, 0, 0, 0, 0], [3, 3, 0, 0, 2], [0, 0, 0, 0, 0], [0, 2, 0, 0, 0]],
-    ];
     const testInput = [[0, 0, 3], [5, 0, 0], [0, 0, 0], [3, 0, 5]];
-    const task = { name: 'turned-threes-laid-over', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
+    const task = { name: 'turned-threes-laid-over', train: threesInputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
     // Measured: the plain search needs about 450,000 candidates for a 21-bit program.
     const options = { attempts: 1, maxCandidates: 20_000, timeLimitSeconds: 600 };
     const found = solvePuzzle(task, options);
@@ -109,18 +113,12 @@ describe('layer goals', () => {
   it('lays a made grid over a cheap made grid when the input cannot be a layer (a cell is erased)', () => {
     // An invented task: the cells of colour 3 turn half a turn, leaving background where they were.
     // The input is no layer here (a 3 becomes 0), but the input without its 3s is.
-    const turn = (rows: number[][]) => rows.map((row) => [...row].reverse()).reverse();
     const rule = (rows: number[][]) => {
       const top = turn(rows.map((row) => row.map((v) => (v === 3 ? 3 : 0))));
       return rows.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v === 3 ? 0 : v)));
     };
-    const inputs = [
-      [[3, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 3], [0, 0, 0, 0]],
-      [[0, 3, 0, 4], [0, 0, 0, 0], [4, 0, 0, 0]],
-      [[0, 0, 0, 0, 0], [3, 3, 0, 0, 2], [0, 0, 0, 0, 0], [0, 2, 0, 0, 0]],
-    ];
     const testInput = [[0, 3, 0], [5, 0, 0], [0, 0, 0], [0, 0, 5]];
-    const task = { name: 'turned-threes-moved', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
+    const task = { name: 'turned-threes-moved', train: threesInputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
     const train = task.train.map((pair) => ({ input: pair.input, output: pair.output }));
     for (const { input, output } of train) expect(layerGoals([input], [output], layering[0]!, leaf('Grid', 1, input), [leaf('Colour', 2, 0)]).map((goal) => goal.side)).toEqual([]);
     const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600 };
