@@ -19,9 +19,9 @@ import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
-import { GoalTable, type Goal, type GoalStep } from './goals.ts';
+import { GoalTable, sameGrids, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
-import { layerGoals, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
+import { layerGoals, leavesFreeCells, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
@@ -257,11 +257,10 @@ export class Enumerator {
     for (let i = 1; i < this.trainCount; i++) if (backgroundColour(this.inputs[i]!) !== background) return [];
     const colours = this.leaves.filter((leaf) => leaf.type === 'Colour' && leaf.leaf?.kind === 'literal' && leaf.values[0] === background);
     const goals: LayerGoal[] = [];
-    const trainInputs = this.inputs.slice(0, this.trainCount);
     for (const rule of this.rules) {
       if (rule.production.section || !rule.production.primitive.laysOver) continue;
       for (const colour of colours) this.layerCalls.push({ production: rule.production, transparent: colour });
-      for (const goal of layerGoals(trainInputs, this.outputs, rule.production, input, colours)) if (goal.cost <= maxCost) goals.push(goal);
+      for (const goal of layerGoals(this.inputs, this.outputs, rule.production, input, colours)) if (goal.cost <= maxCost) goals.push(goal);
     }
     return goals;
   }
@@ -278,13 +277,10 @@ export class Enumerator {
     const trainInputs = this.inputs.slice(0, this.trainCount);
     for (let c = 1; c <= cost && made.length < MADE_LAYER_GOALS; c++) {
       for (const grid of this.store.at(this.gridType, c)) {
-        if (this.answers(grid.values)) continue;
-        const values = grid.values.slice(0, this.trainCount) as Grid[];
-        if (values.every((v, i) => v.equals(trainInputs[i]!))) continue;
+        // The input's own goals are there already.
+        if (this.answers(grid.values) || sameGrids(grid.values, trainInputs)) continue;
         for (const call of this.layerCalls) {
-          for (const next of layerGoals(values, this.outputs, call.production, grid, [call.transparent])) {
-            if (!next.fixed.every((f, i) => f.length === next.patterns[i]!.length)) made.push(next);
-          }
+          for (const goal of layerGoals(grid.values as readonly Grid[], this.outputs, call.production, grid, [call.transparent])) if (leavesFreeCells(goal)) made.push(goal);
         }
         if (made.length >= MADE_LAYER_GOALS) break;
       }
@@ -554,8 +550,7 @@ export class Enumerator {
 
   /** True when the values equal every demonstration output. */
   private answers(values: readonly unknown[]): boolean {
-    for (let i = 0; i < this.trainCount; i++) if (!(values[i] as Grid).equals(this.outputs[i]!)) return false;
-    return true;
+    return sameGrids(values, this.outputs);
   }
 
   /** Wraps a kept grid in each table learned from its values to the outputs; keeps those that reproduce them as pending solutions. */

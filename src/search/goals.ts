@@ -41,7 +41,8 @@ export function demonstrationHash(values: readonly unknown[], count: number): nu
   return h >>> 0;
 }
 
-function sameGrids(a: readonly unknown[], b: readonly Grid[]): boolean {
+/** True when the first b.length values equal b's grids, one by one. */
+export function sameGrids(a: readonly unknown[], b: readonly Grid[]): boolean {
   for (let i = 0; i < b.length; i++) if (!(a[i] as Grid).equals(b[i]!)) return false;
   return true;
 }

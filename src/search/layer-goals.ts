@@ -49,9 +49,10 @@ export interface LayerGoal {
 
 /**
  * The goals for one layering production, every see-through colour the task offers and both
- * sides; `inputs` are the fixed layer's values on the demonstrations (the input's, or a made grid's).
+ * sides, with `layer` (the input's leaf, or a made grid) as the fixed layer; `inputs` are its
+ * values, of which the first `outputs.length` (the demonstrations') are read.
  */
-export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], production: Production, inputLeaf: Candidate, colours: readonly Candidate[]): LayerGoal[] {
+export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], production: Production, layer: Candidate, colours: readonly Candidate[]): LayerGoal[] {
   const goals: LayerGoal[] = [];
   if (outputs.length === 0) return goals;
   for (let i = 0; i < outputs.length; i++) if (inputs[i]!.height !== outputs[i]!.height || inputs[i]!.width !== outputs[i]!.width) return goals;
@@ -67,7 +68,7 @@ export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], pr
         patterns.push(pattern);
       }
       if (patterns.length < outputs.length) continue;
-      goals.push({ side, layer: inputLeaf, production, transparent: colour, patterns, fixed: patterns.map(fixedCells), cost: production.bits + inputLeaf.cost + colour.cost });
+      goals.push({ side, layer, production, transparent: colour, patterns, fixed: patterns.map(fixedCells), cost: production.bits + layer.cost + colour.cost });
     }
   }
   return goals;
@@ -93,6 +94,11 @@ function underPattern(input: Uint8Array, output: Uint8Array, t: number): Uint8Ar
     } else pattern[c] = output[c]!;
   }
   return pattern;
+}
+
+/** True when some demonstration's pattern leaves a cell free (one that fixes every cell wants a single grid). */
+export function leavesFreeCells(goal: LayerGoal): boolean {
+  return goal.fixed.some((fixed, i) => fixed.length < goal.patterns[i]!.length);
 }
 
 function fixedCells(pattern: Uint8Array): Int32Array {
