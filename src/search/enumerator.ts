@@ -21,7 +21,7 @@ import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, sameGrids, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
-import { layerGoals, leavesFreeCells, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
+import { layerGoals, laysPartOfGoal, leavesFreeCells, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
@@ -116,6 +116,15 @@ const MADE_LAYER_MAXIMUM_COST = 10;
 
 /** At most this many layer goals with a made layer: each is tested on every grid kept after. */
 const MADE_LAYER_GOALS = 24;
+
+/** Partial layers (addPartialLayers): kept grids of at most this many bits that lay part of a layer goal, taken once that level is done. */
+const PARTIAL_LAYER_MAXIMUM_COST = 12;
+
+/** At most this many layer goals with a partial layer, as for made layers. */
+const PARTIAL_LAYER_GOALS = 24;
+
+/** Grids that lay part of a goal, laid and tried as fixed layers, at most (most cells first): each is a few calls on every input. */
+const PARTIAL_LAYERS_TRIED = 200;
 
 class Stop extends Error {
   constructor(readonly reason: StopReason) {
@@ -286,15 +295,61 @@ export class Enumerator {
       }
     }
     made.length = Math.min(made.length, MADE_LAYER_GOALS);
-    if (made.length === 0) return;
-    this.statistics.goals += made.length;
+    this.addLayerGoals(made, cost);
+  }
+
+  /**
+   * Once every grid of up to `cost` bits is kept: those that lay part of a layer goal right and
+   * nothing wrong (laysPartOfGoal), laid as the goal says, become fixed layers for a second grid
+   * to finish (a task that draws two things by two rules, say). Fewest cells left to add first,
+   * then cheapest; at most PARTIAL_LAYER_GOALS goals, each leaving free cells.
+   */
+  private addPartialLayers(cost: number): void {
+    const parts: { goal: LayerGoal; found: Candidate; covered: number }[] = [];
+    const goals = this.layers.slice();
     for (let c = 1; c <= cost; c++) {
       for (const found of this.store.at(this.gridType, c)) {
         if (this.answers(found.values)) continue;
-        for (const goal of made) if (this.meetsEverywhere(goal, found.values)) this.meetLayerGoal(found, goal);
+        for (const goal of goals) {
+          let covered = 0;
+          for (let i = 0; i < this.trainCount && covered >= 0; i++) {
+            const part = laysPartOfGoal(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
+            covered = part < 0 ? -1 : covered + part;
+          }
+          if (covered > 0 && covered < goal.changes) parts.push({ goal, found, covered });
+        }
       }
     }
-    this.layers.push(...made);
+    // Fewest cells left to add first, then cheapest; stable, so equal parts keep the order they were found in.
+    parts.sort((a, b) => a.goal.changes - a.covered - (b.goal.changes - b.covered) || a.found.cost + a.goal.cost - (b.found.cost + b.goal.cost));
+    const made: LayerGoal[] = [];
+    const laid: Candidate[] = [];
+    for (let k = 0; k < parts.length && k < PARTIAL_LAYERS_TRIED && made.length < PARTIAL_LAYER_GOALS; k++) {
+      const { goal, found } = parts[k]!;
+      const args = goal.side === 'over' ? [goal.layer, found, goal.transparent] : [found, goal.layer, goal.transparent];
+      const both = this.callOnEveryInput(goal.production, args, found.cost + goal.cost);
+      if (!both) continue;
+      // A grid that already holds the fixed layer (the input and something drawn on it) needs no laying.
+      const layer = sameGrids(found.values, both.values as readonly Grid[]) ? found : both;
+      if (laid.some((other) => sameGrids(other.values, layer.values as readonly Grid[]))) continue;
+      laid.push(layer);
+      for (const next of layerGoals(layer.values as readonly Grid[], this.outputs, goal.production, layer, [goal.transparent])) if (leavesFreeCells(next)) made.push(next);
+    }
+    made.length = Math.min(made.length, PARTIAL_LAYER_GOALS);
+    this.addLayerGoals(made, cost);
+  }
+
+  /** Takes more layer goals: grids kept so far (of up to `cost` bits) are tested against them at once, later ones as they are kept. */
+  private addLayerGoals(added: LayerGoal[], cost: number): void {
+    if (added.length === 0) return;
+    this.statistics.goals += added.length;
+    for (let c = 1; c <= cost; c++) {
+      for (const found of this.store.at(this.gridType, c)) {
+        if (this.answers(found.values)) continue;
+        for (const goal of added) if (this.meetsEverywhere(goal, found.values)) this.meetLayerGoal(found, goal);
+      }
+    }
+    this.layers.push(...added);
   }
 
   private meetsEverywhere(goal: LayerGoal, values: readonly unknown[]): boolean {
@@ -335,6 +390,7 @@ export class Enumerator {
         }
         this.expandLevel(cost);
         if (cost === MADE_LAYER_MAXIMUM_COST && this.layerCalls.length > 0 && !this.lastStepsOnly) this.addMadeLayers(cost);
+        if (cost === PARTIAL_LAYER_MAXIMUM_COST && this.layers.length > 0 && !this.lastStepsOnly) this.addPartialLayers(cost);
         this.acceptPending(cost);
         this.statistics.costReached = cost;
         this.checkBudget();

@@ -45,6 +45,8 @@ export interface LayerGoal {
   readonly fixed: readonly Int32Array[];
   /** Bits of the call, the fixed layer and the colour. */
   readonly cost: number;
+  /** Cells the found grid must add, over all demonstrations: fixed cells whose colour is not see-through. */
+  readonly changes: number;
 }
 
 /**
@@ -68,7 +70,10 @@ export function layerGoals(inputs: readonly Grid[], outputs: readonly Grid[], pr
         patterns.push(pattern);
       }
       if (patterns.length < outputs.length) continue;
-      goals.push({ side, layer, production, transparent: colour, patterns, fixed: patterns.map(fixedCells), cost: production.bits + layer.cost + colour.cost });
+      const fixed = patterns.map(fixedCells);
+      let changes = 0;
+      for (let i = 0; i < patterns.length; i++) for (const c of fixed[i]!) if (patterns[i]![c] !== t) changes++;
+      goals.push({ side, layer, production, transparent: colour, patterns, fixed, cost: production.bits + layer.cost + colour.cost, changes });
     }
   }
   return goals;
@@ -132,4 +137,35 @@ export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Gr
     if (v !== t && v !== under[c]) return false;
   }
   return true;
+}
+
+/**
+ * How much of the goal the grid lays right on demonstration i, with nothing laid wrong: the number
+ * of cells it must add that it holds (see `changes`), or -1 when some cell it shows would be wrong
+ * once laid (a cell that would change, but not to the output's colour). A grid that lays part of the goal
+ * right, laid as the goal says, is a fixed layer with less left to add (a partial layer).
+ */
+export function laysPartOfGoal(goal: LayerGoal, i: number, grid: Grid, layer: Grid): number {
+  if (grid.height !== layer.height || grid.width !== layer.width) return -1;
+  const pattern = goal.patterns[i]!;
+  const fixed = goal.fixed[i]!;
+  const cells = grid.cells;
+  const under = layer.cells;
+  const t = goal.transparent.values[0] as number;
+  let covered = 0;
+  for (let k = 0; k < fixed.length; k++) {
+    const c = fixed[k]!;
+    const v = cells[c]!;
+    // Shows nothing here, or what the fixed layer has (left for a later layer to change).
+    if (v === t || v === under[c]) continue;
+    if (v !== pattern[c]) return -1;
+    covered++;
+  }
+  if (goal.side === 'under') return covered;
+  for (let c = 0; c < cells.length; c++) {
+    if (pattern[c] !== FREE) continue;
+    const v = cells[c]!;
+    if (v !== t && v !== under[c]) return -1;
+  }
+  return covered;
 }
