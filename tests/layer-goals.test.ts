@@ -189,4 +189,27 @@ describe('layer goals', () => {
     expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
     expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
   });
+
+  it('lays three made grids in turn through two rounds of partial layers', () => {
+    // The invented task above with a third ring: background cells beside each 2 turn 7.
+    const ring = (rows: number[][], centre: number, colour: number) =>
+      rows.map((row, r) => row.map((v, c) => (v === 0 && [[-1, 0], [1, 0], [0, -1], [0, 1]].some(([dr, dc]) => rows[r + dr!]?.[c + dc!] === centre) ? colour : 0)));
+    const layOver = (bottom: number[][], top: number[][]) => bottom.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v)));
+    const rule = (rows: number[][]) => layOver(layOver(layOver(rows, ring(rows, 3, 5)), ring(rows, 1, 6)), ring(rows, 2, 7));
+    const inputs = [
+      [[0, 0, 0, 0, 0, 0], [0, 3, 0, 0, 0, 0], [0, 0, 0, 0, 1, 0], [0, 0, 0, 0, 0, 0], [2, 0, 0, 0, 0, 0]],
+      [[1, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 2], [0, 0, 0, 3, 0], [0, 0, 0, 0, 0]],
+      [[0, 0, 0, 0, 0], [0, 0, 0, 1, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 3, 0, 0, 2], [0, 0, 0, 0, 0]],
+    ];
+    const testInput = [[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 3, 0], [2, 0, 0, 0, 0]];
+    const task = { name: 'three-rings', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
+    const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600, intermediateGrids: 0 };
+    const found = solvePuzzle(task, options);
+    expect(found.solutions).toHaveLength(1);
+    expect(found.solutions[0]!.throughGoal).toBe(true);
+    const text = found.solutions[0]!.text;
+    expect(text.match(/overlay\(/g)).toHaveLength(2);
+    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
+    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+  });
 });

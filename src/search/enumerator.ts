@@ -21,7 +21,7 @@ import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, sameGrids, type Goal, type GoalStep } from './goals.ts';
 import { IntermediateTables } from './intermediate-tables.ts';
-import { layerGoals, laysPartOfGoal, leavesFreeCells, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
+import { fixedCellsLaid, freeCellsClear, layerGoals, leavesFreeCells, meetsLayerGoal, type LayerGoal } from './layer-goals.ts';
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
@@ -117,10 +117,13 @@ const MADE_LAYER_MAXIMUM_COST = 10;
 /** At most this many layer goals with a made layer: each is tested on every grid kept after. */
 const MADE_LAYER_GOALS = 24;
 
-/** Partial layers (addPartialLayers): kept grids of at most this many bits that lay part of a layer goal, taken once that level is done. */
-const PARTIAL_LAYER_MAXIMUM_COST = 12;
+/**
+ * Partial layers (addPartialLayers): kept grids that lay part of a layer goal, taken once each of
+ * these levels is done (the second round also builds on the first round's goals: three drawings).
+ */
+const PARTIAL_LAYER_LEVELS: readonly number[] = [12, 15];
 
-/** At most this many layer goals with a partial layer, as for made layers. */
+/** At most this many layer goals with a partial layer per round, as for made layers. */
 const PARTIAL_LAYER_GOALS = 24;
 
 /** Grids that lay part of a goal, laid and tried as fixed layers, at most (most cells first): each is a few calls on every input. */
@@ -183,6 +186,9 @@ export class Enumerator {
   /** Milliseconds each finished level spent on its grids and on its other values, by cost. */
   private readonly gridMilliseconds: Float64Array;
   private readonly otherMilliseconds: Float64Array;
+  /** The level and goal count of the last round of partial layers (addPartialLayers), and the layers it laid. */
+  private partialRoundDone = { cost: 0, goals: 0 };
+  private readonly partialLayers: Candidate[] = [];
   /** Argument slots being filled. */
   private readonly args: Candidate[] = [];
   /** Values of the candidate being evaluated (copied when kept). */
@@ -276,24 +282,25 @@ export class Enumerator {
 
   /**
    * Once every grid of up to `cost` bits is kept: layer goals whose fixed layer is one of those
-   * grids instead of the input (the input with something erased or moved, say), cheapest first and
-   * at most MADE_LAYER_GOALS of them, each with free cells left (a pattern with none wants one grid
-   * and is not worth a test on every kept grid). The grids kept so far are tested against them at
-   * once; later ones as they are kept.
+   * grids instead of the input (the input with something erased or moved, say), those with the
+   * fewest cells left to draw first, then the cheapest, at most MADE_LAYER_GOALS of them, each
+   * with free cells left (a pattern with none wants one grid and is not worth a test on every kept
+   * grid). The grids kept so far are tested against them at once; later ones as they are kept.
    */
   private addMadeLayers(cost: number): void {
     const made: LayerGoal[] = [];
     const trainInputs = this.inputs.slice(0, this.trainCount);
-    for (let c = 1; c <= cost && made.length < MADE_LAYER_GOALS; c++) {
+    for (let c = 1; c <= cost; c++) {
       for (const grid of this.store.at(this.gridType, c)) {
         // The input's own goals are there already.
         if (this.answers(grid.values) || sameGrids(grid.values, trainInputs)) continue;
         for (const call of this.layerCalls) {
           for (const goal of layerGoals(grid.values as readonly Grid[], this.outputs, call.production, grid, [call.transparent])) if (leavesFreeCells(goal)) made.push(goal);
         }
-        if (made.length >= MADE_LAYER_GOALS) break;
       }
     }
+    // The layers nearest the outputs (fewest cells left to draw) first, then the cheapest; stable.
+    made.sort((a, b) => a.changes - b.changes || a.cost - b.cost);
     made.length = Math.min(made.length, MADE_LAYER_GOALS);
     this.addLayerGoals(made, cost);
   }
@@ -307,23 +314,31 @@ export class Enumerator {
   private addPartialLayers(cost: number): void {
     const parts: { goal: LayerGoal; found: Candidate; covered: number }[] = [];
     const goals = this.layers.slice();
+    // A later round pairs only what an earlier one has not: its goals with the grids kept since.
+    const { cost: doneCost, goals: doneGoals } = this.partialRoundDone;
+    this.partialRoundDone = { cost, goals: goals.length };
     for (let c = 1; c <= cost; c++) {
       for (const found of this.store.at(this.gridType, c)) {
         if (this.answers(found.values)) continue;
-        for (const goal of goals) {
+        for (let g = c <= doneCost ? doneGoals : 0; g < goals.length; g++) {
+          const goal = goals[g]!;
+          // laysPartOfGoal on every demonstration, its fixed cells first: most grids lay nothing there.
           let covered = 0;
           for (let i = 0; i < this.trainCount && covered >= 0; i++) {
-            const part = laysPartOfGoal(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
+            const part = fixedCellsLaid(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
             covered = part < 0 ? -1 : covered + part;
           }
-          if (covered > 0 && covered < goal.changes) parts.push({ goal, found, covered });
+          if (covered <= 0 || covered >= goal.changes) continue;
+          let clear = true;
+          for (let i = 0; i < this.trainCount && clear; i++) clear = freeCellsClear(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
+          if (clear) parts.push({ goal, found, covered });
         }
       }
     }
     // Fewest cells left to add first, then cheapest; stable, so equal parts keep the order they were found in.
     parts.sort((a, b) => a.goal.changes - a.covered - (b.goal.changes - b.covered) || a.found.cost + a.goal.cost - (b.found.cost + b.goal.cost));
     const made: LayerGoal[] = [];
-    const laid: Candidate[] = [];
+    const laid = this.partialLayers;
     for (let k = 0; k < parts.length && k < PARTIAL_LAYERS_TRIED && made.length < PARTIAL_LAYER_GOALS; k++) {
       const { goal, found } = parts[k]!;
       const args = goal.side === 'over' ? [goal.layer, found, goal.transparent] : [found, goal.layer, goal.transparent];
@@ -333,6 +348,8 @@ export class Enumerator {
       const layer = sameGrids(found.values, both.values as readonly Grid[]) ? found : both;
       if (laid.some((other) => sameGrids(other.values, layer.values as readonly Grid[]))) continue;
       laid.push(layer);
+      // What is left to draw may be a table's work: learned as from any kept grid.
+      if (layer !== found && this.intermediate?.open) this.learnTables(layer);
       for (const next of layerGoals(layer.values as readonly Grid[], this.outputs, goal.production, layer, [goal.transparent])) if (leavesFreeCells(next)) made.push(next);
     }
     made.length = Math.min(made.length, PARTIAL_LAYER_GOALS);
@@ -390,7 +407,7 @@ export class Enumerator {
         }
         this.expandLevel(cost);
         if (cost === MADE_LAYER_MAXIMUM_COST && this.layerCalls.length > 0 && !this.lastStepsOnly) this.addMadeLayers(cost);
-        if (cost === PARTIAL_LAYER_MAXIMUM_COST && this.layers.length > 0 && !this.lastStepsOnly) this.addPartialLayers(cost);
+        if (PARTIAL_LAYER_LEVELS.includes(cost) && this.layers.length > 0 && !this.lastStepsOnly) this.addPartialLayers(cost);
         this.acceptPending(cost);
         this.statistics.costReached = cost;
         this.checkBudget();

@@ -142,10 +142,19 @@ export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Gr
 /**
  * How much of the goal the grid lays right on demonstration i, with nothing laid wrong: the number
  * of cells it must add that it holds (see `changes`), or -1 when some cell it shows would be wrong
- * once laid (a cell that would change, but not to the output's colour). A grid that lays part of the goal
- * right, laid as the goal says, is a fixed layer with less left to add (a partial layer).
+ * once laid (a cell that would change, but not to the output's colour). A grid that lays part of
+ * the goal right, laid as the goal says, is a fixed layer with less left to add (a partial layer).
  */
 export function laysPartOfGoal(goal: LayerGoal, i: number, grid: Grid, layer: Grid): number {
+  const covered = fixedCellsLaid(goal, i, grid, layer);
+  return covered >= 0 && freeCellsClear(goal, i, grid, layer) ? covered : -1;
+}
+
+/**
+ * The first half of {@link laysPartOfGoal}, on the goal's fixed cells only (few, so a search asks
+ * this of every demonstration first): how many it lays right, or -1 when one is laid wrong.
+ */
+export function fixedCellsLaid(goal: LayerGoal, i: number, grid: Grid, layer: Grid): number {
   if (grid.height !== layer.height || grid.width !== layer.width) return -1;
   const pattern = goal.patterns[i]!;
   const fixed = goal.fixed[i]!;
@@ -161,11 +170,20 @@ export function laysPartOfGoal(goal: LayerGoal, i: number, grid: Grid, layer: Gr
     if (v !== pattern[c]) return -1;
     covered++;
   }
-  if (goal.side === 'under') return covered;
+  return covered;
+}
+
+/** The second half of {@link laysPartOfGoal}: laid over, the grid shows nothing new on a free cell (under, free cells never show). */
+export function freeCellsClear(goal: LayerGoal, i: number, grid: Grid, layer: Grid): boolean {
+  if (goal.side === 'under') return true;
+  const pattern = goal.patterns[i]!;
+  const cells = grid.cells;
+  const under = layer.cells;
+  const t = goal.transparent.values[0] as number;
   for (let c = 0; c < cells.length; c++) {
     if (pattern[c] !== FREE) continue;
     const v = cells[c]!;
-    if (v !== t && v !== under[c]) return -1;
+    if (v !== t && v !== under[c]) return false;
   }
-  return covered;
+  return true;
 }
