@@ -39,6 +39,33 @@ const threesInputs = [
 /** Rows turned half a turn. */
 const turn = (rows: number[][]) => rows.map((row) => [...row].reverse()).reverse();
 
+/** Background cells beside (sharing an edge with) a cell of `centre` take `colour`; every other cell is 0. */
+const ring = (rows: number[][], centre: number, colour: number) =>
+  rows.map((row, r) => row.map((v, c) => (v === 0 && [[-1, 0], [1, 0], [0, -1], [0, 1]].some(([dr, dc]) => rows[r + dr!]?.[c + dc!] === centre) ? colour : 0)));
+
+/** `top` laid over `bottom` with 0 see-through. */
+const layRows = (bottom: number[][], top: number[][]) => bottom.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v)));
+
+/** Inputs of the invented ring tasks: single cells of colours 1, 2 and 3 on 0. */
+const ringInputs = [
+  [[0, 0, 0, 0, 0, 0], [0, 3, 0, 0, 0, 0], [0, 0, 0, 0, 1, 0], [0, 0, 0, 0, 0, 0], [2, 0, 0, 0, 0, 0]],
+  [[1, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 2], [0, 0, 0, 3, 0], [0, 0, 0, 0, 0]],
+  [[0, 0, 0, 0, 0], [0, 0, 0, 1, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 3, 0, 0, 2], [0, 0, 0, 0, 0]],
+];
+const ringTestInput = [[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 3, 0], [2, 0, 0, 0, 0]];
+
+/**
+ * An invented task: a ring of each (centre, colour) pair, laid over the input in turn; solved
+ * within a candidate cap with goals on and off. Tables learned from made grids are off in both:
+ * they find a dearer cell rule on the way.
+ */
+function solveRings(name: string, rings: readonly [number, number][]) {
+  const rule = (rows: number[][]) => rings.reduce((out, [centre, colour]) => layRows(out, ring(rows, centre, colour)), rows);
+  const task = { name, train: ringInputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(ringTestInput)] };
+  const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600, intermediateGrids: 0 };
+  return { rule, found: solvePuzzle(task, options), withoutGoals: solvePuzzle(task, { ...options, goalBits: 0 }) };
+}
+
 describe('layer goals', () => {
   it('the library has a layering primitive, and each one so marked lays the top grid over the bottom one', () => {
     expect(layering.map((p) => p.primitive.name)).toEqual(['overlay']);
@@ -165,51 +192,24 @@ describe('layer goals', () => {
   });
 
   it('lays two made grids in turn when each draws part of the change (a partial layer)', () => {
-    // An invented task: background cells beside each 3 (sharing an edge) turn 5, and those
-    // beside each 1 turn 6. Each ring is one call too dear to be a made layer, and neither alone
-    // gives the output; the first, laid over the input, is a fixed layer for the second.
-    const ring = (rows: number[][], centre: number, colour: number) =>
-      rows.map((row, r) => row.map((v, c) => (v === 0 && [[-1, 0], [1, 0], [0, -1], [0, 1]].some(([dr, dc]) => rows[r + dr!]?.[c + dc!] === centre) ? colour : 0)));
-    const layOver = (bottom: number[][], top: number[][]) => bottom.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v)));
-    const rule = (rows: number[][]) => layOver(layOver(rows, ring(rows, 3, 5)), ring(rows, 1, 6));
-    const inputs = [
-      [[0, 0, 0, 0, 0, 0], [0, 3, 0, 0, 0, 0], [0, 0, 0, 0, 1, 0], [0, 0, 0, 0, 0, 0], [2, 0, 0, 0, 0, 0]],
-      [[1, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 3, 0], [0, 0, 0, 0, 0]],
-      [[0, 0, 0, 0, 0], [0, 0, 0, 1, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 3, 0, 0, 2], [0, 0, 0, 0, 0]],
-    ];
-    const testInput = [[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 3, 0], [2, 0, 0, 0, 0]];
-    const task = { name: 'two-rings', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
-    // Tables learned from made grids are off: they find a dearer cell rule on the way.
-    const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600, intermediateGrids: 0 };
-    const found = solvePuzzle(task, options);
+    // Rings of 5 beside each 3 and of 6 beside each 1. Each ring is one call too dear to be a made
+    // layer, and neither alone gives the output; the first, laid over the input, is a fixed layer
+    // for the second.
+    const { rule, found, withoutGoals } = solveRings('two-rings', [[3, 5], [1, 6]]);
     expect(found.solutions).toHaveLength(1);
     expect(found.solutions[0]!.throughGoal).toBe(true);
-    const text = found.solutions[0]!.text;
-    expect(text).toMatch(/answer overlay\(\w+, \w+, #0\)/);
-    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
-    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+    expect(found.solutions[0]!.text).toMatch(/answer overlay\(\w+, \w+, #0\)/);
+    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(ringTestInput));
+    expect(withoutGoals.solutions).toEqual([]);
   });
 
   it('lays three made grids in turn through two rounds of partial layers', () => {
-    // The invented task above with a third ring: background cells beside each 2 turn 7.
-    const ring = (rows: number[][], centre: number, colour: number) =>
-      rows.map((row, r) => row.map((v, c) => (v === 0 && [[-1, 0], [1, 0], [0, -1], [0, 1]].some(([dr, dc]) => rows[r + dr!]?.[c + dc!] === centre) ? colour : 0)));
-    const layOver = (bottom: number[][], top: number[][]) => bottom.map((row, r) => row.map((v, c) => (top[r]![c] !== 0 ? top[r]![c]! : v)));
-    const rule = (rows: number[][]) => layOver(layOver(layOver(rows, ring(rows, 3, 5)), ring(rows, 1, 6)), ring(rows, 2, 7));
-    const inputs = [
-      [[0, 0, 0, 0, 0, 0], [0, 3, 0, 0, 0, 0], [0, 0, 0, 0, 1, 0], [0, 0, 0, 0, 0, 0], [2, 0, 0, 0, 0, 0]],
-      [[1, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 2], [0, 0, 0, 3, 0], [0, 0, 0, 0, 0]],
-      [[0, 0, 0, 0, 0], [0, 0, 0, 1, 0], [0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 3, 0, 0, 2], [0, 0, 0, 0, 0]],
-    ];
-    const testInput = [[0, 0, 0, 0, 0], [0, 1, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 0, 3, 0], [2, 0, 0, 0, 0]];
-    const task = { name: 'three-rings', train: inputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(testInput)] };
-    const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600, intermediateGrids: 0 };
-    const found = solvePuzzle(task, options);
+    // A third ring, of 7 beside each 2: the second round lays it over the first round's layers.
+    const { rule, found, withoutGoals } = solveRings('three-rings', [[3, 5], [1, 6], [2, 7]]);
     expect(found.solutions).toHaveLength(1);
     expect(found.solutions[0]!.throughGoal).toBe(true);
-    const text = found.solutions[0]!.text;
-    expect(text.match(/overlay\(/g)).toHaveLength(2);
-    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
-    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+    expect(found.solutions[0]!.text.match(/overlay\(/g)).toHaveLength(2);
+    expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(ringTestInput));
+    expect(withoutGoals.solutions).toEqual([]);
   });
 });
