@@ -29,6 +29,19 @@ const triples = shapes.chain(({ height, width }) =>
   fc.record({ input: cells(height * width), output: cells(height * width), layer: cells(height * width), mix: cells(height * width), colour: fc.integer({ min: 0, max: 3 }) }).map((r) => ({ height, width, ...r })),
 );
 
+/**
+ * A random input and output with the layer goals between them (see-through colour `colour`); half
+ * the time the output is made by laying the random `layer` over the input, so that goals apply
+ * and some grids meet them. `g` makes a grid of the case's shape.
+ */
+const goalCases = fc.tuple(triples, fc.boolean()).map(([{ height, width, input, output, layer, mix, colour }, built]) => {
+  const g = (c: ArrayLike<number>) => new Grid(height, width, Uint8Array.from(c));
+  const inputGrid = g(input);
+  const outputGrid = built ? lay(inputGrid, g(layer), colour) : g(output);
+  const goals = layerGoals([inputGrid], [outputGrid], layering[0]!, leaf('Grid', 1, inputGrid), [leaf('Colour', 2, colour)]);
+  return { g, inputGrid, outputGrid, goals, layer: g(layer), mix, colour };
+});
+
 /** Demonstration inputs of the two invented tasks below: a few cells of colour 3 among others. */
 const threesInputs = [
   [[3, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 3], [0, 0, 0, 0]],
@@ -83,17 +96,12 @@ describe('layer goals', () => {
   it('a grid meets a goal exactly when laying it as the goal says gives the output', () => {
     let met = 0;
     fc.assert(
-      fc.property(triples, fc.boolean(), ({ height, width, input, output, layer, mix, colour }, built) => {
-        const g = (c: number[]) => new Grid(height, width, Uint8Array.from(c));
-        const inputGrid = g(input);
-        // Half the time the output is made by laying a random grid, so that goals apply and some grids meet them.
-        const outputGrid = built ? lay(inputGrid, g(layer), colour) : g(output);
-        const goals = layerGoals([inputGrid], [outputGrid], layering[0]!, leaf('Grid', 1, inputGrid), [leaf('Colour', 2, colour)]);
+      fc.property(goalCases, ({ g, inputGrid, outputGrid, goals, layer, mix, colour }) => {
         for (const goal of goals) {
           // Candidates: the random layer, and one built from the output to meet the goal where it can.
           const meetOver = outputGrid.cells.map((v, c) => (v !== inputGrid.cells[c] ? v : mix[c]! % 2 === 0 ? colour : inputGrid.cells[c]!));
           const meetUnder = outputGrid.cells.map((v, c) => (inputGrid.cells[c] === colour ? v : mix[c]!));
-          for (const candidate of [g(layer), g(Array.from(goal.side === 'over' ? meetOver : meetUnder))]) {
+          for (const candidate of [layer, g(goal.side === 'over' ? meetOver : meetUnder)]) {
             const laid = goal.side === 'over' ? lay(inputGrid, candidate, colour) : lay(candidate, inputGrid, colour);
             const meets = meetsLayerGoal(goal, 0, candidate, inputGrid);
             expect(meets).toBe(laid.equals(outputGrid));
@@ -110,14 +118,11 @@ describe('layer goals', () => {
     let parts = 0;
     let wrong = 0;
     fc.assert(
-      fc.property(triples, fc.boolean(), ({ height, width, input, output, layer, mix, colour }, built) => {
-        const g = (c: number[]) => new Grid(height, width, Uint8Array.from(c));
-        const inputGrid = g(input);
-        const outputGrid = built ? lay(inputGrid, g(layer), colour) : g(output);
-        for (const goal of layerGoals([inputGrid], [outputGrid], layering[0]!, leaf('Grid', 1, inputGrid), [leaf('Colour', 2, colour)])) {
+      fc.property(goalCases, ({ g, inputGrid, outputGrid, goals, layer, mix, colour }) => {
+        for (const goal of goals) {
           // Candidates: the random layer, and the output's own colours kept on some cells only (see-through on the rest).
           const some = g(Array.from(outputGrid.cells, (v, c) => (mix[c]! % 2 === 0 ? v : colour)));
-          for (const candidate of [g(layer), some]) {
+          for (const candidate of [layer, some]) {
             const laid = goal.side === 'over' ? lay(inputGrid, candidate, colour) : lay(candidate, inputGrid, colour);
             let changed = 0;
             let right = true;
