@@ -322,16 +322,8 @@ export class Enumerator {
         if (this.answers(found.values)) continue;
         for (let g = c <= doneCost ? doneGoals : 0; g < goals.length; g++) {
           const goal = goals[g]!;
-          // laysPartOfGoal on every demonstration, its fixed cells first: most grids lay nothing there.
-          let covered = 0;
-          for (let i = 0; i < this.trainCount && covered >= 0; i++) {
-            const part = fixedCellsLaid(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
-            covered = part < 0 ? -1 : covered + part;
-          }
-          if (covered <= 0 || covered >= goal.changes) continue;
-          let clear = true;
-          for (let i = 0; i < this.trainCount && clear; i++) clear = freeCellsClear(goal, i, found.values[i] as Grid, goal.layer.values[i] as Grid);
-          if (clear) parts.push({ goal, found, covered });
+          const covered = this.laidPartEverywhere(goal, found.values);
+          if (covered > 0 && covered < goal.changes) parts.push({ goal, found, covered });
         }
       }
     }
@@ -367,6 +359,22 @@ export class Enumerator {
       }
     }
     this.layers.push(...added);
+  }
+
+  /**
+   * laysPartOfGoal summed over the demonstrations (-1 when some cell is laid wrong), its fixed
+   * cells on every demonstration first: most grids lay nothing there, and then nothing else is read.
+   */
+  private laidPartEverywhere(goal: LayerGoal, values: readonly unknown[]): number {
+    let covered = 0;
+    for (let i = 0; i < this.trainCount; i++) {
+      const part = fixedCellsLaid(goal, i, values[i] as Grid, goal.layer.values[i] as Grid);
+      if (part < 0) return -1;
+      covered += part;
+    }
+    if (covered === 0) return 0;
+    for (let i = 0; i < this.trainCount; i++) if (!freeCellsClear(goal, i, values[i] as Grid, goal.layer.values[i] as Grid)) return -1;
+    return covered;
   }
 
   private meetsEverywhere(goal: LayerGoal, values: readonly unknown[]): boolean {

@@ -127,16 +127,7 @@ export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Gr
   // Under, and the changed cells over: the grid must hold the pattern's colour (over, a changed
   // cell's colour is neither see-through nor the input's, so it shows only if the grid holds it).
   for (let k = 0; k < fixed.length; k++) if (cells[fixed[k]!] !== pattern[fixed[k]!]) return false;
-  if (goal.side === 'under') return true;
-  const t = goal.transparent.values[0] as number;
-  const under = input.cells;
-  for (let c = 0; c < cells.length; c++) {
-    if (pattern[c] !== FREE) continue;
-    // What shows on this cell once laid over the input: v, unless v is see-through or the same.
-    const v = cells[c]!;
-    if (v !== t && v !== under[c]) return false;
-  }
-  return true;
+  return freeCellsClear(goal, i, grid, input);
 }
 
 /**
@@ -173,7 +164,10 @@ export function fixedCellsLaid(goal: LayerGoal, i: number, grid: Grid, layer: Gr
   return covered;
 }
 
-/** The second half of {@link laysPartOfGoal}: laid over, the grid shows nothing new on a free cell (under, free cells never show). */
+/**
+ * The second half of {@link laysPartOfGoal} and {@link meetsLayerGoal}: laid over, the grid shows
+ * nothing new on a free cell (under, free cells never show).
+ */
 export function freeCellsClear(goal: LayerGoal, i: number, grid: Grid, layer: Grid): boolean {
   if (goal.side === 'under') return true;
   const pattern = goal.patterns[i]!;
@@ -182,6 +176,7 @@ export function freeCellsClear(goal: LayerGoal, i: number, grid: Grid, layer: Gr
   const t = goal.transparent.values[0] as number;
   for (let c = 0; c < cells.length; c++) {
     if (pattern[c] !== FREE) continue;
+    // What shows on this cell once laid over the layer: v, unless v is see-through or the same.
     const v = cells[c]!;
     if (v !== t && v !== under[c]) return false;
   }
