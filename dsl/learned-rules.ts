@@ -1,9 +1,10 @@
 /**
- * Learned tables: a cell rule or an object rule is a literal table read off the demonstrations
+ * Learned tables: a cell rule, an object rule or a grid rule is a literal table read off the demonstrations
  * (src/search/learned-tables.ts), paid for entry by entry (README, "Description length"). These
- * primitives apply one to a grid; a cell or object whose key the table lacks makes them fail.
+ * primitives apply one to a grid; a cell, object or grid whose key the table lacks makes them fail.
  */
 import { applyCellRule } from '../src/grid/cell-rule-table.ts';
+import { applyGridRule } from '../src/grid/grid-rule-table.ts';
 import { applyObjectRule } from '../src/grid/object-rule-table.ts';
 import { primitive } from '../src/library/primitive.ts';
 
@@ -35,5 +36,19 @@ export const learnedRulePrimitives = [
       output: [[0, 0, 5, 5], [3, 3, 3, 0], [0, 0, 0, 0]],
     },
     run: applyObjectRule,
+  }),
+  primitive({
+    name: 'apply_grid_rule',
+    category: 'learned tables',
+    parameters: ['Grid', 'GridRule'],
+    result: 'Grid',
+    bits: 4,
+    doc: "Gives the grid the rule's table holds for a property of the whole input grid (its colours, cells, objects, shape, symmetry); fails on a value the table lacks.",
+    example: {
+      input: [[0, 3, 0], [3, 3, 3]],
+      expression: 'apply_grid_rule(grid, grid_rule[colour_count]{1 -> 0, 2 -> 5})',
+      output: [[5]],
+    },
+    run: applyGridRule,
   }),
 ];

@@ -8,6 +8,7 @@ export { Point } from './language/point.ts';
 export { Palette } from './language/palette.ts';
 export { CellRule } from './grid/cell-rule-table.ts';
 export { ObjectRule } from './grid/object-rule-table.ts';
+export { GridRule } from './grid/grid-rule-table.ts';
 export { FAILURE, isFailure, type Failure } from './language/failure.ts';
 export type { BaseType, FunctionType, Type, Value } from './language/types.ts';
 

@@ -1,4 +1,5 @@
 import type { CellFeature, CellRuleEntry } from '../grid/cell-rule-table.ts';
+import type { GridProperty, GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { ObjectGrouping, ObjectProperty, ObjectRuleEntry } from '../grid/object-rule-table.ts';
 
 /**
@@ -19,7 +20,9 @@ export type LiteralValue =
       readonly grouping: ObjectGrouping;
       readonly property: ObjectProperty;
       readonly entries: readonly ObjectRuleEntry[];
-    };
+    }
+  /** A learned table from a property of the whole grid to an output grid (src/grid/grid-rule-table.ts). */
+  | { readonly type: 'GridRule'; readonly property: GridProperty; readonly entries: readonly GridRuleEntry[] };
 
 export type Expression =
   | { readonly kind: 'variable'; readonly name: string }

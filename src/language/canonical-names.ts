@@ -25,6 +25,7 @@ export const TYPE_WORDS: Readonly<Record<string, string>> = {
   Palette: 'palette',
   CellRule: 'cell_table',
   ObjectRule: 'object_table',
+  GridRule: 'grid_table',
 };
 
 /** The canonical step names for steps of these types, in order. */

@@ -5,6 +5,7 @@
  */
 import { Grid } from '../grid/grid.ts';
 import { CellRule } from '../grid/cell-rule-table.ts';
+import { GridRule } from '../grid/grid-rule-table.ts';
 import { ObjectRule } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 import { checkProgram } from './checker.ts';
@@ -56,6 +57,8 @@ export function literalValue(l: LiteralValue): unknown {
       return new CellRule(l.features, l.entries);
     case 'ObjectRule':
       return new ObjectRule(l.grouping, l.property, l.entries);
+    case 'GridRule':
+      return new GridRule(l.property, l.entries);
   }
 }
 

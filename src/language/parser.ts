@@ -26,6 +26,8 @@ import {
   type ObjectProperty,
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
+import { Grid, shapeAllowed } from '../grid/grid.ts';
+import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { Expression, LiteralValue, Program, Step } from './ast.ts';
 
 export class ProgramSyntaxError extends Error {
@@ -226,17 +228,21 @@ function parseObjectKey(r: LineReader, property: ObjectProperty): ObjectKey {
       return r.colour();
     case 'yes or no':
       return oneOf(r, ['no', 'yes'], "'yes' or 'no'") === 'yes' ? 1 : 0;
-    case 'shape': {
-      r.skipSpaces();
-      const match = /^[x.]+(?:\/[x.]+)*/.exec(r.text.slice(r.position));
-      const rows = match ? match[0].split('/') : [];
-      if (!match || rows.some((row) => row.length !== rows[0]!.length) || !match[0].includes('x')) {
-        r.fail("a shape: rows of 'x' and '.' of one length joined by '/', such as 'xx/x.'");
-      }
-      r.position += match[0].length;
-      return match[0];
-    }
+    case 'shape':
+      return parseShape(r);
   }
+}
+
+/** A shape key: rows of `x` and `.` of one length joined by `/`, at least one `x`. */
+function parseShape(r: LineReader): string {
+  r.skipSpaces();
+  const match = /^[x.]+(?:\/[x.]+)*/.exec(r.text.slice(r.position));
+  const rows = match ? match[0].split('/') : [];
+  if (!match || rows.some((row) => row.length !== rows[0]!.length) || !match[0].includes('x')) {
+    r.fail("a shape: rows of 'x' and '.' of one length joined by '/', such as 'xx/x.'");
+  }
+  r.position += match[0].length;
+  return match[0];
 }
 
 function parseOutcome(r: LineReader): ObjectOutcome {
@@ -279,6 +285,71 @@ function parseObjectRule(r: LineReader): LiteralValue {
   }
   r.expect('}', "',' or '}' in the table");
   return { type: 'ObjectRule', grouping, property, entries };
+}
+
+function parseGridKey(r: LineReader, property: GridProperty): GridKey {
+  switch (gridPropertyValues(property)) {
+    case 'number':
+      return boundedInteger(r, 0, Number.MAX_SAFE_INTEGER, 'a whole number from 0');
+    case 'yes or no':
+      return oneOf(r, ['no', 'yes'], "'yes' or 'no'") === 'yes' ? 1 : 0;
+    case 'colours': {
+      let set = '';
+      while (r.peek() === '#') {
+        const start = r.position;
+        const colour = r.colour();
+        if (set !== '' && colour <= Number(set[set.length - 1])) {
+          r.position = start;
+          r.fail('a colour above the one before it (the colours of a set in rising order)');
+        }
+        set += String(colour);
+      }
+      if (set === '') r.fail("the colours present, such as '#0 #2'");
+      return set;
+    }
+    case 'shape':
+      return parseShape(r);
+  }
+}
+
+/** A grid written as rows of colour digits of one length joined by `/`, such as `505/050`. */
+function parseDigitGrid(r: LineReader): Grid {
+  r.skipSpaces();
+  const match = /^[0-9]+(?:\/[0-9]+)*/.exec(r.text.slice(r.position));
+  const rows = match ? match[0].split('/') : [];
+  if (!match || rows.some((row) => row.length !== rows[0]!.length) || !shapeAllowed(rows.length, rows[0]!.length)) {
+    r.fail("a grid: rows of colour digits of one length joined by '/', such as '505/050', within the size cap");
+  }
+  r.position += match[0].length;
+  return Grid.fromRows(rows.map((row) => [...row].map(Number)));
+}
+
+/** `grid_rule[property]{value -> grid, ...}`, after the word `grid_rule`. */
+function parseGridRule(r: LineReader): LiteralValue {
+  r.expect('[');
+  const property = oneOf(r, GRID_PROPERTIES, `a grid property (${GRID_PROPERTIES.join(', ')})`);
+  r.expect(']', "']' after the property");
+  r.expect('{', "'{' opening the table");
+  const entries: GridRuleEntry[] = [];
+  const seen = new Set<string>();
+  if (r.peek() !== '}') {
+    for (;;) {
+      r.skipSpaces();
+      const start = r.position;
+      const key = parseGridKey(r, property);
+      if (seen.has(String(key))) {
+        r.position = start;
+        r.fail('a key not already in the table');
+      }
+      seen.add(String(key));
+      r.expect('->', "'->' after the key");
+      entries.push({ key, grid: parseDigitGrid(r) });
+      if (r.peek() !== ',') break;
+      r.expect(',');
+    }
+  }
+  r.expect('}', "',' or '}' in the table");
+  return { type: 'GridRule', property, entries };
 }
 
 /** Calls nest at most this deep (deeper text is refused, never a stack overflow). */
@@ -340,6 +411,7 @@ function parseExpressionAt(r: LineReader, depth: number): Expression {
   if (name === 'true' || name === 'false') return { kind: 'literal', literal: { type: 'Bool', value: name === 'true' } };
   if (name === 'cell_rule' && r.peek() === '[') return { kind: 'literal', literal: parseCellRule(r) };
   if (name === 'object_rule' && r.peek() === '[') return { kind: 'literal', literal: parseObjectRule(r) };
+  if (name === 'grid_rule' && r.peek() === '[') return { kind: 'literal', literal: parseGridRule(r) };
   if (r.peek() !== '(') return { kind: 'variable', name };
   if (depth >= MAXIMUM_NESTING) r.fail(`at most ${MAXIMUM_NESTING} nested calls (name some of them as steps)`);
   r.expect('(');

@@ -11,15 +11,19 @@
  *
  *   cell_rule[colour, row_holds #2]{#0 no -> #0, #0 yes -> #2, #2 yes -> #2}
  *   object_rule[by_colour, size]{1 -> remove, 2 -> #5, 4 -> keep, 6 -> move (1, 0)}
+ *   grid_rule[colour_count]{2 -> 505/050, 3 -> 555/000}
  *
  * A cell rule lists its features in brackets, then its entries: a key (one value per feature,
  * separated by spaces) and the output colour. Feature values are colours `#3`, `edge` (a
  * neighbour outside the grid), counts `2`, `yes`/`no`, `even`/`odd`. An object rule names how
  * the grid is cut into objects and the property it reads, then its entries: a property value
  * (a number, a colour, `yes`/`no`, or a shape such as `xx/x.`) and what becomes of such
- * objects: `keep`, `remove`, a colour, or `move (rows, columns)`.
+ * objects: `keep`, `remove`, a colour, or `move (rows, columns)`. A grid rule names a property
+ * of the whole input, then its entries: a value (a number, `yes`/`no`, a shape, or the colours
+ * present such as `#0 #2`) and the output grid, its rows of colour digits joined by `/`.
  */
 import { featureTakesColour, featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { gridDigits, gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 
@@ -47,6 +51,17 @@ function printObjectKey(property: ObjectProperty, key: ObjectKey): string {
   switch (propertyValues(property)) {
     case 'colour':
       return `#${key}`;
+    case 'yes or no':
+      return key ? 'yes' : 'no';
+    default:
+      return String(key);
+  }
+}
+
+function printGridKey(property: GridProperty, key: GridKey): string {
+  switch (gridPropertyValues(property)) {
+    case 'colours':
+      return [...String(key)].map((d) => `#${d}`).join(' ');
     case 'yes or no':
       return key ? 'yes' : 'no';
     default:
@@ -87,6 +102,10 @@ export function printLiteral(l: LiteralValue): string {
     case 'ObjectRule': {
       const entries = l.entries.map((e) => `${printObjectKey(l.property, e.key)} -> ${printOutcome(e.outcome)}`);
       return `object_rule[${l.grouping}, ${l.property}]{${entries.join(', ')}}`;
+    }
+    case 'GridRule': {
+      const entries = l.entries.map((e) => `${printGridKey(l.property, e.key)} -> ${gridDigits(e.grid)}`);
+      return `grid_rule[${l.property}]{${entries.join(', ')}}`;
     }
   }
 }

@@ -7,12 +7,13 @@
 import type { Grid } from '../grid/grid.ts';
 import type { GridObject } from '../grid/grid-object.ts';
 import type { CellRule } from '../grid/cell-rule-table.ts';
+import type { GridRule } from '../grid/grid-rule-table.ts';
 import type { ObjectRule } from '../grid/object-rule-table.ts';
 import type { Palette } from './palette.ts';
 import type { Point } from './point.ts';
 import type { Failure } from './failure.ts';
 
-export const BASE_TYPES = ['Grid', 'Colour', 'Int', 'Bool', 'Object', 'Objects', 'Point', 'Grids', 'Palette', 'CellRule', 'ObjectRule'] as const;
+export const BASE_TYPES = ['Grid', 'Colour', 'Int', 'Bool', 'Object', 'Objects', 'Point', 'Grids', 'Palette', 'CellRule', 'ObjectRule', 'GridRule'] as const;
 export type BaseType = (typeof BASE_TYPES)[number];
 export type FunctionType = `${BaseType} -> ${BaseType}`;
 export type Type = BaseType | FunctionType;
@@ -30,6 +31,7 @@ export interface BaseValues {
   Palette: Palette;
   CellRule: CellRule;
   ObjectRule: ObjectRule;
+  GridRule: GridRule;
 }
 
 export type ValueOf<T extends Type> = T extends BaseType

@@ -5,6 +5,7 @@
 import { Grid } from '../grid/grid.ts';
 import { GridObject } from '../grid/grid-object.ts';
 import { CellRule } from '../grid/cell-rule-table.ts';
+import { GridRule } from '../grid/grid-rule-table.ts';
 import { ObjectRule } from '../grid/object-rule-table.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
@@ -33,6 +34,8 @@ export function hashValue(type: BaseType, value: unknown): number {
       return (value as CellRule).hash;
     case 'ObjectRule':
       return (value as ObjectRule).hash;
+    case 'GridRule':
+      return (value as GridRule).hash;
     case 'Objects':
     case 'Grids': {
       const list = value as readonly (Grid | GridObject)[];
@@ -63,6 +66,8 @@ export function valuesEqual(type: BaseType, a: unknown, b: unknown): boolean {
       return (a as CellRule).equals(b as CellRule);
     case 'ObjectRule':
       return (a as ObjectRule).equals(b as ObjectRule);
+    case 'GridRule':
+      return (a as GridRule).equals(b as GridRule);
     case 'Objects':
     case 'Grids': {
       const x = a as readonly (Grid | GridObject)[];
@@ -99,6 +104,8 @@ export function valueHasType(type: BaseType, value: unknown): boolean {
       return value instanceof CellRule;
     case 'ObjectRule':
       return value instanceof ObjectRule;
+    case 'GridRule':
+      return value instanceof GridRule;
     case 'Objects':
       return Array.isArray(value) && value.every((v) => v instanceof GridObject);
     case 'Grids':

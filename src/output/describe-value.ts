@@ -8,6 +8,7 @@ import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { printLiteral } from '../language/printer.ts';
 import { CellRule } from '../grid/cell-rule-table.ts';
+import { GridRule } from '../grid/grid-rule-table.ts';
 import { ObjectRule } from '../grid/object-rule-table.ts';
 import { Point } from '../language/point.ts';
 import type { Type } from '../language/types.ts';
@@ -23,10 +24,10 @@ export type ValueData =
   | { readonly [key: string]: ValueData };
 
 /** A learned table as the program text that writes it. */
-function tableText(value: CellRule | ObjectRule): string {
-  return value instanceof CellRule
-    ? printLiteral({ type: 'CellRule', features: value.features, entries: value.entries })
-    : printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, entries: value.entries });
+function tableText(value: CellRule | ObjectRule | GridRule): string {
+  if (value instanceof CellRule) return printLiteral({ type: 'CellRule', features: value.features, entries: value.entries });
+  if (value instanceof GridRule) return printLiteral({ type: 'GridRule', property: value.property, entries: value.entries });
+  return printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, entries: value.entries });
 }
 
 function rowsWithEmpty(grid: Grid): (number | null)[][] {
@@ -39,7 +40,7 @@ export function valueToData(value: unknown): ValueData {
   if (value instanceof GridObject) return { top: value.top, left: value.left, size: value.size, colour: value.mainColour, shape: rowsWithEmpty(value.shape) };
   if (value instanceof Point) return { row: value.row, column: value.column };
   if (value instanceof Palette) return value.pairs().map(([from, to]) => [from, to]);
-  if (value instanceof CellRule || value instanceof ObjectRule) return tableText(value);
+  if (value instanceof CellRule || value instanceof ObjectRule || value instanceof GridRule) return tableText(value);
   if (Array.isArray(value)) return value.map(valueToData);
   if (typeof value === 'number' || typeof value === 'boolean') return value;
   if (typeof value === 'function') return 'function';
@@ -57,7 +58,7 @@ export function describeValue(type: Type, value: unknown, mode: ColourMode, opti
   if (value instanceof GridObject) return describeObject(value, mode, options);
   if (value instanceof Point) return [`(${value.row}, ${value.column})`];
   if (value instanceof Palette) return [`{${value.pairs().map(([a, b]) => `#${a} -> #${b}`).join(', ')}}`];
-  if (value instanceof CellRule || value instanceof ObjectRule) return [tableText(value)];
+  if (value instanceof CellRule || value instanceof ObjectRule || value instanceof GridRule) return [tableText(value)];
   if (Array.isArray(value)) {
     const out = [`${value.length} ${type === 'Objects' ? 'object' : 'grid'}${value.length === 1 ? '' : 's'}`];
     value.forEach((item, i) => {

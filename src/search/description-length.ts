@@ -33,6 +33,7 @@ export function fallbackBits(l: LiteralValue): number {
     case 'Palette':
     case 'CellRule':
     case 'ObjectRule':
+    case 'GridRule':
       return tableBits(l)!;
   }
 }

@@ -12,6 +12,8 @@
  * border, the first colour other than the background met looking up, down, left or right; and the
  * colour plus all 4 or all 8 neighbours.
  *
+ * Grid rules (any sizes): a property of the whole input picks the output (learnGridRules below).
+ *
  * Object rules: every demonstration pair must keep its shape. For each way of cutting into
  * objects and each property, each object of a demonstration input is matched to what the output
  * shows at its place (kept, removed, recoloured) or elsewhere (moved); objects with equal values
@@ -45,10 +47,11 @@ import {
   type ObjectOutcome,
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
+import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { distinctAttempts } from './distinct-attempts.ts';
-import { cellRuleBitsAtLeast, tableBits } from './table-bits.ts';
+import { cellRuleBitsAtLeast, tableBits, writtenOutBits } from './table-bits.ts';
 
 export interface LearnedTable {
   readonly literal: LiteralValue;
@@ -359,10 +362,52 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity):
   return cheapestDistinct(found, limit, puzzle);
 }
 
+/**
+ * The grid rules the demonstrations show (at most `limit`, of at most `maxBits` each), cheapest
+ * first. For each property of the whole input, demonstrations whose inputs share a value must
+ * share their output, and every test input's value must have an entry. Two further conditions
+ * keep a rule from merely listing the demonstrations: at least two demonstrations share a value
+ * (so the table has fewer entries than there are demonstrations), and the table costs fewer bits
+ * than the demonstration outputs written out cell by cell (table-bits.ts, `writtenOutBits`): a
+ * table that does not compress the outputs explains nothing.
+ */
+export function learnGridRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
+  const outputs = puzzle.train.map((p) => p.output);
+  if (outputs.length < 2) return [];
+  const writtenOut = writtenOutBits(outputs);
+  const found: LearnedTable[] = [];
+  for (const property of GRID_PROPERTIES) {
+    const table = new Map<string, GridRuleEntry>();
+    let agrees = true;
+    for (const { input, output } of puzzle.train) {
+      const key = gridKey(input, property);
+      if (key === undefined) {
+        agrees = false;
+        break;
+      }
+      const code = String(key);
+      const entry = table.get(code);
+      if (entry && !entry.grid.equals(output)) {
+        agrees = false;
+        break;
+      }
+      if (!entry) table.set(code, { key, grid: output });
+    }
+    if (!agrees || table.size >= outputs.length) continue;
+    if (!puzzle.testInputs.every((g) => table.has(String(gridKey(g, property))))) continue;
+    const entries = [...table.values()].sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1));
+    const literal: LiteralValue = { type: 'GridRule', property, entries };
+    const bits = tableBits(literal)!;
+    if (bits <= maxBits && bits < writtenOut) found.push({ literal, bits });
+  }
+  return cheapestDistinct(found, limit, puzzle);
+}
+
 /** What a table does to a grid (null where it lacks a key). */
 export function applyTable(literal: LiteralValue, g: Grid): Grid | null {
   if (literal.type === 'CellRule') return applyCellRule(g, new CellRule(literal.features, literal.entries));
   if (literal.type === 'ObjectRule') return applyObjectRule(g, new ObjectRule(literal.grouping, literal.property, literal.entries));
+  if (literal.type === 'GridRule') return applyGridRule(g, new GridRule(literal.property, literal.entries));
   return null;
 }
 
@@ -379,7 +424,7 @@ function cheapestDistinct(found: LearnedTable[], limit: number, puzzle: Puzzle):
   return distinctAttempts(ordered, (t) => puzzle.testInputs.map((g) => applyTable(t.literal, g)), limit);
 }
 
-/** Every learned table the search is offered: cell rules, then object rules. */
+/** Every learned table the search is offered: cell rules, then object rules, then grid rules. */
 export function learnedTables(puzzle: Puzzle): LearnedTable[] {
-  return [...learnCellRules(puzzle), ...learnObjectRules(puzzle)];
+  return [...learnCellRules(puzzle), ...learnObjectRules(puzzle), ...learnGridRules(puzzle)];
 }

@@ -9,13 +9,19 @@
  *   cell rule    γ(f + 1) + 1 (colour or background first) + Σ extra features (5 + 4 when it names a colour)
  *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c))
  *   object rule  2 + 4 + Σ entries (key value + outcome)
+ *   grid rule    3 + 1 + (γ(h) + γ(w) once, when every grid of the table is h × w)
+ *                + Σ entries (key value + (γ(h) + γ(w) of its grid, when sizes differ) + h·w·c)
  *
  * where c = max(1, ⌈log₂ k⌉) for the k distinct colours the table writes in its entries, f is
  * the number of features after the cell's own colour, and γ(n) = 2⌊log₂ n⌋ + 1 is the length of
- * the Elias gamma code of a whole number n ≥ 1.
+ * the Elias gamma code of a whole number n ≥ 1. A grid rule's key costs γ(n + 1) for a number n,
+ * 1 for yes/no, γ(h) + γ(w) + h·w for a shape of h × w, and γ(m) + m·c' for a set of m colours,
+ * c' naming one of the colours its keys hold.
  */
 import { featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
+import type { Grid } from '../grid/grid.ts';
 import type { LiteralValue } from '../language/ast.ts';
 
 /** Length of the Elias gamma code of n ≥ 1. */
@@ -41,6 +47,9 @@ export const FEATURE_COLOUR_BITS = 4;
 /** Bits for an object rule's way of cutting into objects (4) and its property (16). */
 export const GROUPING_BITS = 2;
 export const PROPERTY_BITS = 4;
+/** Bits for a grid rule's property (8), and for saying whether all its grids share one size. */
+export const GRID_PROPERTY_BITS = 3;
+export const SHARED_SIZE_BITS = 1;
 /** Bits for the kind of an object's outcome (keep, remove, recolour, move). */
 export const OUTCOME_KIND_BITS = 2;
 
@@ -68,10 +77,26 @@ function objectKeyBits(property: ObjectProperty, key: ObjectKey, c: number): num
       return c;
     case 'yes or no':
       return 1;
-    case 'shape': {
-      const rows = String(key).split('/');
-      return gammaBits(rows.length) + gammaBits(rows[0]!.length) + rows.length * rows[0]!.length;
-    }
+    case 'shape':
+      return shapeBits(String(key));
+  }
+}
+
+function shapeBits(shape: string): number {
+  const rows = shape.split('/');
+  return gammaBits(rows.length) + gammaBits(rows[0]!.length) + rows.length * rows[0]!.length;
+}
+
+function gridKeyBits(property: GridProperty, key: GridKey, keyColourBits: number): number {
+  switch (gridPropertyValues(property)) {
+    case 'number':
+      return gammaBits((key as number) + 1);
+    case 'yes or no':
+      return 1;
+    case 'colours':
+      return gammaBits(String(key).length) + String(key).length * keyColourBits;
+    case 'shape':
+      return shapeBits(key as string);
   }
 }
 
@@ -103,6 +128,20 @@ export function cellRuleBitsAtLeast(features: readonly CellFeature[], entries: n
 function cellRuleFeatureBits(features: readonly CellFeature[]): number {
   let bits = gammaBits(features.length) + FIRST_FEATURE_BITS;
   for (let i = 1; i < features.length; i++) bits += FEATURE_CHOICE_BITS + (features[i]!.colour !== undefined ? FEATURE_COLOUR_BITS : 0);
+  return bits;
+}
+
+/**
+ * The bits of grids written out cell by cell: for each, γ(h) + γ(w) + h·w·c, c naming one of
+ * the colours the grids hold between them. A table that costs this much or more explains
+ * nothing about the demonstration outputs it reproduces: it does not compress them.
+ */
+export function writtenOutBits(grids: readonly Grid[]): number {
+  const colours = new Set<number>();
+  for (const g of grids) for (const v of g.cells) colours.add(v);
+  const c = colourBits(colours.size);
+  let bits = 0;
+  for (const g of grids) bits += gammaBits(g.height) + gammaBits(g.width) + g.height * g.width * c;
   return bits;
 }
 
@@ -143,6 +182,24 @@ export function tableBits(l: LiteralValue): number | undefined {
       const c = colourBits(colours.size);
       let bits = GROUPING_BITS + PROPERTY_BITS;
       for (const e of l.entries) bits += objectKeyBits(l.property, e.key, c) + outcomeBits(e.outcome, c);
+      return bits;
+    }
+    case 'GridRule': {
+      const colours = new Set<number>();
+      const keyColours = new Set<string>();
+      for (const e of l.entries) {
+        for (const v of e.grid.cells) colours.add(v);
+        if (gridPropertyValues(l.property) === 'colours') for (const d of String(e.key)) keyColours.add(d);
+      }
+      const c = colourBits(colours.size);
+      const keyColourBits = colourBits(keyColours.size);
+      const first = l.entries[0]?.grid;
+      const shared = first !== undefined && l.entries.every((e) => e.grid.height === first.height && e.grid.width === first.width);
+      const sizeBits = (h: number, w: number): number => gammaBits(h) + gammaBits(w);
+      let bits = GRID_PROPERTY_BITS + SHARED_SIZE_BITS + (shared ? sizeBits(first.height, first.width) : 0);
+      for (const e of l.entries) {
+        bits += gridKeyBits(l.property, e.key, keyColourBits) + (shared ? 0 : sizeBits(e.grid.height, e.grid.width)) + e.grid.height * e.grid.width * c;
+      }
       return bits;
     }
     default:

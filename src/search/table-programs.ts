@@ -13,6 +13,7 @@ import { literalValue } from '../language/interpreter.ts';
 import { applyOperation } from '../language/operation.ts';
 import type { Library } from '../library/library.ts';
 import type { Constant } from './constants.ts';
+import { writtenOutBits } from './table-bits.ts';
 
 export interface TableProgram {
   readonly program: Program;
@@ -21,13 +22,15 @@ export interface TableProgram {
   readonly values: readonly Grid[];
 }
 
-const TABLE_TYPES = new Set(['Palette', 'CellRule', 'ObjectRule']);
+const TABLE_TYPES = new Set(['Palette', 'CellRule', 'ObjectRule', 'GridRule']);
 
 /**
  * For every table constant and every primitive `(Grid, table) -> Grid`, the program applying the
  * table to the input, when it reproduces every demonstration, runs on every test input and costs
- * at most `maxBits` (primitive bits + 1 for the input + the table's bits). In the fixed order of
- * the constants and the library.
+ * (primitive bits + 1 for the input + the table's bits) at most `maxBits` or less than the
+ * demonstration outputs written out cell by cell. The second bound lets a long table in when it
+ * still compresses the outputs: `maxBits` bounds how far the enumeration searches, and a table
+ * costs bits but no search. In the fixed order of the constants and the library.
  */
 export function tablePrograms(
   constants: readonly Constant[],
@@ -38,6 +41,7 @@ export function tablePrograms(
   maxBits: number,
 ): TableProgram[] {
   const found: TableProgram[] = [];
+  const bound = Math.max(maxBits, writtenOutBits(outputs) - 1);
   for (const constant of constants) {
     const type = constant.literal.type;
     if (!TABLE_TYPES.has(type)) continue;
@@ -45,7 +49,7 @@ export function tablePrograms(
     for (const p of library.primitives) {
       if (p.result !== 'Grid' || p.parameters.length !== 2 || p.parameters[0] !== 'Grid' || p.parameters[1] !== type) continue;
       const bits = p.bits + 1 + constant.bits;
-      if (bits > maxBits) continue;
+      if (bits > bound) continue;
       const values: Grid[] = [];
       for (const input of inputs) {
         const v = applyOperation(p, [input, table]);

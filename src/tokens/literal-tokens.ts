@@ -17,6 +17,9 @@
  *   number, a colour, `yes`/`no`, or `<shape>` rows of `filled`/`empty` ended by `<row>`, then
  *   `</shape>`) and its outcome (`keep`, `remove`, a colour, or `move` and two numbers), then
  *   `</object_rule>`.
+ * - GridRule: `<grid_rule>`, `grid_property:NAME`, each entry as its key (a number, `yes`/`no`,
+ *   a shape as above, or `<colours>` colour tokens `</colours>`) and its grid (grid-tokens.ts),
+ *   then `</grid_rule>`.
  */
 import {
   CELL_FEATURE_NAMES,
@@ -30,7 +33,9 @@ import {
   type CellRuleEntry,
 } from '../grid/cell-rule-table.ts';
 import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
+import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
+import { readGrid, tokenizeGrid } from './grid-tokens.ts';
 import { TokenError, type TokenReader } from './token-reader.ts';
 
 export interface VocabularyEntry {
@@ -144,8 +149,27 @@ function objectKeyTokens(property: ObjectProperty, key: ObjectKey): string[] {
     case 'yes or no':
       return [key ? 'yes' : 'no'];
     case 'shape':
-      return ['<shape>', ...(key as string).split('/').flatMap((row) => [...[...row].map((c) => (c === 'x' ? 'filled' : 'empty')), '<row>']), '</shape>'];
+      return shapeTokens(key as string);
   }
+}
+
+function shapeTokens(shape: string): string[] {
+  return ['<shape>', ...shape.split('/').flatMap((row) => [...[...row].map((c) => (c === 'x' ? 'filled' : 'empty')), '<row>']), '</shape>'];
+}
+
+function readShape(reader: TokenReader): string {
+  reader.expect('<shape>');
+  const rows: string[] = [];
+  let row = '';
+  while (reader.peek() !== '</shape>') {
+    const t = word(reader, ['filled', 'empty', '<row>'], "'filled', 'empty', '<row>' or '</shape>'");
+    if (t === '<row>') {
+      rows.push(row);
+      row = '';
+    } else row += t === 'filled' ? 'x' : '.';
+  }
+  reader.expect('</shape>');
+  return rows.join('/');
 }
 
 function readObjectKey(reader: TokenReader, property: ObjectProperty): ObjectKey {
@@ -156,20 +180,39 @@ function readObjectKey(reader: TokenReader, property: ObjectProperty): ObjectKey
       return readColour(reader);
     case 'yes or no':
       return word(reader, ['yes', 'no'], "'yes' or 'no'") === 'yes' ? 1 : 0;
-    case 'shape': {
-      reader.expect('<shape>');
-      const rows: string[] = [];
-      let row = '';
-      while (reader.peek() !== '</shape>') {
-        const t = word(reader, ['filled', 'empty', '<row>'], "'filled', 'empty', '<row>' or '</shape>'");
-        if (t === '<row>') {
-          rows.push(row);
-          row = '';
-        } else row += t === 'filled' ? 'x' : '.';
-      }
-      reader.expect('</shape>');
-      return rows.join('/');
+    case 'shape':
+      return readShape(reader);
+  }
+}
+
+function gridKeyTokens(property: GridProperty, key: GridKey): string[] {
+  switch (gridPropertyValues(property)) {
+    case 'number':
+      return [intToken(key as number)];
+    case 'yes or no':
+      return [key ? 'yes' : 'no'];
+    case 'colours':
+      return ['<colours>', ...[...String(key)].map((d) => colourToken(Number(d))), '</colours>'];
+    case 'shape':
+      return shapeTokens(key as string);
+  }
+}
+
+function readGridKey(reader: TokenReader, property: GridProperty): GridKey {
+  switch (gridPropertyValues(property)) {
+    case 'number':
+      return readInt(reader);
+    case 'yes or no':
+      return word(reader, ['yes', 'no'], "'yes' or 'no'") === 'yes' ? 1 : 0;
+    case 'colours': {
+      reader.expect('<colours>');
+      let set = '';
+      while (reader.peek() !== '</colours>') set += String(readColour(reader));
+      reader.expect('</colours>');
+      return set;
     }
+    case 'shape':
+      return readShape(reader);
   }
 }
 
@@ -323,6 +366,29 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       }
       r.expect('</object_rule>');
       return { type: 'ObjectRule', grouping, property, entries };
+    },
+  },
+  GridRule: {
+    entries: [
+      { token: '<grid_rule>', meaning: 'a grid rule: the property of the whole input, then each key with its output grid' },
+      { token: '</grid_rule>', meaning: 'ends a grid rule' },
+      ...GRID_PROPERTIES.map((name) => ({ token: `grid_property:${name}`, meaning: `the grid property ${name}` })),
+      { token: '<colours>', meaning: 'a key of colours present: colour tokens in rising order follow' },
+      { token: '</colours>', meaning: 'ends a key of colours present' },
+    ],
+    starts: (t) => t === '<grid_rule>',
+    encode: (l) => ['<grid_rule>', `grid_property:${l.property}`, ...l.entries.flatMap((e) => [...gridKeyTokens(l.property, e.key), ...tokenizeGrid(e.grid)]), '</grid_rule>'],
+    decode: (r) => {
+      r.expect('<grid_rule>');
+      const property = prefixed(r, 'grid_property:', GRID_PROPERTIES, 'a grid property token');
+      const entries: GridRuleEntry[] = [];
+      while (r.peek() !== '</grid_rule>') {
+        if (r.atEnd()) r.fail("an entry or '</grid_rule>'");
+        const key = readGridKey(r, property);
+        entries.push({ key, grid: readGrid(r) });
+      }
+      r.expect('</grid_rule>');
+      return { type: 'GridRule', property, entries };
     },
   },
 };

@@ -8,7 +8,7 @@
  * - Colour, Int: a number; Bool: true or false.
  * - Point: `{row, column}`.
  * - Palette: the colours it changes, as `[from, to]` pairs in colour order.
- * - CellRule, ObjectRule (learned tables): the table as program text.
+ * - CellRule, ObjectRule, GridRule (learned tables): the table as program text.
  *
  * The failure value has no encoding here: a trace writes `null` with a reason instead.
  */
@@ -17,6 +17,7 @@ import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { printExpression } from '../language/printer.ts';
 import type { CellRule } from '../grid/cell-rule-table.ts';
+import type { GridRule } from '../grid/grid-rule-table.ts';
 import type { ObjectRule } from '../grid/object-rule-table.ts';
 import { Point } from '../language/point.ts';
 import type { BaseType } from '../language/types.ts';
@@ -73,6 +74,10 @@ export function valueJson(type: BaseType, value: unknown): ValueJson {
     case 'ObjectRule': {
       const rule = value as ObjectRule;
       return printExpression({ kind: 'literal', literal: { type: 'ObjectRule', grouping: rule.grouping, property: rule.property, entries: rule.entries } });
+    }
+    case 'GridRule': {
+      const rule = value as GridRule;
+      return printExpression({ kind: 'literal', literal: { type: 'GridRule', property: rule.property, entries: rule.entries } });
     }
   }
 }

@@ -15,7 +15,7 @@ import type { Expression, LiteralValue, Program, Step } from '../../src/language
 import { isBaseType, splitFunctionType, type BaseType, type Type } from '../../src/language/types.ts';
 import type { Library } from '../../src/library/library.ts';
 import type { Primitive } from '../../src/library/primitive.ts';
-import { randomCellRule, randomObjectRule } from './random-table.ts';
+import { randomCellRule, randomGridRule, randomObjectRule } from './random-table.ts';
 
 /** Returns a whole number from 0 to count - 1. */
 export type Chooser = (count: number) => number;
@@ -31,7 +31,7 @@ export interface RandomProgramOptions {
   readonly answerType?: BaseType;
 }
 
-const LITERAL_TYPES: ReadonlySet<Type> = new Set<Type>(['Colour', 'Int', 'Bool', 'Point', 'Palette', 'CellRule', 'ObjectRule']);
+const LITERAL_TYPES: ReadonlySet<Type> = new Set<Type>(['Colour', 'Int', 'Bool', 'Point', 'Palette', 'CellRule', 'ObjectRule', 'GridRule']);
 const NAME_WORDS = ['boats', 'crane', 'tide', 'quay', 'hull', 'mast', 'cargo', 'buoy', 'pier', 'net', 'sail', 'dock'];
 const INPUT_NAMES = ['grid', 'harbour', 'deck', 'chart', 'berth'];
 /** Characters for comments (any text without a line break; spaces and tabs anywhere). */
@@ -110,6 +110,8 @@ class ProgramBuilder {
         return randomCellRule(this.choose);
       case 'ObjectRule':
         return randomObjectRule(this.choose);
+      case 'GridRule':
+        return randomGridRule(this.choose);
       default: {
         const pairs: [number, number][] = [];
         const count = this.choose(4);

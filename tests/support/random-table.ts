@@ -1,5 +1,5 @@
 /**
- * Random learned tables (cell rules and object rules) as literals, for property tests: the text
+ * Random learned tables (cell rules, object rules and grid rules) as literals, for property tests: the text
  * round trip, type soundness, and anything that needs tables to feed the interpreter. Driven by
  * any source of choices (`choose(n)` returns a whole number from 0 to n - 1), or as fast-check
  * arbitraries.
@@ -24,6 +24,8 @@ import {
   type ObjectOutcome,
   type ObjectRuleEntry,
 } from '../../src/grid/object-rule-table.ts';
+import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridRuleEntry } from '../../src/grid/grid-rule-table.ts';
+import { Grid } from '../../src/grid/grid.ts';
 import type { LiteralValue } from '../../src/language/ast.ts';
 
 export type Chooser = (count: number) => number;
@@ -49,6 +51,16 @@ export function randomCellRule(choose: Chooser): LiteralValue {
   return { type: 'CellRule', features, entries };
 }
 
+function randomShape(choose: Chooser): string {
+  const height = 1 + choose(3);
+  const width = 1 + choose(3);
+  const cells = Array.from({ length: height * width }, () => (choose(2) ? 'x' : '.'));
+  cells[choose(cells.length)] = 'x';
+  const rows: string[] = [];
+  for (let r = 0; r < height; r++) rows.push(cells.slice(r * width, (r + 1) * width).join(''));
+  return rows.join('/');
+}
+
 function randomObjectKey(choose: Chooser, values: ReturnType<typeof propertyValues>): ObjectKey {
   switch (values) {
     case 'number':
@@ -57,16 +69,47 @@ function randomObjectKey(choose: Chooser, values: ReturnType<typeof propertyValu
       return choose(10);
     case 'yes or no':
       return choose(2);
-    case 'shape': {
-      const height = 1 + choose(3);
-      const width = 1 + choose(3);
-      const cells = Array.from({ length: height * width }, () => (choose(2) ? 'x' : '.'));
-      cells[choose(cells.length)] = 'x';
-      const rows: string[] = [];
-      for (let r = 0; r < height; r++) rows.push(cells.slice(r * width, (r + 1) * width).join(''));
-      return rows.join('/');
-    }
+    case 'shape':
+      return randomShape(choose);
   }
+}
+
+function randomGridKey(choose: Chooser, values: ReturnType<typeof gridPropertyValues>): GridKey {
+  switch (values) {
+    case 'number':
+      return choose(31);
+    case 'yes or no':
+      return choose(2);
+    case 'colours': {
+      let set = '';
+      for (let c = 0; c < 10; c++) if (choose(3) === 0) set += String(c);
+      return set === '' ? String(choose(10)) : set;
+    }
+    case 'shape':
+      return randomShape(choose);
+  }
+}
+
+/** A small grid of random colours (at most 4 × 4). */
+export function randomSmallGrid(choose: Chooser): Grid {
+  const height = 1 + choose(4);
+  const width = 1 + choose(4);
+  return Grid.fromRows(Array.from({ length: height }, () => Array.from({ length: width }, () => choose(10))));
+}
+
+export function randomGridRule(choose: Chooser): LiteralValue {
+  const property = GRID_PROPERTIES[choose(GRID_PROPERTIES.length)]!;
+  const values = gridPropertyValues(property);
+  const entries: GridRuleEntry[] = [];
+  const seen = new Set<string>();
+  const count = choose(5);
+  for (let i = 0; i < count; i++) {
+    const key = randomGridKey(choose, values);
+    if (seen.has(String(key))) continue;
+    seen.add(String(key));
+    entries.push({ key, grid: randomSmallGrid(choose) });
+  }
+  return { type: 'GridRule', property, entries };
 }
 
 function randomOutcome(choose: Chooser): ObjectOutcome {
@@ -102,3 +145,4 @@ const chooserArbitrary: fc.Arbitrary<Chooser> = fc.gen().map((g) => (count: numb
 
 export const cellRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomCellRule);
 export const objectRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomObjectRule);
+export const gridRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomGridRule);

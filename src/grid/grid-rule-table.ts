@@ -1,0 +1,178 @@
+/**
+ * Grid rules: a table that picks the whole output grid from one property of the whole input:
+ * how many colours it holds or which, how many cells are not background, how many objects it
+ * has, the shape its non-background cells make, whether it is symmetric. A rule says "inputs
+ * alike in this respect have the same output"; it is read off demonstrations whose outputs
+ * repeat (src/search/learned-tables.ts).
+ *
+ * Applying a rule looks the input's value up and gives the grid the table holds for it, or fails
+ * (null) when the table has no entry for that value: a rule never guesses.
+ */
+import { backgroundColour, colourCounts, components } from './components.ts';
+import type { Grid } from './grid.ts';
+import { isSymmetricLeftRight, isSymmetricTopBottom } from './symmetry.ts';
+
+export const GRID_PROPERTIES = [
+  'colour_count',
+  'colour_set',
+  'cells',
+  'objects',
+  'objects_diagonal',
+  'shape',
+  'symmetric_left_right',
+  'symmetric_top_bottom',
+] as const;
+export type GridProperty = (typeof GRID_PROPERTIES)[number];
+
+/**
+ * A property's value: a whole number (`colour_count`: colours present, the background
+ * included; `cells`: cells not of the background colour; `objects` / `objects_diagonal`:
+ * one-colour objects other than the background, joined through edges / also corners), 1/0 for
+ * yes/no (`symmetric_left_right`, `symmetric_top_bottom`: the grid equals its mirror image), the
+ * colours present as their digits in rising order (`colour_set`, "02" for colours 0 and 2), or
+ * for `shape` the box of the cells not of the background colour, rows joined by `/`, `x` for
+ * such a cell and `.` for the rest. A grid of one colour has no shape: a rule by shape fails on it.
+ */
+export type GridKey = number | string;
+
+/** What kind of key a property has. */
+export function gridPropertyValues(property: GridProperty): 'number' | 'colours' | 'yes or no' | 'shape' {
+  switch (property) {
+    case 'colour_set':
+      return 'colours';
+    case 'shape':
+      return 'shape';
+    case 'symmetric_left_right':
+    case 'symmetric_top_bottom':
+      return 'yes or no';
+    default:
+      return 'number';
+  }
+}
+
+export interface GridRuleEntry {
+  readonly key: GridKey;
+  readonly grid: Grid;
+}
+
+/** The value of a property for a grid, or undefined when the grid has none (`shape` of a one-colour grid). */
+export function gridKey(g: Grid, property: GridProperty): GridKey | undefined {
+  switch (property) {
+    case 'colour_count':
+    case 'colour_set': {
+      const counts = colourCounts(g);
+      let n = 0;
+      let set = '';
+      for (let c = 0; c < 10; c++) {
+        if (counts[c]! === 0) continue;
+        n++;
+        set += String(c);
+      }
+      return property === 'colour_count' ? n : set;
+    }
+    case 'cells':
+      return g.cells.length - colourCounts(g)[backgroundColour(g)]!;
+    case 'objects':
+    case 'objects_diagonal':
+      return components(g, { diagonal: property === 'objects_diagonal', multicolour: false, background: backgroundColour(g) }).length;
+    case 'shape':
+      return backgroundShape(g);
+    case 'symmetric_left_right':
+      return isSymmetricLeftRight(g) ? 1 : 0;
+    case 'symmetric_top_bottom':
+      return isSymmetricTopBottom(g) ? 1 : 0;
+  }
+}
+
+function backgroundShape(g: Grid): string | undefined {
+  const background = backgroundColour(g);
+  const { height, width, cells } = g;
+  let top = height;
+  let bottom = -1;
+  let left = width;
+  let right = -1;
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      if (cells[r * width + c] === background) continue;
+      if (r < top) top = r;
+      if (r > bottom) bottom = r;
+      if (c < left) left = c;
+      if (c > right) right = c;
+    }
+  }
+  if (bottom < 0) return undefined;
+  let text = '';
+  for (let r = top; r <= bottom; r++) {
+    if (r > top) text += '/';
+    for (let c = left; c <= right; c++) text += cells[r * width + c] === background ? '.' : 'x';
+  }
+  return text;
+}
+
+function keyCode(key: GridKey): string {
+  return typeof key === 'number' ? `n${key}` : `s${key}`;
+}
+
+/** A property of the whole grid and a table from its values to output grids. */
+export class GridRule {
+  readonly property: GridProperty;
+  readonly entries: readonly GridRuleEntry[];
+  readonly hash: number;
+  private readonly table = new Map<string, Grid>();
+
+  /** The first entry for a key counts (the parser rejects repeated keys). */
+  constructor(property: GridProperty, entries: readonly GridRuleEntry[]) {
+    this.property = property;
+    this.entries = entries;
+    for (const e of entries) {
+      const code = keyCode(e.key);
+      if (!this.table.has(code)) this.table.set(code, e.grid);
+    }
+    let sum = 0;
+    for (const [key, grid] of this.table) sum = (sum + Math.imul(stringHash(key), 0x9e3779b1) + grid.hash) | 0;
+    const h = Math.imul(0x2545f491 ^ GRID_PROPERTIES.indexOf(property), 0x01000193);
+    this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
+  }
+
+  gridFor(key: GridKey): Grid | undefined {
+    return this.table.get(keyCode(key));
+  }
+
+  get size(): number {
+    return this.table.size;
+  }
+
+  equals(other: GridRule): boolean {
+    if (this === other) return true;
+    if (this.hash !== other.hash || this.property !== other.property || this.table.size !== other.table.size) return false;
+    for (const [key, grid] of this.table) {
+      const theirs = other.table.get(key);
+      if (!theirs || !theirs.equals(grid)) return false;
+    }
+    return true;
+  }
+}
+
+function stringHash(text: string): number {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
+  return h;
+}
+
+/** The grid the rule holds for the input's value; null when the table has none. */
+export function applyGridRule(g: Grid, rule: GridRule): Grid | null {
+  const key = gridKey(g, rule.property);
+  if (key === undefined) return null;
+  return rule.gridFor(key) ?? null;
+}
+
+/** Rows of digits joined by `/`, such as `505/050`: how a grid rule writes its grids. */
+export function gridDigits(g: Grid): string {
+  let text = '';
+  for (let r = 0; r < g.height; r++) {
+    if (r > 0) text += '/';
+    for (let c = 0; c < g.width; c++) text += String(g.cells[r * g.width + c]);
+  }
+  return text;
+}
+
