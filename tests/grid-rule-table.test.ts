@@ -21,6 +21,7 @@ import { taskConstants } from '../src/search/constants.ts';
 import { applyTable, learnGridRules } from '../src/search/learned-tables.ts';
 import { solvePuzzle } from '../src/search/solve.ts';
 import { tableBits, writtenOutBits } from '../src/search/table-bits.ts';
+import { tablePrograms } from '../src/search/table-programs.ts';
 import type { Puzzle } from '../src/tasks/task.ts';
 import { gridRuleArbitrary, randomSmallGrid, type Chooser } from './support/random-table.ts';
 
@@ -47,6 +48,23 @@ const signals: Puzzle = {
  * for the three outputs written out.
  */
 const signalRule = 'grid_rule[cells]{1 -> 24/44, 2 -> 22/44}';
+
+/**
+ * One-cell flags by the boat's length. Invented. The cheapest rule that fits, by cells, costs
+ * 3 + 1 + γ(1) + γ(1) + (γ(2) + 1) + (γ(3) + 1) = 14 bits, the four outputs written out
+ * 4 × (1 + 1 + 1) = 12; by shape it costs more, and no other property fits.
+ */
+const tiny: Puzzle = {
+  name: 'harbour-tiny',
+  train: [
+    { input: G([[4, 1], [4, 4]]), output: G([[2]]) },
+    { input: G([[1, 1], [4, 4]]), output: G([[3]]) },
+    { input: G([[4, 4], [1, 4]]), output: G([[2]]) },
+    { input: G([[1, 4], [1, 4]]), output: G([[3]]) },
+  ],
+  testInputs: [G([[4, 4], [4, 1]])],
+};
+const tinyRule = 'grid_rule[cells]{1 -> 2, 2 -> 3}';
 
 function literalOf(text: string): LiteralValue {
   const e = parseExpression(text);
@@ -89,20 +107,8 @@ describe('a grid rule read off the demonstrations', () => {
   });
 
   it('is not offered when it costs as much as the outputs written out', () => {
-    // One-cell outputs by the boat's length. The cheapest rule that fits, by cells, costs
-    // 3 + 1 + γ(1) + γ(1) + (γ(2) + 1) + (γ(3) + 1) = 14 bits, the four outputs written out
-    // 4 × (1 + 1 + 1) = 12; by shape it costs more, and no other property fits.
-    const tiny: Puzzle = {
-      name: 'harbour-tiny',
-      train: [
-        { input: G([[4, 1], [4, 4]]), output: G([[2]]) },
-        { input: G([[1, 1], [4, 4]]), output: G([[3]]) },
-        { input: G([[4, 4], [1, 4]]), output: G([[2]]) },
-        { input: G([[1, 4], [1, 4]]), output: G([[3]]) },
-      ],
-      testInputs: [G([[4, 4], [4, 1]])],
-    };
     expect(writtenOutBits(tiny.train.map((p) => p.output))).toBe(12);
+    expect(tableBits(literalOf(tinyRule))).toBe(14);
     expect(learnGridRules(tiny)).toEqual([]);
   });
 });
@@ -218,7 +224,17 @@ describe('the solver with grid rules', () => {
     expect(withRule.testOutputs[0]!.equals(twoBoats)).toBe(true);
   });
 
-  it('takes the rule above a bit limit it passes, because it compresses the outputs', () => {
+  it('takes a table program above the bit limit only when it costs fewer bits than the outputs written out', () => {
+    // The tiny rule fits the demonstrations but does not compress them: apply_grid_rule 4 + the
+    // input 1 + the table 14 = 19 bits, against 12 for the outputs. It is a program only within the limit.
+    const inputs = [...tiny.train.map((p) => p.input), ...tiny.testInputs];
+    const outputs = tiny.train.map((p) => p.output);
+    const constants = [{ literal: literalOf(tinyRule), bits: 14 }];
+    expect(tablePrograms(constants, defaultLibrary, inputs, outputs, 'input', 18)).toEqual([]);
+    expect(tablePrograms(constants, defaultLibrary, inputs, outputs, 'input', 19).map((t) => t.bits)).toEqual([19]);
+  });
+
+  it('takes the flag rule above a bit limit it passes, because it compresses the outputs', () => {
     const result = solvePuzzle(signals, { maxCandidates: 30_000, timeLimitSeconds: 600, maxBits: 20 });
     expect(result.solutions.some((s) => s.text.includes(signalRule) && s.bits === 29)).toBe(true);
     expect(result.solutions.filter((s) => !s.text.includes('_rule[')).every((s) => s.bits <= 20)).toBe(true);

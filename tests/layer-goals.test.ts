@@ -78,7 +78,10 @@ function solveRings(name: string, rings: readonly [number, number][]) {
   const rule = (rows: number[][]) => rings.reduce((out, [centre, colour]) => layRows(out, ring(rows, centre, colour)), rows);
   const task = { name, train: ringInputs.map((rows) => ({ input: Grid.fromRows(rows), output: Grid.fromRows(rule(rows)) })), testInputs: [Grid.fromRows(ringTestInput)] };
   const options = { attempts: 1, maxCandidates: 60_000, timeLimitSeconds: 600, intermediateGrids: 0 };
-  return { rule, found: solvePuzzle(task, options), withoutGoals: solvePuzzle(task, { ...options, goalBits: 0 }) };
+  // Without goals, only what the search finds counts: a cell rule applied to the input (learned,
+  // not searched) also fits the demonstrations, at 61 bits for two rings.
+  const searched = solvePuzzle(task, { ...options, goalBits: 0 }).solutions.filter((s) => !s.text.includes('_rule['));
+  return { rule, found: solvePuzzle(task, options), withoutGoals: { solutions: searched } };
 }
 
 describe('layer goals', () => {
