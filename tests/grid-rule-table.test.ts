@@ -5,6 +5,7 @@
  * listing the demonstrations; the text round trip; laws of the properties (fast-check); and the
  * solver taking a table dearer than its bit limit because it compresses the outputs.
  */
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultLibrary } from '../dsl/index.ts';
@@ -15,7 +16,8 @@ import type { LiteralValue } from '../src/language/ast.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { runProgram } from '../src/language/interpreter.ts';
 import { parseExpression, parseProgram, ProgramSyntaxError } from '../src/language/parser.ts';
-import { printLiteral } from '../src/language/printer.ts';
+import { printLiteral, printProgram } from '../src/language/printer.ts';
+import { checkProgram } from '../src/language/checker.ts';
 import { programBits } from '../src/search/description-length.ts';
 import { taskConstants } from '../src/search/constants.ts';
 import { applyTable, learnGridRules } from '../src/search/learned-tables.ts';
@@ -238,5 +240,20 @@ describe('the solver with grid rules', () => {
     const result = solvePuzzle(signals, { maxCandidates: 30_000, timeLimitSeconds: 600, maxBits: 20 });
     expect(result.solutions.some((s) => s.text.includes(signalRule) && s.bits === 29)).toBe(true);
     expect(result.solutions.filter((s) => !s.text.includes('_rule[')).every((s) => s.bits <= 20)).toBe(true);
+  });
+});
+
+describe("the README's grid rule example", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const blocks = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)].map((m) => m[1]!).filter((b) => b.includes('apply_grid_rule(harbour,'));
+
+  it('is the flag program, reproduces the signal task, and states the bits the formula gives', () => {
+    expect(blocks.length).toBe(1);
+    const program = parseProgram(blocks[0]!, 'README.md');
+    checkProgram(program, defaultLibrary);
+    expect(printProgram(program)).toBe(blocks[0]);
+    expect(blocks[0]).toContain(signalRule);
+    for (const pair of signals.train) expect((runProgram(program, pair.input, defaultLibrary).output as Grid).equals(pair.output)).toBe(true);
+    expect(readme).toContain(`The flag rule above costs 3 + 1 + γ(2) + γ(2) + 2 × (3 + 4) = ${tableBits(literalOf(signalRule))} bits.`);
   });
 });

@@ -3,7 +3,7 @@
  * search. For every task of a directory (by default the public training set, ARC-AGI-1,
  * F. Chollet 2019, Apache-2.0, read from ../shared/datasets/arc-agi-1-training/), the programs
  * that apply a table straight to the input (src/search/table-programs.ts: the palette, the cell
- * rules, the object rules, exactly as the solver offers them) are ranked by bits; the task counts
+ * rules, the object rules, the grid rules, exactly as the solver offers them) are ranked by bits; the task counts
  * as solved when the two cheapest with distinct test outputs hold every test output. Test outputs
  * are read only for that scoring, after the tables were learned.
  *
@@ -36,6 +36,7 @@ function tableKind(t: TableProgram): string {
   const l = table.literal;
   if (l.type === 'CellRule') return `cell rule (${l.features[0]?.name ?? '?'} first)`;
   if (l.type === 'ObjectRule') return `object rule (${l.property})`;
+  if (l.type === 'GridRule') return `grid rule (${l.property})`;
   return l.type === 'Palette' ? 'palette' : 'other';
 }
 
