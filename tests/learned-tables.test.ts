@@ -12,7 +12,8 @@ import type { LiteralValue } from '../src/language/ast.ts';
 import { FAILURE } from '../src/language/failure.ts';
 import { checkProgram } from '../src/language/checker.ts';
 import { runProgram } from '../src/language/interpreter.ts';
-import { parseExpression, parseProgram, ProgramSyntaxError } from '../src/language/parser.ts';
+import { parseExpression, parseProgram } from '../src/language/parser.ts';
+import { syntaxProblem } from './support/syntax-problem.ts';
 import { printLiteral, printProgram } from '../src/language/printer.ts';
 import { taskConstants } from '../src/search/constants.ts';
 import { programBits } from '../src/search/description-length.ts';
@@ -191,15 +192,7 @@ describe('table text', () => {
 
   it('names the place and what was expected when a table is malformed', () => {
     // Columns count from 1: in 'cell_rule[colour]{#1 -> #2, #1 -> #3}' the second '#1' is the 29th character.
-    const problem = (text: string) => {
-      try {
-        parseExpression(text);
-      } catch (error) {
-        if (error instanceof ProgramSyntaxError) return `${error.column}: ${error.expected}`;
-        throw error;
-      }
-      return 'parsed';
-    };
+    const problem = syntaxProblem;
     expect(problem('cell_rule[colour]{#1 -> #2, #1 -> #3}')).toBe('29: a key not already in the table');
     expect(problem('cell_rule[above]{}')).toBe("11: 'colour' or 'background', the first feature of every cell rule");
     expect(problem('cell_rule[colour, around #1]{#0 9 -> #1}')).toBe('33: a count from 0 to 8');

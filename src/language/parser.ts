@@ -264,27 +264,40 @@ function parseObjectRule(r: LineReader): LiteralValue {
   r.expect(',', "',' after the way of cutting into objects");
   const property = oneOf(r, OBJECT_PROPERTIES, `an object property (${OBJECT_PROPERTIES.join(', ')})`);
   r.expect(']', "']' after the property");
+  const entries: ObjectRuleEntry[] = parseKeyedEntries(
+    r,
+    () => parseObjectKey(r, property),
+    (key) => ({ key, outcome: parseOutcome(r) }),
+  );
+  return { type: 'ObjectRule', grouping, property, entries };
+}
+
+/**
+ * `{key -> value, ...}`, the entries of an object or grid rule: each key read by `parseKey`,
+ * then `->`, then the entry built by `parseEntry`; a key already in the table is refused at its place.
+ */
+function parseKeyedEntries<K extends string | number, E>(r: LineReader, parseKey: () => K, parseEntry: (key: K) => E): E[] {
   r.expect('{', "'{' opening the table");
-  const entries: ObjectRuleEntry[] = [];
+  const entries: E[] = [];
   const seen = new Set<string>();
   if (r.peek() !== '}') {
     for (;;) {
       r.skipSpaces();
       const start = r.position;
-      const key = parseObjectKey(r, property);
+      const key = parseKey();
       if (seen.has(String(key))) {
         r.position = start;
         r.fail('a key not already in the table');
       }
       seen.add(String(key));
       r.expect('->', "'->' after the key");
-      entries.push({ key, outcome: parseOutcome(r) });
+      entries.push(parseEntry(key));
       if (r.peek() !== ',') break;
       r.expect(',');
     }
   }
   r.expect('}', "',' or '}' in the table");
-  return { type: 'ObjectRule', grouping, property, entries };
+  return entries;
 }
 
 function parseGridKey(r: LineReader, property: GridProperty): GridKey {
@@ -329,26 +342,11 @@ function parseGridRule(r: LineReader): LiteralValue {
   r.expect('[');
   const property = oneOf(r, GRID_PROPERTIES, `a grid property (${GRID_PROPERTIES.join(', ')})`);
   r.expect(']', "']' after the property");
-  r.expect('{', "'{' opening the table");
-  const entries: GridRuleEntry[] = [];
-  const seen = new Set<string>();
-  if (r.peek() !== '}') {
-    for (;;) {
-      r.skipSpaces();
-      const start = r.position;
-      const key = parseGridKey(r, property);
-      if (seen.has(String(key))) {
-        r.position = start;
-        r.fail('a key not already in the table');
-      }
-      seen.add(String(key));
-      r.expect('->', "'->' after the key");
-      entries.push({ key, grid: parseDigitGrid(r) });
-      if (r.peek() !== ',') break;
-      r.expect(',');
-    }
-  }
-  r.expect('}', "',' or '}' in the table");
+  const entries: GridRuleEntry[] = parseKeyedEntries(
+    r,
+    () => parseGridKey(r, property),
+    (key) => ({ key, grid: parseDigitGrid(r) }),
+  );
   return { type: 'GridRule', property, entries };
 }
 

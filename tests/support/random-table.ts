@@ -91,7 +91,7 @@ function randomGridKey(choose: Chooser, values: ReturnType<typeof gridPropertyVa
 }
 
 /** A small grid of random colours (at most 4 × 4). */
-export function randomSmallGrid(choose: Chooser): Grid {
+function randomSmallGrid(choose: Chooser): Grid {
   const height = 1 + choose(4);
   const width = 1 + choose(4);
   return Grid.fromRows(Array.from({ length: height }, () => Array.from({ length: width }, () => choose(10))));
