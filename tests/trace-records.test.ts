@@ -10,7 +10,7 @@ import { Ajv2020 } from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
 import { defaultLibrary } from '../dsl/index.ts';
 import { parseProgram } from '../src/language/parser.ts';
-import { readTaskFile } from '../src/tasks/read-task.ts';
+import { parseTask, readTaskFile } from '../src/tasks/read-task.ts';
 import { detokenize } from '../src/tokens/program-tokens.ts';
 import { canonicalProgram } from '../src/language/canonical-names.ts';
 import { traceRecord, type TraceRecord } from '../src/training/trace-record.ts';
@@ -126,6 +126,26 @@ describe('what a record holds', () => {
     const mast = boats.find((b) => b.colour === 3)!;
     expect(mast).toEqual({ top: 1, left: 1, height: 3, width: 2, colour: 3, cells: [[1, 1, 3], [2, 1, 3], [3, 1, 3], [3, 2, 3]] });
     expect(record.pairs[0]!.values[1]!.value).toEqual(record.pairs[0]!.expected);
+  });
+
+  it('writes a grid rule as plain data (its grids as rows) that the schema accepts and the tokens spell back', () => {
+    // An invented harbour flag task (tests/grid-rule-table.test.ts): one boat, a red corner; two, a red top row.
+    const flags = parseTask(
+      JSON.stringify({
+        train: [
+          { input: [[4, 4, 4], [4, 1, 4]], output: [[2, 4], [4, 4]] },
+          { input: [[1, 4, 1], [4, 4, 4]], output: [[2, 2], [4, 4]] },
+        ],
+        test: [{ input: [[4, 4, 4], [1, 4, 4]], output: [[2, 4], [4, 4]] }],
+      }),
+      'flags.json',
+    );
+    const rule = parseProgram('with harbour\nanswer apply_grid_rule(harbour, grid_rule[cells]{1 -> 24/44, 2 -> 22/44})\n');
+    const traced = traceRecord(flags, rule, defaultLibrary);
+    expect(problemsOf(JSON.parse(JSON.stringify(traced)))).toBe('');
+    expect(traced.pairs.every((p) => p.correct === true)).toBe(true);
+    expect(JSON.stringify(traced.ast)).toContain('"entries":[{"key":1,"rows":[[2,4],[4,4]]},{"key":2,"rows":[[2,2],[4,4]]}]');
+    expect(detokenize(traced.tokens!, defaultLibrary)).toEqual(canonicalProgram(rule, defaultLibrary));
   });
 
   it('writes a failed step as null with the reason, and the record is still valid', () => {

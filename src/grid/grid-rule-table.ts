@@ -9,7 +9,7 @@
  * (null) when the table has no entry for that value: a rule never guesses.
  */
 import { backgroundColour, colourCounts, components } from './components.ts';
-import type { Grid } from './grid.ts';
+import { Grid } from './grid.ts';
 import { isSymmetricLeftRight, isSymmetricTopBottom } from './symmetry.ts';
 
 export const GRID_PROPERTIES = [
@@ -50,9 +50,10 @@ export function gridPropertyValues(property: GridProperty): 'number' | 'colours'
   }
 }
 
+/** An entry: a value of the property and the output grid, as rows of colours (plain data, as program trees are). */
 export interface GridRuleEntry {
   readonly key: GridKey;
-  readonly grid: Grid;
+  readonly rows: readonly (readonly number[])[];
 }
 
 /** The value of a property for a grid, or undefined when the grid has none (`shape` of a one-colour grid). */
@@ -126,7 +127,7 @@ export class GridRule {
     this.entries = entries;
     for (const e of entries) {
       const code = keyCode(e.key);
-      if (!this.table.has(code)) this.table.set(code, e.grid);
+      if (!this.table.has(code)) this.table.set(code, Grid.fromRows(e.rows));
     }
     let sum = 0;
     for (const [key, grid] of this.table) sum = (sum + Math.imul(stringHash(key), 0x9e3779b1) + grid.hash) | 0;
@@ -167,12 +168,7 @@ export function applyGridRule(g: Grid, rule: GridRule): Grid | null {
 }
 
 /** Rows of digits joined by `/`, such as `505/050`: how a grid rule writes its grids. */
-export function gridDigits(g: Grid): string {
-  let text = '';
-  for (let r = 0; r < g.height; r++) {
-    if (r > 0) text += '/';
-    for (let c = 0; c < g.width; c++) text += String(g.cells[r * g.width + c]);
-  }
-  return text;
+export function gridDigits(rows: readonly (readonly number[])[]): string {
+  return rows.map((row) => row.join('')).join('/');
 }
 

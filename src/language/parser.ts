@@ -26,7 +26,7 @@ import {
   type ObjectProperty,
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
-import { Grid, shapeAllowed } from '../grid/grid.ts';
+import { shapeAllowed } from '../grid/grid.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { Expression, LiteralValue, Program, Step } from './ast.ts';
 
@@ -326,7 +326,7 @@ function parseGridKey(r: LineReader, property: GridProperty): GridKey {
 }
 
 /** A grid written as rows of colour digits of one length joined by `/`, such as `505/050`. */
-function parseDigitGrid(r: LineReader): Grid {
+function parseDigitRows(r: LineReader): number[][] {
   r.skipSpaces();
   const match = /^[0-9]+(?:\/[0-9]+)*/.exec(r.text.slice(r.position));
   const rows = match ? match[0].split('/') : [];
@@ -334,7 +334,7 @@ function parseDigitGrid(r: LineReader): Grid {
     r.fail("a grid: rows of colour digits of one length joined by '/', such as '505/050', within the size cap");
   }
   r.position += match[0].length;
-  return Grid.fromRows(rows.map((row) => [...row].map(Number)));
+  return rows.map((row) => [...row].map(Number));
 }
 
 /** `grid_rule[property]{value -> grid, ...}`, after the word `grid_rule`. */
@@ -345,7 +345,7 @@ function parseGridRule(r: LineReader): LiteralValue {
   const entries: GridRuleEntry[] = parseKeyedEntries(
     r,
     () => parseGridKey(r, property),
-    (key) => ({ key, grid: parseDigitGrid(r) }),
+    (key) => ({ key, rows: parseDigitRows(r) }),
   );
   return { type: 'GridRule', property, entries };
 }

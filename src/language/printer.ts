@@ -104,7 +104,7 @@ export function printLiteral(l: LiteralValue): string {
       return `object_rule[${l.grouping}, ${l.property}]{${entries.join(', ')}}`;
     }
     case 'GridRule': {
-      const entries = l.entries.map((e) => `${printGridKey(l.property, e.key)} -> ${gridDigits(e.grid)}`);
+      const entries = l.entries.map((e) => `${printGridKey(l.property, e.key)} -> ${gridDigits(e.rows)}`);
       return `grid_rule[${l.property}]{${entries.join(', ')}}`;
     }
   }

@@ -47,7 +47,7 @@ import {
   type ObjectOutcome,
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
-import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridRuleEntry } from '../grid/grid-rule-table.ts';
+import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridKey, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { distinctAttempts } from './distinct-attempts.ts';
@@ -377,7 +377,7 @@ export function learnGridRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
   const writtenOut = writtenOutBits(outputs);
   const found: LearnedTable[] = [];
   for (const property of GRID_PROPERTIES) {
-    const table = new Map<string, GridRuleEntry>();
+    const table = new Map<string, { key: GridKey; grid: Grid }>();
     let agrees = true;
     for (const { input, output } of puzzle.train) {
       const key = gridKey(input, property);
@@ -395,7 +395,9 @@ export function learnGridRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
     }
     if (!agrees || table.size >= outputs.length) continue;
     if (!puzzle.testInputs.every((g) => table.has(String(gridKey(g, property))))) continue;
-    const entries = [...table.values()].sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1));
+    const entries: GridRuleEntry[] = [...table.values()]
+      .sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1))
+      .map(({ key, grid }) => ({ key, rows: grid.toRows() }));
     const literal: LiteralValue = { type: 'GridRule', property, entries };
     const bits = tableBits(literal)!;
     if (bits <= maxBits && bits < writtenOut) found.push({ literal, bits });

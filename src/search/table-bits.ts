@@ -188,17 +188,19 @@ export function tableBits(l: LiteralValue): number | undefined {
       const colours = new Set<number>();
       const keyColours = new Set<string>();
       for (const e of l.entries) {
-        for (const v of e.grid.cells) colours.add(v);
+        for (const row of e.rows) for (const v of row) colours.add(v);
         if (gridPropertyValues(l.property) === 'colours') for (const d of String(e.key)) keyColours.add(d);
       }
       const c = colourBits(colours.size);
       const keyColourBits = colourBits(keyColours.size);
-      const first = l.entries[0]?.grid;
-      const shared = first !== undefined && l.entries.every((e) => e.grid.height === first.height && e.grid.width === first.width);
-      const sizeBits = (h: number, w: number): number => gammaBits(h) + gammaBits(w);
-      let bits = GRID_PROPERTY_BITS + SHARED_SIZE_BITS + (shared ? sizeBits(first.height, first.width) : 0);
+      const height = (rows: readonly (readonly number[])[]): number => rows.length;
+      const width = (rows: readonly (readonly number[])[]): number => rows[0]?.length ?? 0;
+      const first = l.entries[0]?.rows;
+      const shared = first !== undefined && l.entries.every((e) => height(e.rows) === height(first) && width(e.rows) === width(first));
+      const sizeBits = (rows: readonly (readonly number[])[]): number => gammaBits(height(rows)) + gammaBits(width(rows));
+      let bits = GRID_PROPERTY_BITS + SHARED_SIZE_BITS + (shared ? sizeBits(first) : 0);
       for (const e of l.entries) {
-        bits += gridKeyBits(l.property, e.key, keyColourBits) + (shared ? 0 : sizeBits(e.grid.height, e.grid.width)) + e.grid.height * e.grid.width * c;
+        bits += gridKeyBits(l.property, e.key, keyColourBits) + (shared ? 0 : sizeBits(e.rows)) + height(e.rows) * width(e.rows) * c;
       }
       return bits;
     }

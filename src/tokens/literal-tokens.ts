@@ -35,6 +35,7 @@ import {
 import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import type { LiteralValue } from '../language/ast.ts';
+import { Grid } from '../grid/grid.ts';
 import { readGrid, tokenizeGrid } from './grid-tokens.ts';
 import { TokenError, type TokenReader } from './token-reader.ts';
 
@@ -377,7 +378,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       { token: '</colours>', meaning: 'ends a key of colours present' },
     ],
     starts: (t) => t === '<grid_rule>',
-    encode: (l) => ['<grid_rule>', `grid_property:${l.property}`, ...l.entries.flatMap((e) => [...gridKeyTokens(l.property, e.key), ...tokenizeGrid(e.grid)]), '</grid_rule>'],
+    encode: (l) => ['<grid_rule>', `grid_property:${l.property}`, ...l.entries.flatMap((e) => [...gridKeyTokens(l.property, e.key), ...tokenizeGrid(Grid.fromRows(e.rows))]), '</grid_rule>'],
     decode: (r) => {
       r.expect('<grid_rule>');
       const property = prefixed(r, 'grid_property:', GRID_PROPERTIES, 'a grid property token');
@@ -385,7 +386,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       while (r.peek() !== '</grid_rule>') {
         if (r.atEnd()) r.fail("an entry or '</grid_rule>'");
         const key = readGridKey(r, property);
-        entries.push({ key, grid: readGrid(r) });
+        entries.push({ key, rows: readGrid(r).toRows() });
       }
       r.expect('</grid_rule>');
       return { type: 'GridRule', property, entries };

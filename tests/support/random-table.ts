@@ -25,7 +25,6 @@ import {
   type ObjectRuleEntry,
 } from '../../src/grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridRuleEntry } from '../../src/grid/grid-rule-table.ts';
-import { Grid } from '../../src/grid/grid.ts';
 import type { LiteralValue } from '../../src/language/ast.ts';
 
 export type Chooser = (count: number) => number;
@@ -90,11 +89,11 @@ function randomGridKey(choose: Chooser, values: ReturnType<typeof gridPropertyVa
   }
 }
 
-/** A small grid of random colours (at most 4 × 4). */
-function randomSmallGrid(choose: Chooser): Grid {
+/** The rows of a small grid of random colours (at most 4 × 4). */
+function randomSmallRows(choose: Chooser): number[][] {
   const height = 1 + choose(4);
   const width = 1 + choose(4);
-  return Grid.fromRows(Array.from({ length: height }, () => Array.from({ length: width }, () => choose(10))));
+  return Array.from({ length: height }, () => Array.from({ length: width }, () => choose(10)));
 }
 
 export function randomGridRule(choose: Chooser): LiteralValue {
@@ -107,7 +106,7 @@ export function randomGridRule(choose: Chooser): LiteralValue {
     const key = randomGridKey(choose, values);
     if (seen.has(String(key))) continue;
     seen.add(String(key));
-    entries.push({ key, grid: randomSmallGrid(choose) });
+    entries.push({ key, rows: randomSmallRows(choose) });
   }
   return { type: 'GridRule', property, entries };
 }
