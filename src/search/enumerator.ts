@@ -430,7 +430,6 @@ export class Enumerator {
       // extra bits: found already, they cost nothing more).
       try {
         this.acceptPending(this.limits.maxCost);
-        this.acceptCompressingTables();
       } catch (error) {
         if (!(error instanceof Stop)) throw error;
       }
@@ -689,17 +688,6 @@ export class Enumerator {
     if (this.pending.length === 0) return;
     this.pending.sort((a, b) => a.cost - b.cost);
     while (this.pending.length > 0 && this.pending[0]!.cost <= upTo) this.accept(this.pending.shift()!, true);
-  }
-
-  /**
-   * Takes, cheapest first, the pending programs that apply a table learned from a kept grid and
-   * cost more than the cost limit: the table compresses the outputs (intermediate-tables.ts), so
-   * it explains them though the search would never reach its cost. Only once the budget ends.
-   */
-  private acceptCompressingTables(): void {
-    const tables = this.pending.filter((c) => this.throughIntermediateTables.has(c)).sort((a, b) => a.cost - b.cost);
-    this.pending.length = 0;
-    for (const candidate of tables) this.accept(candidate, true);
   }
 
   /** A kept grid candidate equal to every demonstration output is a solution. */

@@ -7,9 +7,7 @@
  * on the test inputs only to check that every key is known, as for the input's tables), and
  * returns the tables with the production that applies each. The enumerator wraps the candidate
  * in that call; the program costs the candidate's bits, the call's and the table's, and waits
- * like any other until every cheaper cost level is done. As for tables applied to the input
- * (table-programs.ts), a program dearer than the cost limit is still returned when it costs fewer
- * bits than the outputs written out cell by cell: it compresses them, and costs no search.
+ * like any other until every cheaper cost level is done.
  *
  * Learning a table reads every cell many times (tens of milliseconds for small grids), so only
  * the cheapest few such candidates are tried: a fixed number per task and a fixed number of
@@ -22,7 +20,7 @@ import type { Puzzle } from '../tasks/task.ts';
 import { demonstratedPalette } from './constants.ts';
 import { learnCellRules, learnObjectRules } from './learned-tables.ts';
 import type { Production } from './productions.ts';
-import { tableBits, writtenOutBits } from './table-bits.ts';
+import { tableBits } from './table-bits.ts';
 
 export interface IntermediateLimits {
   /** Candidates tried per task, at most. */
@@ -47,8 +45,6 @@ export class IntermediateTables {
   tried = 0;
   private cellsLeft: number;
   private readonly appliers = new Map<string, Production>();
-  /** The outputs written out cell by cell, in bits: a program under this compresses them. */
-  readonly writtenOut: number;
 
   constructor(
     private readonly outputs: readonly Grid[],
@@ -56,7 +52,6 @@ export class IntermediateTables {
     private readonly limits: IntermediateLimits,
   ) {
     this.cellsLeft = limits.maxCells;
-    this.writtenOut = writtenOutBits(outputs);
     for (const type of TABLE_TYPES) {
       const p = productions.find((q) => !q.section && q.result === 'Grid' && q.argumentTypes.length === 2 && q.argumentTypes[0] === 'Grid' && q.argumentTypes[1] === type);
       if (p) this.appliers.set(type, p);
@@ -72,12 +67,10 @@ export class IntermediateTables {
    * Tables from a kept grid candidate's values (demonstrations first, then test inputs) to the
    * outputs; empty when the candidate is too dear, a value's shape differs from its output's, or
    * nothing is learned. Only tables with which the program (candidate, applying call, table) costs
-   * at most `maxTotal` bits, or fewer than the outputs written out, are returned; a cell rule
-   * whose entries already put it over is not built.
+   * at most `maxTotal` bits are returned; a cell rule whose entries already put it over is not built.
    */
   learn(values: readonly unknown[], cost: number, maxTotal = Infinity): IntermediateTable[] {
     if (!this.open || cost > this.limits.maxCost) return [];
-    maxTotal = Math.max(maxTotal, this.writtenOut - 1);
     const outputs = this.outputs;
     let equal = true;
     for (let i = 0; i < outputs.length; i++) {
