@@ -11,6 +11,7 @@
 import { backgroundColour, colourCounts, components } from './components.ts';
 import { Grid } from './grid.ts';
 import { isSymmetricLeftRight, isSymmetricTopBottom } from './symmetry.ts';
+import { textHash } from './text-hash.ts';
 
 export const GRID_PROPERTIES = [
   'colour_count',
@@ -130,7 +131,7 @@ export class GridRule {
       if (!this.table.has(code)) this.table.set(code, Grid.fromRows(e.rows));
     }
     let sum = 0;
-    for (const [key, grid] of this.table) sum = (sum + Math.imul(stringHash(key), 0x9e3779b1) + grid.hash) | 0;
+    for (const [key, grid] of this.table) sum = (sum + Math.imul(textHash(key), 0x9e3779b1) + grid.hash) | 0;
     const h = Math.imul(0x2545f491 ^ GRID_PROPERTIES.indexOf(property), 0x01000193);
     this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
   }
@@ -152,12 +153,6 @@ export class GridRule {
     }
     return true;
   }
-}
-
-function stringHash(text: string): number {
-  let h = 0x811c9dc5;
-  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return h;
 }
 
 /** The grid the rule holds for the input's value; null when the table has none. */

@@ -16,6 +16,7 @@ import { EMPTY, Grid } from './grid.ts';
 import { enclosedCells, holeCount } from './holes.ts';
 import { touchesEdge } from './object-properties.ts';
 import { paintObjectInto } from './paint-object.ts';
+import { textHash } from './text-hash.ts';
 
 /** How a grid is cut into objects: one colour or many, joined through edges or also corners. */
 export const OBJECT_GROUPINGS = ['by_colour', 'by_colour_diagonal', 'multicolour', 'multicolour_diagonal'] as const;
@@ -229,7 +230,7 @@ export class ObjectRule {
     }
     let h = Math.imul(0x3c6ef372 ^ (OBJECT_GROUPINGS.indexOf(grouping) * 16 + OBJECT_PROPERTIES.indexOf(property)), 0x01000193);
     let sum = 0;
-    for (const [key, outcome] of this.table) sum = (sum + stringHash(`${key}=${outcomeCode(outcome)}`)) | 0;
+    for (const [key, outcome] of this.table) sum = (sum + textHash(`${key}=${outcomeCode(outcome)}`)) | 0;
     this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
   }
 
@@ -250,12 +251,6 @@ export class ObjectRule {
     }
     return true;
   }
-}
-
-function stringHash(text: string): number {
-  let h = 0x811c9dc5;
-  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return h;
 }
 
 /** The grid after every object's outcome; null when some object's key has no entry. */

@@ -96,18 +96,23 @@ function randomSmallRows(choose: Chooser): number[][] {
   return Array.from({ length: height }, () => Array.from({ length: width }, () => choose(10)));
 }
 
+/** Up to `count` entries: each draws a key, and an entry for it unless the key was drawn before. */
+function distinctKeyed<K extends string | number, E>(count: number, key: () => K, entry: (key: K) => E): E[] {
+  const entries: E[] = [];
+  const seen = new Set<string>();
+  for (let i = 0; i < count; i++) {
+    const k = key();
+    if (seen.has(String(k))) continue;
+    seen.add(String(k));
+    entries.push(entry(k));
+  }
+  return entries;
+}
+
 export function randomGridRule(choose: Chooser): LiteralValue {
   const property = GRID_PROPERTIES[choose(GRID_PROPERTIES.length)]!;
   const values = gridPropertyValues(property);
-  const entries: GridRuleEntry[] = [];
-  const seen = new Set<string>();
-  const count = choose(5);
-  for (let i = 0; i < count; i++) {
-    const key = randomGridKey(choose, values);
-    if (seen.has(String(key))) continue;
-    seen.add(String(key));
-    entries.push({ key, rows: randomSmallRows(choose) });
-  }
+  const entries: GridRuleEntry[] = distinctKeyed(choose(5), () => randomGridKey(choose, values), (key) => ({ key, rows: randomSmallRows(choose) }));
   return { type: 'GridRule', property, entries };
 }
 
@@ -128,15 +133,7 @@ export function randomObjectRule(choose: Chooser): LiteralValue {
   const grouping = OBJECT_GROUPINGS[choose(OBJECT_GROUPINGS.length)]!;
   const property = OBJECT_PROPERTIES[choose(OBJECT_PROPERTIES.length)]!;
   const values = propertyValues(property);
-  const entries: ObjectRuleEntry[] = [];
-  const seen = new Set<string>();
-  const count = choose(6);
-  for (let i = 0; i < count; i++) {
-    const key = randomObjectKey(choose, values);
-    if (seen.has(String(key))) continue;
-    seen.add(String(key));
-    entries.push({ key, outcome: randomOutcome(choose) });
-  }
+  const entries: ObjectRuleEntry[] = distinctKeyed(choose(6), () => randomObjectKey(choose, values), (key) => ({ key, outcome: randomOutcome(choose) }));
   return { type: 'ObjectRule', grouping, property, entries };
 }
 
