@@ -119,9 +119,9 @@ const MADE_LAYER_GOALS = 24;
 
 /**
  * Partial layers (addPartialLayers): kept grids that lay part of a layer goal, taken once each of
- * these levels is done (a later round also builds on the earlier rounds' goals: three drawings).
+ * these levels is done (the second round also builds on the first round's goals: three drawings).
  */
-const PARTIAL_LAYER_LEVELS: readonly number[] = [12, 15, 18];
+const PARTIAL_LAYER_LEVELS: readonly number[] = [12, 15];
 
 /** At most this many layer goals with a partial layer per round, as for made layers. */
 const PARTIAL_LAYER_GOALS = 24;
