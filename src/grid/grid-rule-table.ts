@@ -9,9 +9,10 @@
  * (null) when the table has no entry for that value: a rule never guesses.
  */
 import { backgroundColour, colourCounts, components } from './components.ts';
+import { cellBounds } from './crop.ts';
 import { Grid } from './grid.ts';
 import { isSymmetricLeftRight, isSymmetricTopBottom } from './symmetry.ts';
-import { textHash } from './text-hash.ts';
+import { tableKeyCode, textHash } from './text-hash.ts';
 
 export const GRID_PROPERTIES = [
   'colour_count',
@@ -88,31 +89,16 @@ export function gridKey(g: Grid, property: GridProperty): GridKey | undefined {
 
 function backgroundShape(g: Grid): string | undefined {
   const background = backgroundColour(g);
-  const { height, width, cells } = g;
-  let top = height;
-  let bottom = -1;
-  let left = width;
-  let right = -1;
-  for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] === background) continue;
-      if (r < top) top = r;
-      if (r > bottom) bottom = r;
-      if (c < left) left = c;
-      if (c > right) right = c;
-    }
-  }
-  if (bottom < 0) return undefined;
+  const bounds = cellBounds(g, background, false);
+  if (!bounds) return undefined;
+  const { top, left, bottom, right } = bounds;
+  const { width, cells } = g;
   let text = '';
   for (let r = top; r <= bottom; r++) {
     if (r > top) text += '/';
     for (let c = left; c <= right; c++) text += cells[r * width + c] === background ? '.' : 'x';
   }
   return text;
-}
-
-function keyCode(key: GridKey): string {
-  return typeof key === 'number' ? `n${key}` : `s${key}`;
 }
 
 /** A property of the whole grid and a table from its values to output grids. */
@@ -127,7 +113,7 @@ export class GridRule {
     this.property = property;
     this.entries = entries;
     for (const e of entries) {
-      const code = keyCode(e.key);
+      const code = tableKeyCode(e.key);
       if (!this.table.has(code)) this.table.set(code, Grid.fromRows(e.rows));
     }
     let sum = 0;
@@ -137,7 +123,7 @@ export class GridRule {
   }
 
   gridFor(key: GridKey): Grid | undefined {
-    return this.table.get(keyCode(key));
+    return this.table.get(tableKeyCode(key));
   }
 
   get size(): number {

@@ -16,7 +16,7 @@ import { EMPTY, Grid } from './grid.ts';
 import { enclosedCells, holeCount } from './holes.ts';
 import { touchesEdge } from './object-properties.ts';
 import { paintObjectInto } from './paint-object.ts';
-import { textHash } from './text-hash.ts';
+import { tableKeyCode, textHash } from './text-hash.ts';
 
 /** How a grid is cut into objects: one colour or many, joined through edges or also corners. */
 export const OBJECT_GROUPINGS = ['by_colour', 'by_colour_diagonal', 'multicolour', 'multicolour_diagonal'] as const;
@@ -104,10 +104,6 @@ export function outcomeCode(o: ObjectOutcome): string {
     case 'move':
       return `m${o.rows},${o.columns}`;
   }
-}
-
-function keyCode(key: ObjectKey): string {
-  return typeof key === 'number' ? `n${key}` : `s${key}`;
 }
 
 /** The objects of a grid under a grouping, with the grid's background colour left out. */
@@ -225,7 +221,7 @@ export class ObjectRule {
     this.property = property;
     this.entries = entries;
     for (const e of entries) {
-      const code = keyCode(e.key);
+      const code = tableKeyCode(e.key);
       if (!this.table.has(code)) this.table.set(code, e.outcome);
     }
     let h = Math.imul(0x3c6ef372 ^ (OBJECT_GROUPINGS.indexOf(grouping) * 16 + OBJECT_PROPERTIES.indexOf(property)), 0x01000193);
@@ -235,7 +231,7 @@ export class ObjectRule {
   }
 
   outcomeFor(key: ObjectKey): ObjectOutcome | undefined {
-    return this.table.get(keyCode(key));
+    return this.table.get(tableKeyCode(key));
   }
 
   get size(): number {

@@ -320,8 +320,13 @@ function learnObjectRuleFrom(
     for (const k of objectKeys(g, objects, property)) if (!allowed.has(String(k))) return undefined;
   }
   const entries: ObjectRuleEntry[] = [...allowed.values()].map(({ key }) => ({ key, outcome: chosen.get(String(key))! }));
-  entries.sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1));
+  entries.sort((a, b) => compareTableKeys(a.key, b.key));
   return { type: 'ObjectRule', grouping, property, entries };
+}
+
+/** Table keys in order: numbers by value, texts by their characters. */
+function compareTableKeys(a: number | string, b: number | string): number {
+  return typeof a === 'number' && typeof b === 'number' ? a - b : String(a) < String(b) ? -1 : 1;
 }
 
 /** The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each), cheapest first. */
@@ -396,7 +401,7 @@ export function learnGridRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
     if (!agrees || table.size >= outputs.length) continue;
     if (!puzzle.testInputs.every((g) => table.has(String(gridKey(g, property))))) continue;
     const entries: GridRuleEntry[] = [...table.values()]
-      .sort((a, b) => (typeof a.key === 'number' && typeof b.key === 'number' ? a.key - b.key : String(a.key) < String(b.key) ? -1 : 1))
+      .sort((a, b) => compareTableKeys(a.key, b.key))
       .map(({ key, grid }) => ({ key, rows: grid.toRows() }));
     const literal: LiteralValue = { type: 'GridRule', property, entries };
     const bits = tableBits(literal)!;
