@@ -11,6 +11,13 @@
  * of the objects, so it still applies when a test input brings a colour no demonstration shows.
  * Applying a rule to a grid looks every cell's key up; a key the table does not hold makes the
  * whole application fail (null): a rule never guesses.
+ *
+ * A key may also hold `any` (ANY) for a feature, matching every value of it. A rule with such a
+ * key is a list read in order: a cell takes the colour of the first entry its values match (so
+ * `yes #1 any -> #2` before `any any any -> keep` says "a background cell below a #1 cell becomes
+ * #2, every other cell keeps its colour"). A cell no entry matches still makes the application
+ * fail. Such a list states each condition once instead of once per combination of the other
+ * features, so it can cover combinations no demonstration shows.
  */
 import { backgroundColour } from './components.ts';
 import { Grid, newCells } from './grid.ts';
@@ -21,6 +28,15 @@ export const EDGE = 10;
 
 /** An entry's output meaning "the cell keeps its colour" (written `keep`). */
 export const KEEP = 11;
+
+/** A key value matching every value of its feature (written `any`); a rule holding one is read in order. */
+export const ANY = 12;
+
+/** True when some entry's key holds `any`: the rule is then a list read in order. */
+export function isOrderedRule(entries: readonly CellRuleEntry[]): boolean {
+  for (const e of entries) for (const v of e.key) if (v === ANY) return true;
+  return false;
+}
 
 /** The features a cell rule may start with: the cell's own colour, or whether it is background. */
 export const FIRST_FEATURES = ['colour', 'background'] as const;
@@ -266,32 +282,57 @@ export function sameFeatures(a: readonly CellFeature[], b: readonly CellFeature[
   return true;
 }
 
-/** A learned or written cell rule: features and a table from keys to colours. */
+/** A learned or written cell rule: features and a table from keys to colours (or, with `any` in a key, a list read in order). */
 export class CellRule {
   readonly features: readonly CellFeature[];
   readonly entries: readonly CellRuleEntry[];
   readonly hash: number;
+  /** True when some key holds `any`: the first entry a cell matches counts, so order matters. */
+  readonly ordered: boolean;
   private readonly table = new Map<number, number>();
 
   /** The first entry for a key counts (the parser rejects repeated keys). */
   constructor(features: readonly CellFeature[], entries: readonly CellRuleEntry[]) {
     this.features = features;
     this.entries = entries;
+    this.ordered = isOrderedRule(entries);
     for (const e of entries) {
       const packed = packKey(e.key);
       if (!this.table.has(packed)) this.table.set(packed, e.colour);
     }
     let h = 0x6a09e667 ^ features.length;
     for (const f of features) h = Math.imul(h ^ (CELL_FEATURE_NAMES.indexOf(f.name) * 16 + (f.colour ?? 15)), 0x01000193);
-    // Order-free over entries, so equal tables written in another order hash alike.
     let sum = 0;
-    for (const [key, colour] of this.table) sum = (sum + (Math.imul((key % 0x7fffffff) ^ Math.floor(key / 0x7fffffff), 0x9e3779b1) ^ colour)) | 0;
+    if (this.ordered) {
+      // A list read in order: its hash follows the order.
+      for (const e of entries) sum = Math.imul(sum ^ (hashKey(packKey(e.key)) ^ e.colour), 0x01000193);
+    } else {
+      // Order-free over entries, so equal tables written in another order hash alike.
+      for (const [key, colour] of this.table) sum = (sum + (hashKey(key) ^ colour)) | 0;
+    }
     this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
   }
 
-  /** The colour for a packed key, or undefined when the table has no entry for it. */
+  /** The colour for a packed key, or undefined when the table has no entry for it (a rule without `any`). */
   colourFor(packedKey: number): number | undefined {
     return this.table.get(packedKey);
+  }
+
+  /** For a list read in order: the colour of the first entry cell i matches, given each feature's values. */
+  firstMatch(columns: readonly Uint8Array[], i: number): number | undefined {
+    for (const e of this.entries) {
+      const key = e.key;
+      let matches = true;
+      for (let f = 0; f < key.length; f++) {
+        const v = key[f]!;
+        if (v !== ANY && v !== columns[f]![i]) {
+          matches = false;
+          break;
+        }
+      }
+      if (matches) return e.colour;
+    }
+    return undefined;
   }
 
   get size(): number {
@@ -300,10 +341,23 @@ export class CellRule {
 
   equals(other: CellRule): boolean {
     if (this === other) return true;
-    if (this.hash !== other.hash || this.table.size !== other.table.size || !sameFeatures(this.features, other.features)) return false;
+    if (this.hash !== other.hash || this.ordered !== other.ordered || this.table.size !== other.table.size || !sameFeatures(this.features, other.features)) return false;
+    if (this.ordered) {
+      if (this.entries.length !== other.entries.length) return false;
+      for (let k = 0; k < this.entries.length; k++) {
+        const a = this.entries[k]!;
+        const b = other.entries[k]!;
+        if (a.colour !== b.colour || packKey(a.key) !== packKey(b.key)) return false;
+      }
+      return true;
+    }
     for (const [key, colour] of this.table) if (other.table.get(key) !== colour) return false;
     return true;
   }
+}
+
+function hashKey(key: number): number {
+  return Math.imul((key % 0x7fffffff) ^ Math.floor(key / 0x7fffffff), 0x9e3779b1);
 }
 
 export function isFirstFeature(name: string): name is (typeof FIRST_FEATURES)[number] {
@@ -316,6 +370,16 @@ export function isFirstFeature(name: string): name is (typeof FIRST_FEATURES)[nu
  */
 export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
   if (rule.features.length === 0 || !isFirstFeature(rule.features[0]!.name)) return null;
+  if (rule.ordered) {
+    const columns = rule.features.map((f) => featureOfCells(g, f));
+    const out = newCells(g.cells.length);
+    for (let i = 0; i < out.length; i++) {
+      const colour = rule.firstMatch(columns, i);
+      if (colour === undefined) return null;
+      out[i] = colour === KEEP ? g.cells[i]! : colour;
+    }
+    return new Grid(g.height, g.width, out);
+  }
   const keys = cellKeys(g, rule.features);
   const out = newCells(keys.length);
   for (let i = 0; i < keys.length; i++) {

@@ -11,6 +11,7 @@ import {
   isCellFeatureName,
   isFirstFeature,
   KEEP,
+  ANY,
   largestFeatureValue,
   packKey,
   type CellFeature,
@@ -149,7 +150,13 @@ function boundedInteger(r: LineReader, low: number, high: number, what: string):
   return value;
 }
 
+/** A key value of a cell rule: `any`, or a value of the feature's kind. */
 function parseFeatureValue(r: LineReader, values: CellFeatureValues): number {
+  r.skipSpaces();
+  if (/^any(?![A-Za-z0-9_])/.test(r.text.slice(r.position, r.position + 4))) {
+    r.position += 3;
+    return ANY;
+  }
   switch (values) {
     case 'colour':
       return r.colour();

@@ -22,7 +22,7 @@
  * of the whole input, then its entries: a value (a number, `yes`/`no`, a shape, or the colours
  * present such as `#0 #2`) and the output grid, its rows of colour digits joined by `/`.
  */
-import { featureTakesColour, featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { featureTakesColour, featureValues, ANY, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { gridDigits, gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
@@ -32,6 +32,7 @@ function printFeature(f: CellFeature): string {
 }
 
 function printFeatureValue(values: CellFeatureValues, v: number): string {
+  if (v === ANY) return 'any';
   switch (values) {
     case 'colour':
       return `#${v}`;

@@ -28,6 +28,7 @@ import {
   FIRST_FEATURES,
   isFirstFeature,
   KEEP,
+  ANY,
   type CellFeature,
   type CellFeatureName,
   type CellRuleEntry,
@@ -431,7 +432,120 @@ function cheapestDistinct(found: LearnedTable[], limit: number, puzzle: Puzzle):
   return distinctAttempts(ordered, (t) => puzzle.testInputs.map((g) => applyTable(t.literal, g)), limit);
 }
 
+/** Conditions a cell list may take at most (its last entry, `keep` for every other cell, not counted). */
+const MAXIMUM_CONDITIONS = 8;
+
+/**
+ * A cell rule read in order (a list of conditions, src/grid/cell-rule-table.ts), learned greedily:
+ * each condition is one feature taking one value (the cell's colour, whether it is background, or
+ * one of the single features the exact rules try), and gives one colour. At each step, among the
+ * conditions whose cells not yet claimed by an earlier condition all become one colour, the one
+ * that changes the most such cells comes next (then the one covering the most; ties in the fixed
+ * feature order). It stops when every cell left keeps its colour, and ends the list with `any ...
+ * -> keep`; it gives up (undefined) when no condition can change a cell left, after
+ * MAXIMUM_CONDITIONS conditions, or when the list would cost more than `maxBits`.
+ *
+ * Where an exact table needs an entry for every combination of its features, and so fails on a
+ * test input that brings a combination no demonstration shows, a list states each condition once:
+ * "below a #1 cell becomes #2" holds whatever the other neighbours are.
+ */
+export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable | undefined {
+  if (!sameShapedPairs(puzzle)) return undefined;
+  const cache = new FeatureCache();
+  const inputs = puzzle.train.map((p) => p.input);
+  const grids = [...inputs, ...puzzle.testInputs];
+  const candidates: CellFeature[] = [...FIRST_FEATURES.map((name) => ({ name })), ...cellAtoms(taskColours(puzzle))].filter((f) => {
+    const first = cache.of(grids[0]!, f)[0];
+    return grids.some((g) => cache.of(g, f).some((v) => v !== first));
+  });
+  // Cells of all demonstrations in one row: what each becomes, and whether it changes.
+  let total = 0;
+  for (const g of inputs) total += g.cells.length;
+  const target = new Uint8Array(total);
+  const changes = new Uint8Array(total);
+  let offset = 0;
+  for (const { input, output } of puzzle.train) {
+    for (let i = 0; i < input.cells.length; i++) {
+      target[offset + i] = output.cells[i]!;
+      changes[offset + i] = output.cells[i] !== input.cells[i] ? 1 : 0;
+    }
+    offset += input.cells.length;
+  }
+  const columns = candidates.map((f) => {
+    const all = new Uint8Array(total);
+    let at = 0;
+    for (const g of inputs) {
+      all.set(cache.of(g, f), at);
+      at += g.cells.length;
+    }
+    return all;
+  });
+  const claimed = new Uint8Array(total);
+  const chosen: { feature: number; value: number; colour: number }[] = [];
+  // Per value of a feature: cells covered, cells changed, and the one colour they become (NONE when they differ).
+  const covered = new Int32Array(16);
+  const changed = new Int32Array(16);
+  const becomes = new Int16Array(16);
+  const NONE = -1;
+  const UNSET = -2;
+  for (;;) {
+    let left = false;
+    for (let i = 0; i < total; i++) if (!claimed[i] && changes[i]) left = true;
+    if (!left) break;
+    if (chosen.length >= MAXIMUM_CONDITIONS) return undefined;
+    let best: { feature: number; value: number; colour: number; changed: number; covered: number } | undefined;
+    for (let f = 0; f < columns.length; f++) {
+      const column = columns[f]!;
+      covered.fill(0);
+      changed.fill(0);
+      becomes.fill(UNSET);
+      for (let i = 0; i < total; i++) {
+        if (claimed[i]) continue;
+        const v = column[i]!;
+        covered[v]!++;
+        changed[v]! += changes[i]!;
+        const b = becomes[v]!;
+        if (b === UNSET) becomes[v] = target[i]!;
+        else if (b !== target[i]) becomes[v] = NONE;
+      }
+      for (let v = 0; v < 16; v++) {
+        if (changed[v] === 0 || becomes[v]! < 0) continue;
+        if (!best || changed[v]! > best.changed || (changed[v] === best.changed && covered[v]! > best.covered)) {
+          best = { feature: f, value: v, colour: becomes[v]!, changed: changed[v]!, covered: covered[v]! };
+        }
+      }
+    }
+    if (!best) return undefined;
+    chosen.push(best);
+    const column = columns[best.feature]!;
+    for (let i = 0; i < total; i++) if (column[i] === best.value) claimed[i] = 1;
+  }
+  if (chosen.length === 0) return undefined;
+  // The rule's features: the cell's colour first when a condition names it, else `background`;
+  // then the others in the order the conditions first name them.
+  const used: number[] = [];
+  const colourIndex = candidates.findIndex((f) => f.name === 'colour');
+  const backgroundIndex = candidates.findIndex((f) => f.name === 'background');
+  const first = chosen.some((c) => c.feature === colourIndex) ? colourIndex : backgroundIndex;
+  const features: CellFeature[] = [first >= 0 ? candidates[first]! : { name: 'background' }];
+  for (const c of chosen) if (c.feature !== first && !used.includes(c.feature)) used.push(c.feature);
+  for (const f of used) features.push(candidates[f]!);
+  const position = (feature: number): number => (feature === first ? 0 : 1 + used.indexOf(feature));
+  const entries: CellRuleEntry[] = chosen.map((c) => {
+    const key = new Array<number>(features.length).fill(ANY);
+    key[position(c.feature)] = c.value;
+    return { key, colour: c.colour };
+  });
+  entries.push({ key: new Array<number>(features.length).fill(ANY), colour: KEEP });
+  const literal: LiteralValue = { type: 'CellRule', features, entries };
+  const bits = tableBits(literal)!;
+  return bits <= maxBits ? { literal, bits } : undefined;
+}
+
 /** Every learned table the search is offered: cell rules, then object rules, then grid rules. */
 export function learnedTables(puzzle: Puzzle): LearnedTable[] {
-  return [...learnCellRules(puzzle), ...learnObjectRules(puzzle), ...learnGridRules(puzzle)];
+  const cells = learnCellRules(puzzle);
+  const list = learnCellList(puzzle);
+  if (list) cells.push(list);
+  return [...cheapestDistinct(cells, 2, puzzle), ...learnObjectRules(puzzle), ...learnGridRules(puzzle)];
 }

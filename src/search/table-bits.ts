@@ -7,7 +7,9 @@
  *
  *   palette      1 + Σ entries 2c
  *   cell rule    γ(f + 1) + 1 (colour or background first) + Σ extra features (5 + 4 when it names a colour)
- *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c))
+ *                + Σ entries (Σ key values + (1 when the cell keeps its colour, else 1 + c));
+ *                a rule with `any` in a key (a list read in order) pays 1 more, and each of its key
+ *                values 1 more (1 alone for `any`)
  *   object rule  2 + 4 + Σ entries (key value + outcome)
  *   grid rule    3 + 1 + (γ(h) + γ(w) once, when every grid of the table is h × w)
  *                + Σ entries (key value + (γ(h) + γ(w) of its grid, when sizes differ) + h·w·c)
@@ -18,7 +20,7 @@
  * 1 for yes/no, γ(h) + γ(w) + h·w for a shape of h × w, and γ(m) + m·c' for a set of m colours,
  * c' naming one of the colours its keys hold.
  */
-import { featureValues, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
+import { featureValues, isOrderedRule, ANY, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
 import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Grid } from '../grid/grid.ts';
@@ -159,15 +161,21 @@ export function tableBits(l: LiteralValue): number | undefined {
       for (const e of l.entries) {
         if (e.colour !== KEEP) colours.add(e.colour);
         e.key.forEach((v, i) => {
-          if ((kinds[i] === 'colour' || kinds[i] === 'neighbour') && v !== EDGE) colours.add(v);
+          if ((kinds[i] === 'colour' || kinds[i] === 'neighbour') && v !== EDGE && v !== ANY) colours.add(v);
         });
       }
       const k = colours.size;
       const c = colourBits(k);
       const byColour = l.features[0]?.name === 'colour';
-      let bits = cellRuleFeatureBits(l.features);
+      // A list read in order (a key holds `any`) pays a bit for being one, and each key value a
+      // bit for saying whether it is `any`, which costs nothing more.
+      const ordered = isOrderedRule(l.entries);
+      let bits = cellRuleFeatureBits(l.features) + (ordered ? 1 : 0);
       for (const e of l.entries) {
-        for (let i = 0; i < e.key.length; i++) bits += featureValueBits(kinds[i]!, c, k);
+        for (let i = 0; i < e.key.length; i++) {
+          if (ordered) bits += e.key[i] === ANY ? 1 : 1 + featureValueBits(kinds[i]!, c, k);
+          else bits += featureValueBits(kinds[i]!, c, k);
+        }
         const keeps = e.colour === KEEP || (byColour && e.colour === e.key[0]);
         bits += keeps ? 1 : 1 + c;
       }

@@ -28,6 +28,7 @@ import {
   featureValues,
   isCellFeatureName,
   KEEP,
+  ANY,
   type CellFeature,
   type CellFeatureValues,
   type CellRuleEntry,
@@ -106,6 +107,7 @@ function prefixed<W extends string>(reader: TokenReader, prefix: string, names: 
 }
 
 function featureValueTokens(kind: CellFeatureValues, value: number): string[] {
+  if (value === ANY) return ['any'];
   switch (kind) {
     case 'colour':
       return [colourToken(value)];
@@ -122,6 +124,10 @@ function featureValueTokens(kind: CellFeatureValues, value: number): string[] {
 }
 
 function readFeatureValue(reader: TokenReader, kind: CellFeatureValues): number {
+  if (reader.peek() === 'any') {
+    reader.position++;
+    return ANY;
+  }
   switch (kind) {
     case 'colour':
       return readColour(reader);
@@ -302,6 +308,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       { token: 'no', meaning: 'a yes-or-no value: no' },
       { token: 'even', meaning: 'an even row or column' },
       { token: 'odd', meaning: 'an odd row or column' },
+      { token: 'any', meaning: 'a key value matching every value of its feature (the rule is then read in order)' },
     ],
     starts: (t) => t === '<cell_rule>',
     encode: (l) => [
