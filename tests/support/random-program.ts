@@ -107,7 +107,7 @@ class ProgramBuilder {
       case 'Point':
         return { type: 'Point', row: this.choose(9) - 3, column: this.choose(9) - 3 };
       case 'CellRule':
-        return randomCellRule(this.choose);
+        return randomCellRule(this.choose, true);
       case 'ObjectRule':
         return randomObjectRule(this.choose);
       case 'GridRule':

@@ -11,6 +11,7 @@ import {
   featureValues,
   FIRST_FEATURES,
   KEEP,
+  ANY,
   largestFeatureValue,
   packKey,
   type CellFeature,
@@ -29,7 +30,8 @@ import type { LiteralValue } from '../../src/language/ast.ts';
 
 export type Chooser = (count: number) => number;
 
-export function randomCellRule(choose: Chooser): LiteralValue {
+/** A random cell rule; with `withAny`, key values are sometimes `any`, making it a list read in order. */
+export function randomCellRule(choose: Chooser, withAny = false): LiteralValue {
   const features: CellFeature[] = [{ name: FIRST_FEATURES[choose(FIRST_FEATURES.length)]! }];
   const extra = choose(4);
   for (let i = 0; i < extra; i++) {
@@ -40,7 +42,11 @@ export function randomCellRule(choose: Chooser): LiteralValue {
   const seen = new Set<number>();
   const count = choose(7);
   for (let i = 0; i < count; i++) {
-    const key = features.map((f) => choose(largestFeatureValue(featureValues(f.name)) + 1));
+    const key = features.map((f) => {
+      const largest = largestFeatureValue(featureValues(f.name));
+      const v = choose(largest + (withAny ? 3 : 1));
+      return v > largest ? ANY : v;
+    });
     const packed = packKey(key);
     if (seen.has(packed)) continue;
     seen.add(packed);
@@ -139,6 +145,8 @@ export function randomObjectRule(choose: Chooser): LiteralValue {
 
 const chooserArbitrary: fc.Arbitrary<Chooser> = fc.gen().map((g) => (count: number) => (count <= 1 ? 0 : g(fc.nat, { max: count - 1 })));
 
-export const cellRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomCellRule);
+export const cellRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map((choose) => randomCellRule(choose));
+/** Cell rules, some of them lists read in order (keys holding `any`). */
+export const cellListArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map((choose) => randomCellRule(choose, true));
 export const objectRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomObjectRule);
 export const gridRuleArbitrary: fc.Arbitrary<LiteralValue> = chooserArbitrary.map(randomGridRule);
