@@ -1,13 +1,16 @@
 /**
  * Cell lists: a cell rule whose keys may say `any`, read in order (the first entry a cell matches
- * gives its colour). On an invented garden of lanterns: the list learned, its bits worked out by
+ * gives its colour). On an invented garden of seeds: the list learned, its bits worked out by
  * hand, the test input it covers where the exact table of the same features has no entry; order
  * and failure; the text round trip; and laws of the learner (fast-check).
  */
+import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ANY, applyCellRule, CellRule, EDGE, KEEP, type CellFeature, type CellRuleEntry } from '../src/grid/cell-rule-table.ts';
 import { Grid } from '../src/grid/grid.ts';
+import { checkProgram } from '../src/language/checker.ts';
+import { runProgram } from '../src/language/interpreter.ts';
 import { parseExpression, parseProgram } from '../src/language/parser.ts';
 import { printLiteral, printProgram } from '../src/language/printer.ts';
 import { applyTable, learnCellList, learnCellRule } from '../src/search/learned-tables.ts';
@@ -22,12 +25,12 @@ import { syntaxProblem } from './support/syntax-problem.ts';
 const G = Grid.fromRows;
 
 /**
- * A lantern (1) on dark ground (0) lights the cell below it yellow (4) and the cell to its right
- * green (3). Invented. No demonstration has a lantern in the first column, so the exact table of
- * the same features never sees a lit cell with the edge on its left.
+ * A seed (1) in the soil (0) puts a root (4) in the cell below it and a leaf (3) in the cell to
+ * its right. Invented. No demonstration has a seed in the first column, so the exact table of the
+ * same features never sees a root with the edge on its left.
  */
 const garden: Puzzle = {
-  name: 'lantern-garden',
+  name: 'seed-garden',
   train: [
     {
       input: G([[0, 0, 0, 0], [0, 1, 0, 0], [0, 0, 0, 0]]),
@@ -44,7 +47,7 @@ const garden: Puzzle = {
   ],
   testInputs: [G([[1, 0, 0], [0, 0, 0], [0, 0, 0]])],
 };
-/** Worked by hand from the picture above: the corner lantern lights its two neighbours. */
+/** Worked by hand from the rule above: the seed in the corner sprouts into its two neighbours. */
 const gardenAnswer = [[1, 3, 0], [4, 0, 0], [0, 0, 0]];
 
 /**
@@ -56,7 +59,7 @@ const gardenAnswer = [[1, 3, 0], [4, 0, 0], [0, 0, 0]];
  */
 const gardenList = 'cell_rule[background, above, left]{any #1 any -> #4, any any #1 -> #3, any any any -> keep}';
 
-describe('a cell list learned from the lantern garden', () => {
+describe('a cell list learned from the seed garden', () => {
   const learned = learnCellList(garden);
 
   it('is the list worked out by hand, at 35 bits', () => {
@@ -67,7 +70,7 @@ describe('a cell list learned from the lantern garden', () => {
     expect(written.kind === 'literal' && tableBits(written.literal)).toBe(35);
   });
 
-  it('reproduces every demonstration and lights the corner lantern of the test input', () => {
+  it('reproduces every demonstration and sprouts the corner seed of the test input', () => {
     for (const { input, output } of garden.train) expect(applyTable(learned!.literal, input)!.toRows()).toEqual(output.toRows());
     expect(applyTable(learned!.literal, garden.testInputs[0]!)!.toRows()).toEqual(gardenAnswer);
   });
@@ -96,7 +99,7 @@ describe('reading a list in order', () => {
   const below: CellRuleEntry = { key: [ANY, 1, ANY], colour: 4 };
   const right: CellRuleEntry = { key: [ANY, ANY, 1], colour: 3 };
   const rest: CellRuleEntry = { key: [ANY, ANY, ANY], colour: KEEP };
-  // Cell (1, 1) has a lantern above it and one on its left: the first entry it matches decides.
+  // Cell (1, 1) has a seed above it and one on its left: the first entry it matches decides.
   const crossing = G([[0, 1], [1, 0]]);
 
   it('gives a cell the colour of the first entry it matches', () => {
@@ -149,10 +152,10 @@ describe('laws of the learner (fast-check)', () => {
   it('a list it learns reproduces every demonstration, ends in `any ... -> keep` and has at most 8 conditions', () => {
     const neighbours = ['above', 'below', 'left', 'right'] as const;
     fc.assert(
-      fc.property(fc.array(smallGrid, { minLength: 2, maxLength: 4 }), fc.subarray([...neighbours], { minLength: 1 }), fc.array(fc.integer({ min: 2, max: 9 }), { minLength: 4, maxLength: 4 }), (inputs, lit, colours) => {
+      fc.property(fc.array(smallGrid, { minLength: 2, maxLength: 4 }), fc.subarray([...neighbours], { minLength: 1 }), fc.array(fc.integer({ min: 2, max: 9 }), { minLength: 4, maxLength: 4 }), (inputs, directions, colours) => {
         // The hidden rule: a background cell next to a 1 in a chosen direction takes that direction's colour.
-        const features: CellFeature[] = [{ name: 'background' }, ...lit.map((name) => ({ name }))];
-        const entries: CellRuleEntry[] = lit.map((_, i) => {
+        const features: CellFeature[] = [{ name: 'background' }, ...directions.map((name) => ({ name }))];
+        const entries: CellRuleEntry[] = directions.map((_, i) => {
           const key = new Array<number>(features.length).fill(ANY);
           key[i + 1] = 1;
           return { key, colour: colours[i]! };
@@ -179,5 +182,21 @@ describe('laws of the learner (fast-check)', () => {
     expect(learnCellList(same)).toBeUndefined();
     const grown: Puzzle = { name: 'grown', train: [{ input: G([[1]]), output: G([[1, 1]]) }], testInputs: [] };
     expect(learnCellList(grown)).toBeUndefined();
+  });
+});
+
+describe("the README's cell list example", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const blocks = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)]
+    .map((m) => m[1]!.replace(/^ {2}/gm, ''))
+    .filter((b) => b.includes('apply_cell_rule(garden,'));
+
+  it('is the seed list, grows the garden, and states the bits the formula gives', () => {
+    expect(blocks.length).toBe(1);
+    const program = parseProgram(blocks[0]!, 'README.md');
+    checkProgram(program, defaultLibrary);
+    expect(blocks[0]).toContain(gardenList);
+    for (const pair of garden.train) expect((runProgram(program, pair.input, defaultLibrary).output as Grid).equals(pair.output)).toBe(true);
+    expect(readme).toMatch(new RegExp(`and 4 for\\s+the last entry: ${learnCellList(garden)!.bits} bits\\.`));
   });
 });

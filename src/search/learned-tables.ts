@@ -10,7 +10,8 @@
  * neighbours have a colour, whether the cell's row or column holds a colour (for each colour of
  * the task), the parity of its row or column, whether it is enclosed, whether it lies on the
  * border, the first colour other than the background met looking up, down, left or right; and the
- * colour plus all 4 or all 8 neighbours.
+ * colour plus all 4 or all 8 neighbours. Besides these exact tables, one cell list (a rule with
+ * `any` in its keys, read in order) is learned greedily from single conditions (learnCellList).
  *
  * Grid rules (any sizes): a property of the whole input picks the output (learnGridRules below).
  *
