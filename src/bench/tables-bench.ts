@@ -17,6 +17,7 @@ import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Command } from 'commander';
 import { defaultLibrary } from '../../dsl/index.ts';
+import { isOrderedRule } from '../grid/cell-rule-table.ts';
 import { printProgram } from '../language/printer.ts';
 import { taskConstants } from '../search/constants.ts';
 import { distinctAttempts } from '../search/distinct-attempts.ts';
@@ -34,7 +35,7 @@ function tableKind(t: TableProgram): string {
   const table = answer.kind === 'call' ? answer.arguments[1] : undefined;
   if (!table || table.kind !== 'literal') return 'other';
   const l = table.literal;
-  if (l.type === 'CellRule') return `cell rule (${l.features[0]?.name ?? '?'} first)`;
+  if (l.type === 'CellRule') return isOrderedRule(l.entries) ? 'cell list' : `cell rule (${l.features[0]?.name ?? '?'} first)`;
   if (l.type === 'ObjectRule') return `object rule (${l.property})`;
   if (l.type === 'GridRule') return `grid rule (${l.property})`;
   return l.type === 'Palette' ? 'palette' : 'other';
