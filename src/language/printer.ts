@@ -15,7 +15,8 @@
  *
  * A cell rule lists its features in brackets, then its entries: a key (one value per feature,
  * separated by spaces) and the output colour. Feature values are colours `#3`, `edge` (a
- * neighbour outside the grid), counts `2`, `yes`/`no`, `even`/`odd`. An object rule names how
+ * neighbour outside the grid), counts `2`, `yes`/`no`, `even`/`odd`, or `any` (every value; a
+ * rule holding it is read in order, entries printed as they stand). An object rule names how
  * the grid is cut into objects and the property it reads, then its entries: a property value
  * (a number, a colour, `yes`/`no`, or a shape such as `xx/x.`) and what becomes of such
  * objects: `keep`, `remove`, a colour, or `move (rows, columns)`. A grid rule names a property
