@@ -139,6 +139,7 @@ describe('the text of a list', () => {
   it('refuses a word that only begins with `any`, naming the place', () => {
     expect(syntaxProblem('cell_rule[background, above]{any anyway -> #2}')).toMatch(/^34: /);
     expect(syntaxProblem('cell_rule[background, above]{any any -> #2}')).toBe('parsed');
+    expect(syntaxProblem('cell_rule[background, above]{maybe any -> #2}')).toBe("30: 'yes', 'no' or 'any'");
   });
 });
 

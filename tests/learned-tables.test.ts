@@ -195,8 +195,8 @@ describe('table text', () => {
     const problem = syntaxProblem;
     expect(problem('cell_rule[colour]{#1 -> #2, #1 -> #3}')).toBe('29: a key not already in the table');
     expect(problem('cell_rule[above]{}')).toBe("11: 'colour' or 'background', the first feature of every cell rule");
-    expect(problem('cell_rule[colour, around #1]{#0 9 -> #1}')).toBe('33: a count from 0 to 8');
-    expect(problem('cell_rule[colour, left]{#0 #1 -> #1, #0 wall -> #1}')).toBe("41: a colour such as '#3' or 'edge'");
+    expect(problem('cell_rule[colour, around #1]{#0 9 -> #1}')).toBe("33: a count from 0 to 8, or 'any'");
+    expect(problem('cell_rule[colour, left]{#0 #1 -> #1, #0 wall -> #1}')).toBe("41: a colour such as '#3', 'edge' or 'any'");
     expect(problem('cell_rule[colour, around]{}')).toBe("25: a colour such as '#3'");
     expect(problem('object_rule[by_colour, weight]{}')).toMatch(/^24: an object property/);
     expect(problem('object_rule[by_colour, shape]{xx/x -> keep}')).toMatch(/^31: a shape/);

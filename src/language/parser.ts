@@ -159,20 +159,21 @@ function parseFeatureValue(r: LineReader, values: CellFeatureValues): number {
   }
   switch (values) {
     case 'colour':
+      if (r.peek() !== '#') r.fail("a colour such as '#3', or 'any'");
       return r.colour();
     case 'neighbour':
       if (r.peek() === '#') return r.colour();
-      oneOf(r, ['edge'], "a colour such as '#3' or 'edge'");
+      oneOf(r, ['edge'], "a colour such as '#3', 'edge' or 'any'");
       return EDGE;
     case 'count of 8':
     case 'count of 4': {
       const high = largestFeatureValue(values);
-      return boundedInteger(r, 0, high, `a count from 0 to ${high}`);
+      return boundedInteger(r, 0, high, `a count from 0 to ${high}, or 'any'`);
     }
     case 'yes or no':
-      return oneOf(r, ['no', 'yes'], "'yes' or 'no'") === 'yes' ? 1 : 0;
+      return oneOf(r, ['no', 'yes'], "'yes', 'no' or 'any'") === 'yes' ? 1 : 0;
     case 'parity':
-      return oneOf(r, ['even', 'odd'], "'even' or 'odd'") === 'odd' ? 1 : 0;
+      return oneOf(r, ['even', 'odd'], "'even', 'odd' or 'any'") === 'odd' ? 1 : 0;
   }
 }
 
