@@ -15,7 +15,7 @@ export const learnedRulePrimitives = [
     parameters: ['Grid', 'CellRule'],
     result: 'Grid',
     bits: 4,
-    doc: "Gives every cell the colour the rule's table holds for the cell's features; fails on a key the table lacks.",
+    doc: "Gives every cell the colour the rule's table holds for the cell's features (a rule with `any` in its keys is read in order: the first entry the cell matches); fails on a key the table lacks.",
     example: {
       input: [[1, 0, 0], [0, 1, 0]],
       expression: 'apply_cell_rule(grid, cell_rule[colour, left]{#0 edge -> #0, #0 #0 -> #0, #0 #1 -> #2, #1 edge -> #1, #1 #0 -> #1})',
