@@ -118,6 +118,12 @@ class FeatureCache {
     if (!v) forGrid.set(key, (v = featureOfCells(g, f)));
     return v;
   }
+
+  /** True when the feature takes more than one value over the cells of these grids (else it tells nothing). */
+  varies(grids: readonly Grid[], f: CellFeature): boolean {
+    const first = this.of(grids[0]!, f)[0];
+    return grids.some((g) => this.of(g, f).some((v) => v !== first));
+  }
 }
 
 /** Unpacks a key of `count` features. */
@@ -237,10 +243,7 @@ export function learnCellRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
   if (!sameShapedPairs(puzzle)) return [];
   const cache = new FeatureCache();
   const grids = [...puzzle.train.map((p) => p.input), ...puzzle.testInputs];
-  const atoms = cellAtoms(taskColours(puzzle)).filter((f) => {
-    const first = cache.of(grids[0]!, f)[0];
-    return grids.some((g) => cache.of(g, f).some((v) => v !== first));
-  });
+  const atoms = cellAtoms(taskColours(puzzle)).filter((f) => cache.varies(grids, f));
   const found: LearnedTable[] = [];
   const worksAlone = new Set<number>();
   // Each feature set is tried after the cell's colour and after `background`.
@@ -455,20 +458,20 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
   const cache = new FeatureCache();
   const inputs = puzzle.train.map((p) => p.input);
   const grids = [...inputs, ...puzzle.testInputs];
-  const candidates: CellFeature[] = [...FIRST_FEATURES.map((name) => ({ name })), ...cellAtoms(taskColours(puzzle))].filter((f) => {
-    const first = cache.of(grids[0]!, f)[0];
-    return grids.some((g) => cache.of(g, f).some((v) => v !== first));
-  });
+  const candidates: CellFeature[] = [...FIRST_FEATURES.map((name) => ({ name })), ...cellAtoms(taskColours(puzzle))].filter((f) => cache.varies(grids, f));
   // Cells of all demonstrations in one row: what each becomes, and whether it changes.
   let total = 0;
   for (const g of inputs) total += g.cells.length;
   const target = new Uint8Array(total);
   const changes = new Uint8Array(total);
+  /** Changed cells no condition has claimed yet. */
+  let changesLeft = 0;
   let offset = 0;
   for (const { input, output } of puzzle.train) {
     for (let i = 0; i < input.cells.length; i++) {
       target[offset + i] = output.cells[i]!;
       changes[offset + i] = output.cells[i] !== input.cells[i] ? 1 : 0;
+      changesLeft += changes[offset + i]!;
     }
     offset += input.cells.length;
   }
@@ -489,10 +492,7 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
   const becomes = new Int16Array(16);
   const NONE = -1;
   const UNSET = -2;
-  for (;;) {
-    let left = false;
-    for (let i = 0; i < total; i++) if (!claimed[i] && changes[i]) left = true;
-    if (!left) break;
+  while (changesLeft > 0) {
     if (chosen.length >= MAXIMUM_CONDITIONS) return undefined;
     let best: { feature: number; value: number; colour: number; changed: number; covered: number } | undefined;
     for (let f = 0; f < columns.length; f++) {
@@ -519,7 +519,11 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
     if (!best) return undefined;
     chosen.push(best);
     const column = columns[best.feature]!;
-    for (let i = 0; i < total; i++) if (column[i] === best.value) claimed[i] = 1;
+    for (let i = 0; i < total; i++) {
+      if (claimed[i] || column[i] !== best.value) continue;
+      claimed[i] = 1;
+      changesLeft -= changes[i]!;
+    }
   }
   if (chosen.length === 0) return undefined;
   // The rule's features: the cell's colour first when a condition names it, else `background`;
