@@ -25,6 +25,7 @@ import { fixedCellsLaid, freeCellsClear, layerGoals, leavesFreeCells, meetsLayer
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
+import { CaseSplits } from './case-splits.ts';
 import { TypeTable } from './type-table.ts';
 import { ValueStore, type Candidate } from './value-store.ts';
 
@@ -52,6 +53,8 @@ export interface EnumerationLimits {
    * another budget ends; false stops there.
    */
   readonly lastStepsWhenFull: boolean;
+  /** Join kept grids that answer some demonstrations each by a kept condition (see case-splits.ts). */
+  readonly caseSplits: boolean;
 }
 
 export interface EnumerationStatistics {
@@ -75,6 +78,8 @@ export interface EnumerationStatistics {
   intermediateGrids: number;
   /** Solutions applying a table learned from a kept grid other than the input. */
   intermediateSolutions: number;
+  /** Solutions that choose between two kept grids by a kept condition (case-splits.ts). */
+  caseSplitSolutions: number;
   /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
   sizeRejected: number;
   /** Bytes the search held when it stopped (when last steps began, if they did): kept values (cells counted) and memoised analyses. */
@@ -99,6 +104,8 @@ export interface EnumerationOutcome {
   readonly throughGoals: ReadonlySet<Candidate>;
   /** The solutions applying a table learned from a kept grid other than the input. */
   readonly throughIntermediateTables: ReadonlySet<Candidate>;
+  /** The solutions that choose between two kept grids by a kept condition. */
+  readonly throughCaseSplits: ReadonlySet<Candidate>;
   /** The solutions that break the output size the demonstrations settle (last-resort attempts, listed last). */
   readonly sizeFallbacks: ReadonlySet<Candidate>;
 }
@@ -146,7 +153,7 @@ interface Rule {
 }
 
 export class Enumerator {
-  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, sizeRejected: 0, bytesHeld: 0, fullAtCost: 0, lastStepsFromCost: 0 };
+  readonly statistics: EnumerationStatistics = { candidates: 0, kept: 0, pruned: 0, sectionsPruned: 0, failed: 0, costReached: 0, goals: 0, goalSolutions: 0, intermediateGrids: 0, intermediateSolutions: 0, caseSplitSolutions: 0, sizeRejected: 0, bytesHeld: 0, fullAtCost: 0, lastStepsFromCost: 0 };
   private readonly types = new TypeTable();
   private readonly rules: Rule[];
   private readonly leaves: Candidate[] = [];
@@ -157,6 +164,12 @@ export class Enumerator {
   private readonly pending: Candidate[] = [];
   private readonly throughGoals = new Set<Candidate>();
   private readonly throughIntermediateTables = new Set<Candidate>();
+  private readonly throughCaseSplits = new Set<Candidate>();
+  /** Grids answering some demonstrations, to be joined by a condition; undefined when off or when the library has no choice. */
+  private readonly splits: CaseSplits | undefined;
+  /** The choice between two grids by a condition, and the condition type's id. */
+  private readonly choice: Rule | undefined;
+  private readonly boolType: number;
   private readonly intermediate: IntermediateTables | undefined;
   /** Programs that fit the demonstrations but break the settled output size: attempts only when nothing better comes. */
   private readonly sizeFallbacks: Candidate[] = [];
@@ -243,6 +256,10 @@ export class Enumerator {
     this.inputs = inputs;
     this.layers = limits.goalBits > 0 ? this.buildLayerGoals(limits.goalBits) : [];
     this.statistics.goals = (this.goals?.count ?? 0) + this.layers.length;
+    this.boolType = this.types.id('Bool');
+    this.choice = this.rules.find((r) => !r.production.section && r.resultType === this.gridType && r.argumentTypes.length === 3 && r.argumentTypes[0] === this.boolType && r.argumentTypes[1] === this.gridType && r.argumentTypes[2] === this.gridType && r.production.primitive.name === 'choose');
+    const splits = limits.caseSplits && this.choice ? new CaseSplits(outputs, this.choice.bits) : undefined;
+    this.splits = splits?.open ? splits : undefined;
     this.intermediate = limits.intermediateGrids > 0 ? new IntermediateTables(outputs, productions, { maxGrids: limits.intermediateGrids, maxCost: INTERMEDIATE_MAXIMUM_COST, maxCells: INTERMEDIATE_MAXIMUM_CELLS }) : undefined;
   }
 
@@ -414,6 +431,7 @@ export class Enumerator {
           this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
         }
         this.expandLevel(cost);
+        if (this.splits && !this.lastStepsOnly) this.joinCaseSplits(cost);
         if (cost === MADE_LAYER_MAXIMUM_COST && this.layerCalls.length > 0 && !this.lastStepsOnly) this.addMadeLayers(cost);
         if (PARTIAL_LAYER_LEVELS.includes(cost) && this.layers.length > 0 && !this.lastStepsOnly) this.addPartialLayers(cost);
         this.acceptPending(cost);
@@ -448,6 +466,7 @@ export class Enumerator {
       statistics: this.statistics,
       throughGoals: this.throughGoals,
       throughIntermediateTables: this.throughIntermediateTables,
+      throughCaseSplits: this.throughCaseSplits,
       sizeFallbacks: new Set(this.sizeFallbacks),
     };
   }
@@ -600,6 +619,7 @@ export class Enumerator {
     this.statistics.kept++;
     if (typeId === this.gridType) {
       this.checkSolution(candidate);
+      this.splits?.noteGrid(candidate);
       if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
       // An answer itself needs no laying (laid over the input it would only be a dearer copy).
       if (this.layers.length > 0 && !this.answers(candidate.values)) for (const goal of this.layersMet(candidate.values) ?? []) this.meetLayerGoal(candidate, goal);
@@ -644,6 +664,21 @@ export class Enumerator {
       if (!candidate) continue;
       this.throughIntermediateTables.add(candidate);
       this.pending.push(candidate);
+    }
+  }
+
+  /**
+   * Once every value of up to `cost` bits is kept: each new way to choose, by a kept condition,
+   * between two kept grids that together answer every demonstration, as a pending solution.
+   */
+  private joinCaseSplits(cost: number): void {
+    const conditions: Candidate[] = [];
+    for (let c = 1; c <= cost; c++) for (const condition of this.store.at(this.boolType, c)) conditions.push(condition);
+    for (const split of this.splits!.join(conditions, this.limits.maxCost)) {
+      const joined = this.callOnEveryInput(this.choice!.production, [split.condition, split.whenTrue, split.whenFalse], split.cost);
+      if (!joined || !this.answers(joined.values)) continue;
+      this.throughCaseSplits.add(joined);
+      this.pending.push(joined);
     }
   }
 
@@ -701,7 +736,7 @@ export class Enumerator {
   private accept(candidate: Candidate, pending: boolean): void {
     const values = candidate.values;
     // Pending solutions were met through a goal or a table learned from a kept grid.
-    if (pending && !this.throughIntermediateTables.has(candidate)) this.throughGoals.add(candidate);
+    if (pending && !this.throughIntermediateTables.has(candidate) && !this.throughCaseSplits.has(candidate)) this.throughGoals.add(candidate);
     for (let i = this.trainCount; i < this.examples; i++) {
       if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
         // The demonstrations can agree on a size by chance: kept aside, used only if too few
@@ -717,6 +752,7 @@ export class Enumerator {
     this.solutions.push(candidate);
     if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
     if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;
+    if (this.throughCaseSplits.has(candidate)) this.statistics.caseSplitSolutions++;
     if (this.solutions.length === 1 && this.sizeFallbacks.length === 0) this.firstFound(candidate);
     if (this.solutions.length >= this.limits.attempts) throw new Stop('solved');
   }
@@ -738,6 +774,7 @@ export class Enumerator {
       this.solutions.push(candidate);
       if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
       if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;
+    if (this.throughCaseSplits.has(candidate)) this.statistics.caseSplitSolutions++;
     }
   }
 

@@ -40,6 +40,8 @@ export interface SolveOptions {
    * ends (default on); off stops the search there.
    */
   readonly lastStepsWhenFull?: boolean;
+  /** Join grids that answer some demonstrations each by a condition on the input (default on; off only for measuring it). */
+  readonly caseSplits?: boolean;
   readonly library?: Library;
 }
 
@@ -102,6 +104,7 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     goalBits: options.goalBits ?? 12,
     intermediateGrids: options.intermediateGrids ?? 200,
     lastStepsWhenFull: options.lastStepsWhenFull ?? true,
+    caseSplits: options.caseSplits ?? true,
   }, INPUT_NAME);
   const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
