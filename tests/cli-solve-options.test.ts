@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { solveOptionsFrom, type SharedSolveFlags } from '../src/cli/solve-options.ts';
 
-const flags: SharedSolveFlags = { timeLimit: 20, attempts: 2, jobs: 1, pruning: true, goals: true, intermediateTables: true, lastSteps: true, memoryCap: 1500, retry: true };
+const flags: SharedSolveFlags = { timeLimit: 20, attempts: 2, jobs: 1, pruning: true, goals: true, intermediateTables: true, lastSteps: true, caseSplits: true, memoryCap: 1500, retry: true };
 
 describe('solveOptionsFrom', () => {
   it('leaves goals and intermediate tables at the solver defaults when they are on', () => {

@@ -21,6 +21,8 @@ export interface RunSettings {
   readonly intermediateTables: boolean;
   /** At the memory cap, going on with last steps on the values held (src/search/enumerator.ts); off with --no-last-steps. */
   readonly lastSteps: boolean;
+  /** Choosing between two grids by a condition that tells the demonstrations apart (src/search/case-splits.ts); off with --no-case-splits. */
+  readonly caseSplits: boolean;
   /** Memory cap per worker in megabytes (see memory-cap.ts). */
   readonly memoryCapMb: number;
   /** Largest grid height and width accepted (`pithy --size-cap`). */
@@ -42,6 +44,7 @@ export const SETTING_NAMES: Readonly<Record<keyof RunSettings, string>> = {
   goals: 'goals',
   intermediateTables: 'intermediate tables',
   lastSteps: 'last steps at the memory cap',
+  caseSplits: 'case splits',
   memoryCapMb: 'memory cap (MB)',
   sizeCap: 'size cap',
   priors: 'priors',
@@ -93,6 +96,7 @@ export interface SettingsInput {
   readonly goals?: boolean;
   readonly intermediateTables?: boolean;
   readonly lastSteps?: boolean;
+  readonly caseSplits?: boolean;
   readonly memoryCapMb: number;
   readonly priorsFile?: string;
 }
@@ -106,6 +110,7 @@ export function runSettings(input: SettingsInput): RunSettings {
     goals: input.goals ?? true,
     intermediateTables: input.intermediateTables ?? true,
     lastSteps: input.lastSteps ?? true,
+    caseSplits: input.caseSplits ?? true,
     memoryCapMb: input.memoryCapMb,
     sizeCap: getSizeCap(),
     priors: priorsHash(input.priorsFile),
@@ -121,9 +126,9 @@ function shown(value: unknown): string {
 /**
  * Settings added after results files were first written, with the value a line that does not
  * record them was made under: goals and intermediate tables were on with no way to turn them
- * off; a full store stopped the search (no last steps).
+ * off; a full store stopped the search (no last steps); no case splits were made.
  */
-const WHEN_NOT_RECORDED: Partial<RunSettings> = { goals: true, intermediateTables: true, lastSteps: false };
+const WHEN_NOT_RECORDED: Partial<RunSettings> = { goals: true, intermediateTables: true, lastSteps: false, caseSplits: false };
 
 /** The settings that differ, each as "name: A there, B here" (empty when they agree). */
 export function settingsDifferences(there: Partial<RunSettings>, here: RunSettings, thereName = 'in the file', hereName = 'now'): string[] {

@@ -19,6 +19,8 @@ export interface ReportedSolution {
   readonly throughGoal?: boolean;
   /** True when it applies a table learned from a grid the search made (not the input). */
   readonly throughIntermediateTable?: boolean;
+  /** True when it chooses between two grids by a condition that tells the demonstrations apart (a case split). */
+  readonly throughCaseSplit?: boolean;
 }
 
 export interface TaskReport {

@@ -15,7 +15,7 @@
  * side of an earlier run.
  *
  *   npm run bench:speed -- [--tasks N] [--candidates N] [--dataset DIR] [--programs FILE] [--pruning-at BITS]
- *                          [--no-goals] [--no-intermediate-tables] [--from-results FILE [--which solved|unsolved]]
+ *                          [--no-goals] [--no-intermediate-tables] [--no-case-splits] [--from-results FILE [--which solved|unsolved]]
  */
 import { existsSync, writeFileSync } from 'node:fs';
 import { cpus } from 'node:os';
@@ -49,11 +49,12 @@ function main(): void {
     .option('--programs <file>', 'write each task\'s programs as JSON lines')
     .option('--no-goals', 'switch off working back from the outputs (goals)')
     .option('--no-intermediate-tables', 'switch off learning tables from the grids the search makes')
+    .option('--no-case-splits', 'switch off choosing between two kept grids by a kept condition')
     .option('--from-results <file>', 'take the sample from an eval results file instead (its task files, in its order)')
     .option('--which <part>', 'with --from-results: all, solved or unsolved tasks', 'all')
     .option('--pruning-at <bits>', 'also compare pruning on and off, running every task to this cost level', positiveNumber('--pruning-at', true))
     .parse(process.argv);
-  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number; goals: boolean; intermediateTables: boolean; fromResults?: string; which: string }>();
+  const options = program.opts<{ tasks: number; candidates: number; dataset: string; programs?: string; pruningAt?: number; goals: boolean; intermediateTables: boolean; caseSplits: boolean; fromResults?: string; which: string }>();
   if (!existsSync(options.dataset)) {
     process.stderr.write(`${options.dataset}: not found; the speed probe needs the public training set there (see ../shared/datasets/arc-agi-1-training/SOURCE.md)\n`);
     process.exitCode = 2;
@@ -72,7 +73,7 @@ function main(): void {
     const task = readTaskFile(file);
     const puzzle = puzzleOf(task);
     const before = process.cpuUsage();
-    const result = solvePuzzle(puzzle, { maxCandidates: options.candidates, timeLimitSeconds: 3600, ...(options.goals ? {} : { goalBits: 0 }), ...(options.intermediateTables ? {} : { intermediateGrids: 0 }) });
+    const result = solvePuzzle(puzzle, { maxCandidates: options.candidates, timeLimitSeconds: 3600, ...(options.goals ? {} : { goalBits: 0 }), ...(options.intermediateTables ? {} : { intermediateGrids: 0 }), ...(options.caseSplits ? {} : { caseSplits: false }) });
     const used = process.cpuUsage(before);
     cpuSeconds += (used.user + used.system) / 1e6;
     candidates += result.statistics.candidates;
@@ -140,7 +141,7 @@ function comparePruning(files: readonly string[], bits: number): void {
     for (const pruning of [true, false]) {
       const before = process.cpuUsage();
       // Attempts beyond reach, so every task runs to the same level whether or not it is solved.
-      const result = solvePuzzle(puzzle, { maxBits: bits, pruning, attempts: 1000, extraBits: 1000, goalBits: 0, intermediateGrids: 0, timeLimitSeconds: 3600, maxCandidates: 1e12, maxStoreBytes: 8e9 });
+      const result = solvePuzzle(puzzle, { maxBits: bits, pruning, attempts: 1000, extraBits: 1000, goalBits: 0, intermediateGrids: 0, caseSplits: false, timeLimitSeconds: 3600, maxCandidates: 1e12, maxStoreBytes: 8e9 });
       const used = process.cpuUsage(before);
       const t = pruning ? totals.on : totals.off;
       t.candidates += result.statistics.candidates;

@@ -23,6 +23,7 @@ export interface SharedSolveFlags {
   goals: boolean;
   intermediateTables: boolean;
   lastSteps: boolean;
+  caseSplits: boolean;
   memoryCap: number;
   retry: boolean;
   priors?: string;
@@ -40,6 +41,7 @@ export function addSolveFlags(command: Command): Command {
     .option('--no-goals', 'do not work back from the outputs through inverses or layers (for measuring what goals add)')
     .option('--no-intermediate-tables', 'do not learn tables from the grids the search makes (for measuring what they add)')
     .option('--no-last-steps', 'stop a task at the memory cap instead of going on with last steps on the values held (for measuring what they add)')
+    .option('--no-case-splits', 'do not choose between two grids by a condition that tells the demonstrations apart (for measuring what case splits add)')
     .option('--priors <file>', 'primitive bits from a priors file (written by pithy fit-priors)');
 }
 
@@ -52,6 +54,7 @@ export function solveOptionsFrom(flags: SharedSolveFlags): Omit<SolveOptions, 'l
     ...(flags.goals ? {} : { goalBits: 0 }),
     ...(flags.intermediateTables ? {} : { intermediateGrids: 0 }),
     ...(flags.lastSteps ? {} : { lastStepsWhenFull: false }),
+    ...(flags.caseSplits ? {} : { caseSplits: false }),
   };
 }
 
@@ -65,6 +68,7 @@ export function settingsFrom(flags: SharedSolveFlags & { priors?: string }): Run
     goals: flags.goals,
     intermediateTables: flags.intermediateTables,
     lastSteps: flags.lastSteps,
+    caseSplits: flags.caseSplits,
     memoryCapMb: flags.memoryCap,
     ...(flags.priors !== undefined ? { priorsFile: flags.priors } : {}),
   });

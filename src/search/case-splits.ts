@@ -29,9 +29,9 @@ export class CaseSplits {
   private readonly byAnswered: (Candidate | undefined)[];
   /** Grids noted since the last join: no new pair can come without one. */
   private fresh = false;
-  /** Conditions seen, and [set of demonstrations it holds on] → the cheapest. */
+  /** Conditions seen, and [where it holds, as 1s and 0s over every input] → the cheapest. */
   private conditionsSeen = 0;
-  private readonly conditionByPattern = new Map<number, Candidate>();
+  private readonly conditionByPattern = new Map<string, Candidate>();
   /** Joins already made, by their three parts. */
   private readonly made = new Set<string>();
   private readonly ids = new Map<Candidate, number>();
@@ -40,6 +40,8 @@ export class CaseSplits {
     private readonly outputs: readonly Grid[],
     /** Bits of the choosing call itself. */
     private readonly choiceBits: number,
+    /** Joins dearer than this are not made. */
+    private readonly maxCost: number,
   ) {
     const n = outputs.length;
     this.full = n >= 2 && n <= MAXIMUM_DEMONSTRATIONS ? (1 << n) - 1 : 0;
@@ -63,19 +65,24 @@ export class CaseSplits {
 
   /**
    * The new joins of kept grids and kept conditions (`conditions`: every kept Bool candidate,
-   * cheapest first; those already seen are skipped by count), of at most `maxCost` bits, cheapest
-   * condition per pattern of demonstrations.
+   * cheapest first; those already seen are skipped by count), of at most `maxCost` bits, with the
+   * cheapest condition per pattern of true and false over every input.
    */
-  join(conditions: readonly Candidate[], maxCost: number): CaseSplit[] {
+  join(conditions: readonly Candidate[]): CaseSplit[] {
+    const demonstrations = this.outputs.length;
     let newConditions = false;
     for (let k = this.conditionsSeen; k < conditions.length; k++) {
       const condition = conditions[k]!;
       let holds = 0;
-      for (let i = 0; i < this.outputs.length; i++) if (condition.values[i] === true) holds |= 1 << i;
+      for (let i = 0; i < demonstrations; i++) if (condition.values[i] === true) holds |= 1 << i;
       if (holds === 0 || holds === this.full) continue;
-      const known = this.conditionByPattern.get(holds);
+      // Per pattern on every input, test inputs included: conditions that group the
+      // demonstrations alike but the test inputs differently give different answers.
+      let pattern = '';
+      for (let i = 0; i < condition.values.length; i++) pattern += condition.values[i] === true ? '1' : '0';
+      const known = this.conditionByPattern.get(pattern);
       if (!known || known.cost > condition.cost) {
-        this.conditionByPattern.set(holds, condition);
+        this.conditionByPattern.set(pattern, condition);
         newConditions = true;
       }
     }
@@ -84,12 +91,14 @@ export class CaseSplits {
     this.fresh = false;
     const best = this.cheapestCovering();
     const found: CaseSplit[] = [];
-    for (const [holds, condition] of this.conditionByPattern) {
+    for (const condition of this.conditionByPattern.values()) {
+      let holds = 0;
+      for (let i = 0; i < demonstrations; i++) if (condition.values[i] === true) holds |= 1 << i;
       const whenTrue = best[holds];
       const whenFalse = best[this.full & ~holds];
       if (!whenTrue || !whenFalse) continue;
       const cost = this.choiceBits + condition.cost + whenTrue.cost + whenFalse.cost;
-      if (cost > maxCost) continue;
+      if (cost > this.maxCost) continue;
       const key = `${this.id(condition)},${this.id(whenTrue)},${this.id(whenFalse)}`;
       if (this.made.has(key)) continue;
       this.made.add(key);

@@ -258,7 +258,7 @@ export class Enumerator {
     this.statistics.goals = (this.goals?.count ?? 0) + this.layers.length;
     this.boolType = this.types.id('Bool');
     this.choice = this.rules.find((r) => !r.production.section && r.resultType === this.gridType && r.argumentTypes.length === 3 && r.argumentTypes[0] === this.boolType && r.argumentTypes[1] === this.gridType && r.argumentTypes[2] === this.gridType && r.production.primitive.name === 'choose');
-    const splits = limits.caseSplits && this.choice ? new CaseSplits(outputs, this.choice.bits) : undefined;
+    const splits = limits.caseSplits && this.choice ? new CaseSplits(outputs, this.choice.bits, limits.maxCost) : undefined;
     this.splits = splits?.open ? splits : undefined;
     this.intermediate = limits.intermediateGrids > 0 ? new IntermediateTables(outputs, productions, { maxGrids: limits.intermediateGrids, maxCost: INTERMEDIATE_MAXIMUM_COST, maxCells: INTERMEDIATE_MAXIMUM_CELLS }) : undefined;
   }
@@ -674,7 +674,7 @@ export class Enumerator {
   private joinCaseSplits(cost: number): void {
     const conditions: Candidate[] = [];
     for (let c = 1; c <= cost; c++) for (const condition of this.store.at(this.boolType, c)) conditions.push(condition);
-    for (const split of this.splits!.join(conditions, this.limits.maxCost)) {
+    for (const split of this.splits!.join(conditions)) {
       const joined = this.callOnEveryInput(this.choice!.production, [split.condition, split.whenTrue, split.whenFalse], split.cost);
       if (!joined || !this.answers(joined.values)) continue;
       this.throughCaseSplits.add(joined);

@@ -56,6 +56,8 @@ export interface Solution {
   readonly throughGoal: boolean;
   /** True when it applies a table learned from a grid the search made, not the input (src/search/intermediate-tables.ts). */
   readonly throughIntermediateTable: boolean;
+  /** True when it chooses between two grids the search kept by a condition that tells the demonstrations apart (src/search/case-splits.ts). */
+  readonly throughCaseSplit: boolean;
 }
 
 export interface SolveResult {
@@ -109,12 +111,12 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
   const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c) };
+    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c), throughCaseSplit: outcome.throughCaseSplits.has(c) };
     if (outcome.sizeFallbacks.has(c)) lastResort.add(solution);
     return solution;
   });
   for (const t of tables) {
-    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false });
+    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false, throughCaseSplit: false });
   }
   // By bits, except that programs breaking the settled output size stay behind all others.
   const rank = (s: Solution): number => (lastResort.has(s) ? 1 : 0);
