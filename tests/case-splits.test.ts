@@ -4,15 +4,17 @@
  * force over every pair on random answer sets and conditions; the search is checked on a public
  * task whose rule depends on the input's shape: 7b7f7511 of the ARC-AGI-1 public training set
  * (F. Chollet 2019, Apache-2.0), read from ../shared/datasets/arc-agi-1-training/ and skipped
- * where absent. Its test outputs are read only to score the answer.
+ * where absent. Its test outputs are read only to score the answer. The README's example is
+ * checked on invented signal flags.
  */
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultLibrary } from '../dsl/index.ts';
 import { Grid } from '../src/grid/grid.ts';
 import { runProgram } from '../src/language/interpreter.ts';
+import { applyOperation } from '../src/language/operation.ts';
 import { parseProgram } from '../src/language/parser.ts';
 import type { Type } from '../src/language/types.ts';
 import { Library } from '../src/library/library.ts';
@@ -20,7 +22,7 @@ import { CaseSplits } from '../src/search/case-splits.ts';
 import { solvePuzzle } from '../src/search/solve.ts';
 import type { Candidate } from '../src/search/value-store.ts';
 import { readTaskFile } from '../src/tasks/read-task.ts';
-import { puzzleOf } from '../src/tasks/task.ts';
+import { puzzleOf, type Puzzle } from '../src/tasks/task.ts';
 
 const CHOICE_BITS = 6;
 
@@ -139,3 +141,39 @@ describe.skipIf(!existsSync(task))('the search finds a case split on a public ta
   });
 });
 if (!existsSync(task)) console.log(`tests/case-splits.test.ts: ${task} is absent; the search part is skipped`);
+
+/** Invented for this test and the README: signal flags that read the same mirrored turn a quarter clockwise, the others are hoisted upside down. */
+const flags: Puzzle = (() => {
+  const symmetric = [
+    [[0, 2, 0], [2, 2, 2], [0, 1, 0]],
+    [[3, 0, 0, 3], [3, 3, 3, 3], [0, 4, 4, 0]],
+  ].map((rows) => Grid.fromRows(rows));
+  const other = [
+    [[5, 5, 0], [0, 5, 0], [0, 6, 6]],
+    [[7, 0, 0, 0], [7, 7, 0, 0], [1, 0, 0, 0]],
+  ].map((rows) => Grid.fromRows(rows));
+  const turn = (g: Grid): Grid => applyOperation(defaultLibrary.get('rotate_clockwise')!, [g]) as Grid;
+  const upsideDown = (g: Grid): Grid => applyOperation(defaultLibrary.get('reflect_vertically')!, [g]) as Grid;
+  return {
+    name: 'signal-flags',
+    train: [...symmetric.map((input) => ({ input, output: turn(input) })), ...other.map((input) => ({ input, output: upsideDown(input) }))],
+    testInputs: [Grid.fromRows([[0, 8, 0], [8, 8, 8], [8, 0, 8]])],
+  };
+})();
+
+describe("the README's case split example", () => {
+  const readme = readFileSync(new URL('../README.md', import.meta.url), 'utf8');
+  const blocks = [...readme.matchAll(/```pithy\n([\s\S]*?)```/g)].map((m) => m[1]!.replace(/^ {2}/gm, '')).filter((b) => b.includes('choose('));
+  const library = new Library(['is_symmetric_left_right', 'rotate_clockwise', 'rotate_half', 'reflect_vertically', 'reflect_horizontally', 'choose'].map((n) => defaultLibrary.get(n)!));
+
+  it('is what the search finds on the invented flags through a case split, within a cap too small to reach its cost', () => {
+    expect(blocks.length).toBe(1);
+    const result = solvePuzzle(flags, { library, maxCandidates: 30, timeLimitSeconds: 60 });
+    const first = result.solutions[0]!;
+    expect(first.throughCaseSplit).toBe(true);
+    expect(first.bits).toBeGreaterThan(result.statistics.costReached);
+    expect(first.text).toBe(blocks[0]);
+    // The condition picks the turn for the symmetric test flag.
+    expect(first.testOutputs[0]!.equals(Grid.fromRows([[8, 8, 0], [0, 8, 8], [8, 8, 0]]))).toBe(true);
+  });
+});
