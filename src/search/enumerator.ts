@@ -431,7 +431,7 @@ export class Enumerator {
           this.offer(leaf.typeId, leaf.cost, leaf.values, undefined, leaf.leaf, undefined);
         }
         this.expandLevel(cost);
-        if (this.splits && !this.lastStepsOnly) this.joinCaseSplits(cost);
+        if (this.splits) this.joinCaseSplits(cost);
         if (cost === MADE_LAYER_MAXIMUM_COST && this.layerCalls.length > 0 && !this.lastStepsOnly) this.addMadeLayers(cost);
         if (PARTIAL_LAYER_LEVELS.includes(cost) && this.layers.length > 0 && !this.lastStepsOnly) this.addPartialLayers(cost);
         this.acceptPending(cost);
@@ -447,6 +447,8 @@ export class Enumerator {
       // the best found within the cost limit (also as later attempts beyond a first solution's
       // extra bits: found already, they cost nothing more).
       try {
+        // The level the budget cut short kept or met grids that no join has seen yet.
+        if (this.splits) this.joinCaseSplits(this.level);
         this.acceptPending(this.limits.maxCost);
       } catch (error) {
         if (!(error instanceof Stop)) throw error;
@@ -636,8 +638,12 @@ export class Enumerator {
     const answers = this.answers(values);
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
     const layers = this.layers.length > 0 && !answers ? this.layersMet(values) : undefined;
-    if (!answers && (!goals || goals.length === 0) && !layers) return;
+    // A grid that answers the first demonstration (all a last step has checked before running the
+    // others) and not every one can be one side of a case split.
+    const part = !answers && this.splits !== undefined && (values[0] as Grid).equals(this.outputs[0]!);
+    if (!answers && (!goals || goals.length === 0) && !layers && !part) return;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
+    if (part) this.splits!.noteGrid(candidate);
     this.checkSolution(candidate);
     if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
     if (layers) for (const goal of layers) this.meetLayerGoal(candidate, goal);
