@@ -184,6 +184,14 @@ describe('geometry laws', () => {
     );
   });
 
+  it('settle_objects_down: a shape whose box reaches past another\'s falls past it only once it has moved (found by the law above, worked by hand)', () => {
+    // The hook of five cells and the bar of two both reach row 3; the hook's right cell lies
+    // above the bar, so it may only follow the bar down, and the single cell at the bottom stops it.
+    const g = G([[0, 0, 1, 1], [0, 1, 0, 0], [0, 1, 0, 1], [1, 0, 0, 1], [0, 0, 0, 0], [0, 0, 0, 0], [0, 0, 0, 0], [1, 0, 0, 0]]);
+    const expected = G([[0, 0, 0, 0], [0, 0, 0, 0], [0, 0, 0, 0], [0, 0, 1, 1], [0, 1, 0, 0], [0, 1, 0, 0], [1, 0, 0, 1], [1, 0, 0, 1]]);
+    expect(grid('settle_objects_down', g).toString()).toBe(expected.toString());
+  });
+
   it('split_at_lines returns the two panes either side of a separator column', () => {
     // Panes hold no colour 5, and their first two rows are 1s then 2s, so no pane column is
     // a full line of one colour and no window row is full (the 5 interrupts it).

@@ -7,8 +7,8 @@ import { EMPTY, Grid, newCells } from './grid.ts';
 
 /**
  * Moves every object (non-background cells joined through edges and corners, any colours)
- * in the direction (rowStep, columnStep), one of the four unit steps. Objects nearest that
- * side settle first.
+ * in the direction (rowStep, columnStep), one of the four unit steps, until none can move.
+ * Objects nearest that side move first.
  */
 export function settleObjects(grid: Grid, rowStep: number, columnStep: number): Grid {
   const { height, width } = grid;
@@ -21,35 +21,54 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
     return r + c;
   });
   const order = objects.map((_, i) => i).sort((a, b) => reach[b]! - reach[a]! || a - b);
-  const out = newCells(height * width).fill(background);
-  const taken = newCells(height * width);
-  for (const index of order) {
+  // Objects fall one step at a time, nearest the side first in each round, each blocked by the
+  // border and by every other object where it is then: an object whose box reaches past another's
+  // cannot pass through it, and no cell is ever covered twice.
+  const owner = new Int32Array(height * width);
+  const shift = new Int32Array(objects.length);
+  const place = (index: number, mark: number): void => {
     const o = objects[index]!;
-    const limit = rowStep !== 0 ? height : width;
-    let distance = 0;
-    for (let d = 1; d <= limit; d++) {
+    const d = shift[index]!;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        if (o.cells[r * o.width + c] !== EMPTY) owner[(o.top + r + rowStep * d) * width + (o.left + c + columnStep * d)] = mark;
+      }
+    }
+  };
+  for (let index = 0; index < objects.length; index++) place(index, index + 1);
+  for (let moved = true; moved; ) {
+    moved = false;
+    for (const index of order) {
+      const o = objects[index]!;
+      const d = shift[index]! + 1;
       let fits = true;
       for (let r = 0; r < o.height && fits; r++) {
         for (let c = 0; c < o.width; c++) {
           if (o.cells[r * o.width + c] === EMPTY) continue;
           const gr = o.top + r + rowStep * d;
           const gc = o.left + c + columnStep * d;
-          if (gr < 0 || gr >= height || gc < 0 || gc >= width || taken[gr * width + gc]) {
+          const there = gr < 0 || gr >= height || gc < 0 || gc >= width ? -1 : owner[gr * width + gc]!;
+          if (there !== 0 && there !== index + 1) {
             fits = false;
             break;
           }
         }
       }
-      if (!fits) break;
-      distance = d;
+      if (!fits) continue;
+      place(index, 0);
+      shift[index] = d;
+      place(index, index + 1);
+      moved = true;
     }
+  }
+  const out = newCells(height * width).fill(background);
+  for (let index = 0; index < objects.length; index++) {
+    const o = objects[index]!;
+    const d = shift[index]!;
     for (let r = 0; r < o.height; r++) {
       for (let c = 0; c < o.width; c++) {
         const v = o.cells[r * o.width + c]!;
-        if (v === EMPTY) continue;
-        const i = (o.top + r + rowStep * distance) * width + (o.left + c + columnStep * distance);
-        out[i] = v;
-        taken[i] = 1;
+        if (v !== EMPTY) out[(o.top + r + rowStep * d) * width + (o.left + c + columnStep * d)] = v;
       }
     }
   }
