@@ -68,6 +68,7 @@ function main(): void {
   let solved = 0;
   let throughGoals = 0;
   let throughTables = 0;
+  let throughSplits = 0;
   const lines: string[] = [];
   for (const file of files) {
     const task = readTaskFile(file);
@@ -85,8 +86,9 @@ function main(): void {
       const rightOnes = result.solutions.filter((s) => task.test.every((t, i) => s.testOutputs[i]!.equals(t.output!)));
       if (rightOnes.some((s) => s.throughGoal)) throughGoals++;
       if (rightOnes.some((s) => s.throughIntermediateTable)) throughTables++;
+      if (rightOnes.some((s) => s.throughCaseSplit)) throughSplits++;
     }
-    lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits, throughGoal: s.throughGoal, throughIntermediateTable: s.throughIntermediateTable })) }));
+    lines.push(JSON.stringify({ task: puzzle.name, reason: result.reason, candidates: result.statistics.candidates, programs: result.solutions.map((s) => ({ text: s.text, bits: s.bits, throughGoal: s.throughGoal, throughIntermediateTable: s.throughIntermediateTable, throughCaseSplit: s.throughCaseSplit })) }));
     process.stderr.write('.');
   }
   process.stderr.write('\n');
@@ -98,7 +100,7 @@ function main(): void {
       `CPU seconds: ${cpuSeconds.toFixed(2)}`,
       `candidate evaluations per CPU second: ${Math.round(candidates / cpuSeconds)}`,
       `share pruned as equivalent: ${((100 * pruned) / Math.max(1, candidates)).toFixed(1)}%`,
-      `tasks solved (every test output among the attempts): ${solved} / ${files.length}, ${throughGoals} of them by a program met through a goal${options.goals ? '' : ' (goals off)'}, ${throughTables} by a table learned from a grid the search made${options.intermediateTables ? '' : ' (off)'}`,
+      `tasks solved (every test output among the attempts): ${solved} / ${files.length}, ${throughGoals} of them by a program met through a goal${options.goals ? '' : ' (goals off)'}, ${throughTables} by a table learned from a grid the search made${options.intermediateTables ? '' : ' (off)'}, ${throughSplits} by a case split${options.caseSplits ? '' : ' (off)'}`,
     ].join('\n') + '\n',
   );
   if (options.pruningAt !== undefined) comparePruning(files, options.pruningAt);

@@ -17,6 +17,7 @@ import { FAILURE } from '../language/failure.ts';
 import { literalValue } from '../language/interpreter.ts';
 import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
+import { CaseSplits } from './case-splits.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, sameGrids, type Goal, type GoalStep } from './goals.ts';
@@ -25,7 +26,6 @@ import { fixedCellsLaid, freeCellsClear, layerGoals, leavesFreeCells, meetsLayer
 import { othersInTime } from './level-time.ts';
 import { fitsPrediction, predictOutputSizes, type PredictedSize } from './output-size.ts';
 import { SectionProbes } from './section-probes.ts';
-import { CaseSplits } from './case-splits.ts';
 import { TypeTable } from './type-table.ts';
 import { ValueStore, type Candidate } from './value-store.ts';
 
@@ -741,7 +741,7 @@ export class Enumerator {
   /** Takes a program that fits the demonstrations as an attempt, unless it breaks the settled output size or repeats an attempt. */
   private accept(candidate: Candidate, pending: boolean): void {
     const values = candidate.values;
-    // Pending solutions were met through a goal or a table learned from a kept grid.
+    // Pending solutions were met through a goal, a table learned from a kept grid or a case split.
     if (pending && !this.throughIntermediateTables.has(candidate) && !this.throughCaseSplits.has(candidate)) this.throughGoals.add(candidate);
     for (let i = this.trainCount; i < this.examples; i++) {
       if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
@@ -780,7 +780,7 @@ export class Enumerator {
       this.solutions.push(candidate);
       if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
       if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;
-    if (this.throughCaseSplits.has(candidate)) this.statistics.caseSplitSolutions++;
+      if (this.throughCaseSplits.has(candidate)) this.statistics.caseSplitSolutions++;
     }
   }
 
