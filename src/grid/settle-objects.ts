@@ -1,9 +1,10 @@
 /**
- * Rigid gravity: whole objects move one after another towards a side of the grid until they
- * touch the border or a cell already taken, keeping their shapes.
+ * Rigid gravity: whole objects move towards a side of the grid, a step at a time, until each
+ * touches the border or another object, keeping their shapes.
  */
 import { backgroundColour, components } from './components.ts';
 import { EMPTY, Grid, newCells } from './grid.ts';
+import { paintObjectInto } from './paint-object.ts';
 
 /**
  * Moves every object (non-background cells joined through edges and corners, any colours)
@@ -62,15 +63,6 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
     }
   }
   const out = newCells(height * width).fill(background);
-  for (let index = 0; index < objects.length; index++) {
-    const o = objects[index]!;
-    const d = shift[index]!;
-    for (let r = 0; r < o.height; r++) {
-      for (let c = 0; c < o.width; c++) {
-        const v = o.cells[r * o.width + c]!;
-        if (v !== EMPTY) out[(o.top + r + rowStep * d) * width + (o.left + c + columnStep * d)] = v;
-      }
-    }
-  }
+  for (let index = 0; index < objects.length; index++) paintObjectInto(out, height, width, objects[index]!, undefined, rowStep * shift[index]!, columnStep * shift[index]!);
   return new Grid(height, width, out);
 }

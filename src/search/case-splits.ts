@@ -29,9 +29,9 @@ export class CaseSplits {
   private readonly byAnswered: (Candidate | undefined)[];
   /** Grids noted since the last join: no new pair can come without one. */
   private fresh = false;
-  /** Conditions seen, and [where it holds, as 1s and 0s over every input] → the cheapest. */
+  /** Conditions seen, and [where it holds, as 1s and 0s over every input] → the cheapest, with the demonstrations it holds on. */
   private conditionsSeen = 0;
-  private readonly conditionByPattern = new Map<string, Candidate>();
+  private readonly conditionByPattern = new Map<string, { readonly condition: Candidate; readonly holds: number }>();
   /** Joins already made, by their three parts. */
   private readonly made = new Set<string>();
   private readonly ids = new Map<Candidate, number>();
@@ -81,8 +81,8 @@ export class CaseSplits {
       let pattern = '';
       for (let i = 0; i < condition.values.length; i++) pattern += condition.values[i] === true ? '1' : '0';
       const known = this.conditionByPattern.get(pattern);
-      if (!known || known.cost > condition.cost) {
-        this.conditionByPattern.set(pattern, condition);
+      if (!known || known.condition.cost > condition.cost) {
+        this.conditionByPattern.set(pattern, { condition, holds });
         newConditions = true;
       }
     }
@@ -91,9 +91,7 @@ export class CaseSplits {
     this.fresh = false;
     const best = this.cheapestCovering();
     const found: CaseSplit[] = [];
-    for (const condition of this.conditionByPattern.values()) {
-      let holds = 0;
-      for (let i = 0; i < demonstrations; i++) if (condition.values[i] === true) holds |= 1 << i;
+    for (const { condition, holds } of this.conditionByPattern.values()) {
       const whenTrue = best[holds];
       const whenFalse = best[this.full & ~holds];
       if (!whenTrue || !whenFalse) continue;
