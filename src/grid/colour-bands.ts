@@ -4,6 +4,7 @@
  * column).
  */
 import { Grid } from './grid.ts';
+import { sortSmall } from './small-sort.ts';
 
 /** Work array: per colour, cell count, sum of rows, sum of columns. */
 const sums = new Float64Array(30);
@@ -36,7 +37,7 @@ export function colourBands(g: Grid): Grid | null {
   };
   const across = spread(meanColumn) > spread(meanRow);
   const key = across ? meanColumn : meanRow;
-  colours.sort((a, b) => key(a) - key(b) || a - b);
+  sortSmall(colours, (a, b) => key(a) - key(b) || a - b);
   const out = Uint8Array.from(colours);
   return across ? new Grid(1, colours.length, out) : new Grid(colours.length, 1, out);
 }

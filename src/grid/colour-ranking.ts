@@ -7,6 +7,7 @@ import { backgroundColour, colourCounts } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { Grid, shapeAllowed, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
+import { sortSmall } from './small-sort.ts';
 
 /**
  * The colour present in the grid with the most cells (`most` true) or the fewest, the lowest on
@@ -37,7 +38,7 @@ export function countColours(g: Grid): number {
 function coloursByCount(counts: Uint32Array, skip: number): number[] {
   const colours: number[] = [];
   for (let c = 0; c < 10; c++) if (c !== skip && counts[c]! > 0) colours.push(c);
-  return colours.sort((a, b) => counts[b]! - counts[a]! || a - b);
+  return sortSmall(colours, (a, b) => counts[b]! - counts[a]! || a - b);
 }
 
 /** A one-column grid of the colours other than the background, most cells first (lower colour first on ties); null when there is none. */

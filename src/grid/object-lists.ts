@@ -7,6 +7,7 @@
  * apply, and then the choice cannot be made either: the function gives null.
  */
 import type { GridObject } from './grid-object.ts';
+import { sortSmall } from './small-sort.ts';
 
 type Objects = readonly GridObject[];
 
@@ -66,6 +67,6 @@ export function sortObjects<Other>(objects: Objects, key: (o: GridObject) => num
     keys[i] = k;
     order[i] = i;
   }
-  order.sort((a, b) => keys[a]! - keys[b]! || a - b);
+  sortSmall(order, (a, b) => keys[a]! - keys[b]! || a - b);
   return order.map((i) => objects[i]!);
 }

@@ -5,6 +5,7 @@
 import { backgroundColour, components } from './components.ts';
 import { Grid, copyCells } from './grid.ts';
 import { paintObjectInto } from './paint-object.ts';
+import { sortSmall } from './small-sort.ts';
 
 /** The first largest object gets `large`, the first smallest `small`; null with fewer than two objects. */
 export function recolourLargestAndSmallest(g: Grid, large: number, small: number): Grid | null {
@@ -30,7 +31,9 @@ export function recolourLargestAndSmallest(g: Grid, large: number, small: number
 export function recolourBySizeRank(g: Grid): Grid | null {
   const objects = components(g, { diagonal: false, multicolour: false, background: backgroundColour(g) });
   if (objects.length === 0) return null;
-  const sizes = [...new Set(objects.map((o) => o.size))].sort((a, b) => b - a);
+  const sizes: number[] = [];
+  for (const o of objects) if (!sizes.includes(o.size)) sizes.push(o.size);
+  sortSmall(sizes, (a, b) => b - a);
   if (sizes.length > 9) return null;
   const cells = copyCells(g.cells);
   for (const o of objects) paintObjectInto(cells, g.height, g.width, o, sizes.indexOf(o.size) + 1);
