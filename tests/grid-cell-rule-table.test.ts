@@ -31,6 +31,14 @@ describe('featureOfCells', () => {
     expect(values({ name: 'row_parity' })).toEqual([0, 0, 0, 1, 1, 1]);
     expect(values({ name: 'column_parity' })).toEqual([0, 1, 0, 0, 1, 0]);
   });
+
+  it('counts the parities from the bottom and right too: the far end is even', () => {
+    // Two rows of four: from the left the columns run even, odd, even, odd; from the right the
+    // last column is even, so they run odd, even, odd, even; the bottom row is even from below.
+    const g = G([[1, 2, 3, 4], [5, 6, 7, 8]]);
+    expect(Array.from(featureOfCells(g, { name: 'column_parity_from_right' }))).toEqual([1, 0, 1, 0, 1, 0, 1, 0]);
+    expect(Array.from(featureOfCells(g, { name: 'row_parity_from_bottom' }))).toEqual([1, 1, 1, 1, 0, 0, 0, 0]);
+  });
 });
 
 describe('featureOfCells: enclosed and on_border', () => {

@@ -1,9 +1,10 @@
 /**
  * Cell rules: a table that gives every output cell's colour from a few features of the input
  * cell and its neighbourhood (its colour, a neighbour's colour, how many neighbours have a
- * colour, whether its row or column holds a colour, the parity of its row or column, whether
- * it is a background cell enclosed by other colours, whether it lies on the grid's border, the
- * first colour other than the background met looking up, down, left or right from it).
+ * colour, whether its row or column holds a colour, the parity of its row or column counted
+ * from the top or left or from the bottom or right, whether it is a background cell enclosed by
+ * other colours, whether it lies on the grid's border, the first colour other than the background
+ * met looking up, down, left or right from it).
  *
  * A rule is a list of features, the first the cell's own colour or whether the cell is the
  * grid's background, and a table from keys (one value per feature) to colours or `keep` (the
@@ -58,6 +59,8 @@ export const CELL_FEATURE_NAMES = [
   'column_holds',
   'row_parity',
   'column_parity',
+  'row_parity_from_bottom',
+  'column_parity_from_right',
   'enclosed',
   'on_border',
   'sees_above',
@@ -134,6 +137,8 @@ export function featureValues(name: CellFeatureName): CellFeatureValues {
       return 'yes or no';
     case 'row_parity':
     case 'column_parity':
+    case 'row_parity_from_bottom':
+    case 'column_parity_from_right':
       return 'parity';
     default:
       return 'neighbour';
@@ -192,6 +197,12 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
       return out;
     case 'column_parity':
       for (let i = 0; i < cells.length; i++) out[i] = (i % width) & 1;
+      return out;
+    case 'row_parity_from_bottom':
+      for (let r = 0; r < height; r++) out.fill((height - 1 - r) & 1, r * width, (r + 1) * width);
+      return out;
+    case 'column_parity_from_right':
+      for (let i = 0; i < cells.length; i++) out[i] = (width - 1 - (i % width)) & 1;
       return out;
     case 'sees_above':
     case 'sees_below':

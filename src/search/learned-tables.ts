@@ -8,7 +8,7 @@
  * Cell rules: every demonstration pair must keep its shape. The features tried are the cell's
  * colour plus one or two of: a neighbour's colour (8 directions), how many of the 8 or 4
  * neighbours have a colour, whether the cell's row or column holds a colour (for each colour of
- * the task), the parity of its row or column, whether it is enclosed, whether it lies on the
+ * the task), the parity of its row or column (from either end), whether it is enclosed, whether it lies on the
  * border, the first colour other than the background met looking up, down, left or right; and the
  * colour plus all 4 or all 8 neighbours. Besides these exact tables, one cell list (a rule with
  * `any` in its keys, read in order) is learned greedily from single conditions (learnCellList).
@@ -90,7 +90,7 @@ function compareKeys(a: readonly number[], b: readonly number[]): number {
 function cellAtoms(colours: readonly number[]): CellFeature[] {
   const atoms: CellFeature[] = NEIGHBOURS_8.map((name) => ({ name }));
   for (const name of ['around', 'beside', 'row_holds', 'column_holds'] as const) for (const colour of colours) atoms.push({ name, colour });
-  atoms.push({ name: 'row_parity' }, { name: 'column_parity' }, { name: 'enclosed' }, { name: 'on_border' });
+  atoms.push({ name: 'row_parity' }, { name: 'column_parity' }, { name: 'row_parity_from_bottom' }, { name: 'column_parity_from_right' }, { name: 'enclosed' }, { name: 'on_border' });
   for (const name of ['sees_above', 'sees_below', 'sees_left', 'sees_right'] as const) atoms.push({ name });
   return atoms;
 }

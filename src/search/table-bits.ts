@@ -43,7 +43,7 @@ export function colourBits(k: number): number {
 
 /** Bits for the first feature of a cell rule (the cell's colour or whether it is background). */
 export const FIRST_FEATURE_BITS = 1;
-/** Bits for choosing a feature after the first (20 kinds), and a colour it names. */
+/** Bits for choosing a feature after the first (22 kinds), and a colour it names. */
 export const FEATURE_CHOICE_BITS = 5;
 export const FEATURE_COLOUR_BITS = 4;
 /** Bits for an object rule's way of cutting into objects (4) and its property (16). */
