@@ -11,7 +11,7 @@
  */
 import { getHeapStatistics } from 'node:v8';
 import { analysisBytesSoFar, backgroundColour } from '../grid/components.ts';
-import type { Grid } from '../grid/grid.ts';
+import { Grid } from '../grid/grid.ts';
 import type { Expression } from '../language/ast.ts';
 import { FAILURE } from '../language/failure.ts';
 import { literalValue } from '../language/interpreter.ts';
@@ -567,6 +567,7 @@ export class Enumerator {
       return;
     }
     const call = (this.callScratch[arity] ??= new Array<unknown>(arity));
+    const gridResult = rule.resultType === this.gridType;
     let from = 0;
     if (this.lastStepsOnly && this.trainCount > 0) {
       // Nothing is kept now, so a grid matters only as an answer or a goal's argument: one that
@@ -588,7 +589,10 @@ export class Enumerator {
         stats.failed++;
         return;
       }
-      values[i] = v;
+      // A grid equal to the grid it was made from is that grid: kept values then hold fewer objects,
+      // and comparing them with kept ones ends at the first check.
+      const first = call[0];
+      values[i] = gridResult && first !== v && first instanceof Grid && first.equals(v as Grid) ? first : v;
     }
     this.offer(rule.resultType, cost, values, rule.production, undefined, undefined);
   }
