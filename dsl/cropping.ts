@@ -36,6 +36,7 @@ export const croppingPrimitives = [
       output: [[4, 4], [1, 4]],
     },
     run: cropToObject,
+    cropsAt: (o) => ({ top: o.top, left: o.left, height: o.height, width: o.width }),
   }),
   primitive({
     name: 'object_picture',

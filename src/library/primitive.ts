@@ -68,6 +68,22 @@ export interface Primitive extends Operation {
    * result holds the top's cell wherever that is not the colour, the bottom's cell elsewhere.
    */
   readonly laysOver?: boolean;
+  /**
+   * For a primitive that cuts out of its first argument (a grid) the rectangle its other
+   * arguments name: that rectangle, from those arguments (null when they name none). The search
+   * then tests kept grids for the outputs at the rectangles kept values name (crop goals,
+   * src/search/crop-goals.ts). Law: when the rectangle lies inside the grid, the call's result is
+   * the grid's cells under it.
+   */
+  readonly cropsAt?: (...rest: never[]) => Rectangle | null;
+}
+
+/** A rectangle of a grid: its first row and column, and its height and width. */
+export interface Rectangle {
+  readonly top: number;
+  readonly left: number;
+  readonly height: number;
+  readonly width: number;
 }
 
 /** Declares a primitive with its implementation typed from its signature. */
@@ -82,6 +98,7 @@ export function primitive<const P extends readonly Type[], const R extends Type>
   run: (...args: ValuesOf<P>) => ValueOf<R> | Failure | null;
   inverse?: (wanted: ValueOf<R>, ...rest: ValuesOf<Rest<P>>) => ValueOf<P[0]> | null;
   laysOver?: boolean;
+  cropsAt?: (...rest: ValuesOf<Rest<P>>) => Rectangle | null;
 }): Primitive {
   return record as unknown as Primitive;
 }

@@ -18,6 +18,7 @@ import { literalValue } from '../language/interpreter.ts';
 import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
 import { CaseSplits } from './case-splits.ts';
+import { CropGoals, type CropGoal } from './crop-goals.ts';
 import type { Constant } from './constants.ts';
 import type { Production } from './productions.ts';
 import { GoalTable, sameGrids, type Goal, type GoalStep } from './goals.ts';
@@ -115,6 +116,9 @@ const INTERMEDIATE_MAXIMUM_COST = 22;
 /** Cells learned from per task (over all values of all kept grids tried): a second or two of work at most. */
 const INTERMEDIATE_MAXIMUM_CELLS = 100_000;
 
+/** At most this many crop goals (crop-goals.ts): each is tested on every grid kept after it, and it on every grid kept before. */
+const CROP_GOALS = 48;
+
 /** With only last steps tried, the share of the JavaScript heap limit at which the search stops all the same. */
 const HEAP_SHARE_WHEN_FULL = 0.8;
 
@@ -176,6 +180,9 @@ export class Enumerator {
   private readonly goals: GoalTable | undefined;
   /** Goals through a layering call with the input, or a cheap made grid, as one layer (layer-goals.ts); empty with goals off. */
   private readonly layers: LayerGoal[];
+  /** Crop goals (crop-goals.ts), and the productions that cut at a rectangle another argument names. */
+  private readonly crops: CropGoals | undefined;
+  private readonly cropRules: Rule[];
   /** Each layering call and see-through colour the layer goals use (also for made layers). */
   private readonly layerCalls: { production: Production; transparent: Candidate }[] = [];
   private readonly inputs: readonly Grid[];
@@ -256,6 +263,11 @@ export class Enumerator {
     this.inputs = inputs;
     this.layers = limits.goalBits > 0 ? this.buildLayerGoals(limits.goalBits) : [];
     this.statistics.goals = (this.goals?.count ?? 0) + this.layers.length;
+    this.cropRules =
+      limits.goalBits > 0 && this.trainCount > 0
+        ? this.rules.filter((r) => !r.production.section && r.production.primitive.cropsAt && r.resultType === this.gridType && r.argumentTypes.length === 2 && r.argumentTypes[0] === this.gridType)
+        : [];
+    this.crops = this.cropRules.length > 0 ? new CropGoals(outputs, this.examples, CROP_GOALS) : undefined;
     this.boolType = this.types.id('Bool');
     this.choice = this.rules.find((r) => !r.production.section && r.resultType === this.gridType && r.argumentTypes.length === 3 && r.argumentTypes[0] === this.boolType && r.argumentTypes[1] === this.gridType && r.argumentTypes[2] === this.gridType && r.production.primitive.name === 'choose');
     const splits = limits.caseSplits && this.choice ? new CaseSplits(outputs, this.choice.bits, limits.maxCost) : undefined;
@@ -403,6 +415,13 @@ export class Enumerator {
   private layersMet(values: readonly unknown[]): LayerGoal[] | undefined {
     let met: LayerGoal[] | undefined;
     for (const goal of this.layers) if (this.meetsEverywhere(goal, values)) (met ??= []).push(goal);
+    return met;
+  }
+
+  /** The crop goals these grid values meet (undefined when none). */
+  private cropsMet(values: readonly unknown[]): CropGoal[] | undefined {
+    let met: CropGoal[] | undefined;
+    for (const goal of this.crops!.goals) if (this.crops!.meets(goal, values)) (met ??= []).push(goal);
     return met;
   }
 
@@ -578,7 +597,7 @@ export class Enumerator {
         stats.failed++;
         return;
       }
-      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid) && !this.layerMayMeetFirst(first as Grid)) return;
+      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid) && !this.layerMayMeetFirst(first as Grid) && !this.crops?.mayMeetFirst(first as Grid)) return;
       values[0] = first;
       from = 1;
     }
@@ -629,9 +648,28 @@ export class Enumerator {
       if (this.goals) for (const goal of this.goals.matching(candidate.values, this.trainCount)) this.meetGoal(candidate, goal);
       // An answer itself needs no laying (laid over the input it would only be a dearer copy).
       if (this.layers.length > 0 && !this.answers(candidate.values)) for (const goal of this.layersMet(candidate.values) ?? []) this.meetLayerGoal(candidate, goal);
+      if (this.crops) for (const goal of this.crops.goals) if (this.crops.meets(goal, candidate.values)) this.meetCropGoal(candidate, goal);
       // The input's own tables are constants of the search already.
       if (production && this.intermediate?.open) this.learnTables(candidate);
+    } else if (this.crops?.open) {
+      for (const rule of this.cropRules) if (rule.argumentTypes[1] === typeId) this.addCropGoal(rule.production, candidate);
     }
+  }
+
+  /** A crop goal from a kept value that names a rectangle, when it makes one: every grid kept so far is tested against it at once. */
+  private addCropGoal(production: Production, argument: Candidate): void {
+    const goal = this.crops!.consider(production, argument);
+    if (!goal) return;
+    this.statistics.goals++;
+    for (let c = 1; c <= this.level; c++) {
+      for (const found of this.store.at(this.gridType, c)) if (this.crops!.meets(goal, found.values)) this.meetCropGoal(found, goal);
+    }
+  }
+
+  /** Keeps a kept grid that holds the outputs at a crop goal's rectangles, cut there, as a pending solution. */
+  private meetCropGoal(found: Candidate, goal: CropGoal): void {
+    const cut = this.callOnEveryInput(goal.production, [found, goal.argument], found.cost + goal.cost);
+    if (cut && this.answers(cut.values)) this.pending.push(cut);
   }
 
   /**
@@ -642,15 +680,17 @@ export class Enumerator {
     const answers = this.answers(values);
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
     const layers = this.layers.length > 0 && !answers ? this.layersMet(values) : undefined;
+    const crops = this.crops && this.crops.goals.length > 0 ? this.cropsMet(values) : undefined;
     // A grid that answers the first demonstration (all a last step has checked before running the
     // others) and not every one can be one side of a case split.
     const part = !answers && this.splits !== undefined && (values[0] as Grid).equals(this.outputs[0]!);
-    if (!answers && (!goals || goals.length === 0) && !layers && !part) return;
+    if (!answers && (!goals || goals.length === 0) && !layers && !part && !crops) return;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
     if (part) this.splits!.noteGrid(candidate);
     this.checkSolution(candidate);
     if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
     if (layers) for (const goal of layers) this.meetLayerGoal(candidate, goal);
+    if (crops) for (const goal of crops) this.meetCropGoal(candidate, goal);
   }
 
   /** True when the grid meets some layer goal on the first demonstration. */

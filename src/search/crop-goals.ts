@@ -1,0 +1,108 @@
+/**
+ * Crop goals: working back through a cut whose rectangle another argument names. A call such as
+ * `crop_to_object(grid, object)` cuts out of its grid the rectangle its other argument gives (the
+ * object's box), so it cannot be run backwards to one grid: outside the rectangle the grid may
+ * hold anything. But once a kept value names, on every demonstration, a rectangle the size of
+ * that demonstration's output, every kept grid can be tested cell by cell: does it hold each
+ * output at that rectangle? One that does answers the task when cut there. The call is then found
+ * as soon as the dearer of its two arguments is kept, not when the search reaches the sum of
+ * their bits and the call's; like every goal's, the solution waits until every cheaper cost is
+ * tried.
+ */
+import type { Grid } from '../grid/grid.ts';
+import type { Rectangle } from '../library/primitive.ts';
+import type { Production } from './productions.ts';
+import type { Candidate } from './value-store.ts';
+
+/** A cut of the outputs' size from kept grids, at the rectangles a kept value names. */
+export interface CropGoal {
+  readonly production: Production;
+  /** The call's second argument, which names the rectangle. */
+  readonly argument: Candidate;
+  /** Top, left, height, width of the rectangle on each demonstration, in turn. */
+  readonly rectangles: Int32Array;
+  /** Bits of the call and its second argument (the cut grid's own are added when met). */
+  readonly cost: number;
+}
+
+export class CropGoals {
+  readonly goals: CropGoal[] = [];
+  /** The rectangles on every input (test inputs too) of each goal taken, as text: two values naming the same ones make one goal. */
+  private readonly seen = new Set<string>();
+
+  constructor(
+    private readonly outputs: readonly Grid[],
+    private readonly examples: number,
+    private readonly maxGoals: number,
+  ) {}
+
+  /** Room for more goals. */
+  get open(): boolean {
+    return this.goals.length < this.maxGoals;
+  }
+
+  /**
+   * A new goal when the value names, on every demonstration, a rectangle of that output's size,
+   * and a rectangle on every test input (else the call could give no answer there); undefined
+   * otherwise, or when an earlier value names the same rectangles everywhere.
+   */
+  consider(production: Production, argument: Candidate): CropGoal | undefined {
+    if (!this.open) return undefined;
+    const cropsAt = production.primitive.cropsAt as ((...rest: unknown[]) => Rectangle | null) | undefined;
+    if (!cropsAt) return undefined;
+    const train = this.outputs.length;
+    const rectangles = new Int32Array(4 * train);
+    let key = '';
+    for (let i = 0; i < this.examples; i++) {
+      const r = cropsAt(argument.values[i]);
+      if (!r) return undefined;
+      if (i < train) {
+        const output = this.outputs[i]!;
+        if (r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
+        rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
+      }
+      key += `${r.top},${r.left},${r.height},${r.width};`;
+    }
+    if (this.seen.has(key)) return undefined;
+    this.seen.add(key);
+    const goal: CropGoal = { production, argument, rectangles, cost: production.bits + argument.cost };
+    this.goals.push(goal);
+    return goal;
+  }
+
+  /** True when the grids hold each demonstration's output at the goal's rectangle (the first cell of each checked first). */
+  meets(goal: CropGoal, values: readonly unknown[]): boolean {
+    const train = this.outputs.length;
+    for (let i = 0; i < train; i++) if (!this.cornerMatches(goal, i, values[i] as Grid)) return false;
+    for (let i = 0; i < train; i++) if (!this.holds(goal, i, values[i] as Grid)) return false;
+    return true;
+  }
+
+  /** True when some goal's rectangle of this grid starts with the first demonstration output's first cell (a cheap first test). */
+  mayMeetFirst(grid: Grid): boolean {
+    for (const goal of this.goals) if (this.cornerMatches(goal, 0, grid)) return true;
+    return false;
+  }
+
+  private cornerMatches(goal: CropGoal, i: number, grid: Grid): boolean {
+    const r = goal.rectangles;
+    const top = r[4 * i]!;
+    const left = r[4 * i + 1]!;
+    if (top + r[4 * i + 2]! > grid.height || left + r[4 * i + 3]! > grid.width) return false;
+    return grid.cells[top * grid.width + left] === this.outputs[i]!.cells[0];
+  }
+
+  private holds(goal: CropGoal, i: number, grid: Grid): boolean {
+    const r = goal.rectangles;
+    const top = r[4 * i]!;
+    const left = r[4 * i + 1]!;
+    const output = this.outputs[i]!;
+    const { height, width, cells } = output;
+    const source = grid.cells;
+    for (let row = 0; row < height; row++) {
+      const from = (top + row) * grid.width + left;
+      for (let c = 0; c < width; c++) if (source[from + c] !== cells[row * width + c]) return false;
+    }
+    return true;
+  }
+}
