@@ -21,6 +21,12 @@ export interface CropGoal {
   readonly argument: Candidate;
   /** Top, left, height, width of the rectangle on each demonstration, in turn. */
   readonly rectangles: Int32Array;
+  /**
+   * Row and column, within each demonstration's output, of a cell of the colour that output has
+   * least: compared first, it turns most grids away at one read (a corner cell is usually
+   * background, as is the grid there).
+   */
+  readonly probes: Int32Array;
   /** Bits of the call and its second argument (the cut grid's own are added when met). */
   readonly cost: number;
 }
@@ -52,6 +58,7 @@ export class CropGoals {
     if (!cropsAt) return undefined;
     const train = this.outputs.length;
     const rectangles = new Int32Array(4 * train);
+    const probes = new Int32Array(2 * train);
     let key = '';
     for (let i = 0; i < this.examples; i++) {
       const r = cropsAt(argument.values[i]);
@@ -60,36 +67,43 @@ export class CropGoals {
         const output = this.outputs[i]!;
         if (r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
         rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
+        const probe = rarestCell(output);
+        probes[2 * i] = (probe / output.width) | 0;
+        probes[2 * i + 1] = probe % output.width;
       }
       key += `${r.top},${r.left},${r.height},${r.width};`;
     }
     if (this.seen.has(key)) return undefined;
     this.seen.add(key);
-    const goal: CropGoal = { production, argument, rectangles, cost: production.bits + argument.cost };
+    const goal: CropGoal = { production, argument, rectangles, probes, cost: production.bits + argument.cost };
     this.goals.push(goal);
     return goal;
   }
 
-  /** True when the grids hold each demonstration's output at the goal's rectangle (the first cell of each checked first). */
+  /** True when the grids hold each demonstration's output at the goal's rectangle (each probe cell checked first). */
   meets(goal: CropGoal, values: readonly unknown[]): boolean {
     const train = this.outputs.length;
-    for (let i = 0; i < train; i++) if (!this.cornerMatches(goal, i, values[i] as Grid)) return false;
+    for (let i = 0; i < train; i++) if (!this.probeMatches(goal, i, values[i] as Grid)) return false;
     for (let i = 0; i < train; i++) if (!this.holds(goal, i, values[i] as Grid)) return false;
     return true;
   }
 
-  /** True when some goal's rectangle of this grid starts with the first demonstration output's first cell (a cheap first test). */
+  /** True when some goal's rectangle of this grid holds the first demonstration's output. */
   mayMeetFirst(grid: Grid): boolean {
-    for (const goal of this.goals) if (this.cornerMatches(goal, 0, grid)) return true;
+    for (const goal of this.goals) if (this.probeMatches(goal, 0, grid) && this.holds(goal, 0, grid)) return true;
     return false;
   }
 
-  private cornerMatches(goal: CropGoal, i: number, grid: Grid): boolean {
+  /** True when the rectangle lies in the grid and the grid holds the output's probe cell there. */
+  private probeMatches(goal: CropGoal, i: number, grid: Grid): boolean {
     const r = goal.rectangles;
     const top = r[4 * i]!;
     const left = r[4 * i + 1]!;
     if (top + r[4 * i + 2]! > grid.height || left + r[4 * i + 3]! > grid.width) return false;
-    return grid.cells[top * grid.width + left] === this.outputs[i]!.cells[0];
+    const row = goal.probes[2 * i]!;
+    const column = goal.probes[2 * i + 1]!;
+    const output = this.outputs[i]!;
+    return grid.cells[(top + row) * grid.width + left + column] === output.cells[row * output.width + column];
   }
 
   private holds(goal: CropGoal, i: number, grid: Grid): boolean {
@@ -105,4 +119,13 @@ export class CropGoals {
     }
     return true;
   }
+}
+
+/** Index of the first cell of the colour the grid has least of. */
+function rarestCell(g: Grid): number {
+  const counts = new Uint32Array(10);
+  for (const v of g.cells) counts[v]!++;
+  let best = 0;
+  for (let i = 1; i < g.cells.length; i++) if (counts[g.cells[i]!]! < counts[g.cells[best]!]!) best = i;
+  return best;
 }
