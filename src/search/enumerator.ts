@@ -71,7 +71,7 @@ export interface EnumerationStatistics {
   failed: number;
   /** Highest cost level finished. */
   costReached: number;
-  /** Goals worked back from the outputs through inverses. */
+  /** Goals: worked back from the outputs through inverses, layer goals, crop goals. */
   goals: number;
   /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls). */
   goalSolutions: number;
@@ -610,8 +610,8 @@ export class Enumerator {
       }
       // A grid equal to the grid it was made from is that grid: kept values then hold fewer objects,
       // and comparing them with kept ones ends at the first check.
-      const first = call[0];
-      values[i] = gridResult && first !== v && first instanceof Grid && first.equals(v as Grid) ? first : v;
+      const source = call[0];
+      values[i] = gridResult && source !== v && source instanceof Grid && source.equals(v as Grid) ? source : v;
     }
     this.offer(rule.resultType, cost, values, rule.production, undefined, undefined);
   }
