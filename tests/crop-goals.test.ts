@@ -1,7 +1,8 @@
 /**
  * Crop goals: every primitive that says which rectangle it cuts does cut that rectangle
- * (fast-check), a goal's cell test agrees with running the cut, and values naming the same
- * rectangles everywhere make one goal.
+ * (fast-check), a goal's cell test agrees with running the cut, values naming the same
+ * rectangles everywhere make one goal, and in the search a cut is met through a crop goal below
+ * its own cost level on an invented task (fenced gardens).
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
@@ -11,7 +12,9 @@ import { Grid } from '../src/grid/grid.ts';
 import type { GridObject } from '../src/grid/grid-object.ts';
 import { applyOperation } from '../src/language/operation.ts';
 import type { Primitive, Rectangle } from '../src/library/primitive.ts';
+import { Library } from '../src/library/library.ts';
 import { CropGoals } from '../src/search/crop-goals.ts';
+import { solvePuzzle } from '../src/search/solve.ts';
 import type { Production } from '../src/search/productions.ts';
 import type { Candidate } from '../src/search/value-store.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
@@ -131,5 +134,35 @@ describe('CropGoals', () => {
     expect(goals.consider(production, leaf([bar, bar], 2))).toBeUndefined();
     expect(goals.meets(goals.goals[0]!, [g, g])).toBe(true);
     expect(goals.meets(goals.goals[0]!, [Grid.filled(4, 4, 3), g])).toBe(false);
+  });
+});
+
+describe('crop goals in the search', () => {
+  const G = (rows: string[]): Grid => Grid.fromRows(rows.map((r) => [...r].map(Number)));
+  // Invented: a fenced garden (colour 2) on a field; seedlings (1) and stones (3) lie inside and
+  // out. The picture wanted is the garden's plot with only its seedlings left.
+  const train = [
+    { input: G(['100000', '022220', '021020', '023120', '022220', '000310']), output: G(['0000', '0100', '0010', '0000']) },
+    { input: G(['3000001', '0222220', '0210120', '0200020', '0222220', '1000030', '0001000']), output: G(['00000', '01010', '00000', '00000']) },
+    { input: G(['01030', '00000', '22200', '21200', '22201']), output: G(['000', '010', '000']) },
+  ];
+  const test = { input: G(['1000000', '0022222', '0021012', '0023102', '0022222', '3000010']), output: G(['00000', '01010', '00100', '00000']) };
+  const puzzle = { name: 'gardens', train, testInputs: [test.input] };
+  const library = new Library(['keep_colour', 'objects_by_colour', 'largest_object', 'crop_to_object'].map((n) => defaultLibrary.get(n)!));
+  // The cap stops the plain search before the level the whole program costs.
+  const CAP = 20;
+
+  it('the cut of the seedlings at the fence\'s box is met through a crop goal below its own cost level, and gives the test output', () => {
+    const result = solvePuzzle(puzzle, { library, maxCandidates: CAP, timeLimitSeconds: 60 });
+    const first = result.solutions[0]!;
+    expect(first.throughGoal).toBe(true);
+    expect(first.text).toContain('crop_to_object(');
+    expect(first.bits).toBeGreaterThan(result.statistics.costReached);
+    expect(first.testOutputs[0]!.equals(test.output)).toBe(true);
+  });
+
+  it('with goals off, the same cap finds nothing', () => {
+    const result = solvePuzzle(puzzle, { library, maxCandidates: CAP, timeLimitSeconds: 60, goalBits: 0 });
+    expect(result.solutions.length).toBe(0);
   });
 });
