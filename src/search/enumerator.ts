@@ -263,8 +263,11 @@ export class Enumerator {
     this.inputs = inputs;
     this.layers = limits.goalBits > 0 ? this.buildLayerGoals(limits.goalBits) : [];
     this.statistics.goals = (this.goals?.count ?? 0) + this.layers.length;
+    // A cut gives a grid smaller than the one it cuts: where no output is smaller than its input,
+    // the goals would test every kept grid for nothing.
+    const someOutputSmaller = outputs.some((output, i) => output.height < inputs[i]!.height || output.width < inputs[i]!.width);
     this.cropRules =
-      limits.goalBits > 0 && this.trainCount > 0
+      limits.goalBits > 0 && someOutputSmaller
         ? this.rules.filter((r) => !r.production.section && r.production.primitive.cropsAt && r.resultType === this.gridType && r.argumentTypes.length === 2 && r.argumentTypes[0] === this.gridType)
         : [];
     this.crops = this.cropRules.length > 0 ? new CropGoals(outputs, this.examples, CROP_GOALS) : undefined;
