@@ -5,8 +5,8 @@
  * hold anything. But once a kept value names, on every demonstration, a rectangle the size of
  * that demonstration's output, every kept grid can be tested cell by cell: does it hold each
  * output at that rectangle? One that does answers the task when cut there. The call is then found
- * as soon as the dearer of its two arguments is kept, not when the search reaches the sum of
- * their bits and the call's; like every goal's, the solution waits until every cheaper cost is
+ * as soon as both its arguments are kept, not when the search reaches the sum of their bits and
+ * the call's; like every goal's, the solution waits until every cheaper cost is
  * tried.
  */
 import type { Grid } from '../grid/grid.ts';
@@ -57,6 +57,12 @@ export class CropGoals {
     const cropsAt = production.primitive.cropsAt as ((...rest: unknown[]) => Rectangle | null) | undefined;
     if (!cropsAt) return undefined;
     const train = this.outputs.length;
+    // Most values name a rectangle of another size: turned away before anything is built.
+    for (let i = 0; i < train; i++) {
+      const r = cropsAt(argument.values[i]);
+      const output = this.outputs[i]!;
+      if (!r || r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
+    }
     const rectangles = new Int32Array(4 * train);
     const probes = new Int32Array(2 * train);
     let key = '';
@@ -65,7 +71,6 @@ export class CropGoals {
       if (!r) return undefined;
       if (i < train) {
         const output = this.outputs[i]!;
-        if (r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
         rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
         const probe = rarestCell(output);
         probes[2 * i] = (probe / output.width) | 0;
