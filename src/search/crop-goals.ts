@@ -9,6 +9,7 @@
  * the call's; like every goal's, the solution waits until every cheaper cost is
  * tried.
  */
+import { colourCounts } from '../grid/components.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { Rectangle } from '../library/primitive.ts';
 import type { Production } from './productions.ts';
@@ -35,12 +36,21 @@ export class CropGoals {
   readonly goals: CropGoal[] = [];
   /** The rectangles on every input (test inputs too) of each goal taken, as text: two values naming the same ones make one goal. */
   private readonly seen = new Set<string>();
+  /** Row and column of each output's probe cell (the same for every goal), in turn. */
+  private readonly outputProbes: Int32Array;
 
   constructor(
     private readonly outputs: readonly Grid[],
     private readonly examples: number,
     private readonly maxGoals: number,
-  ) {}
+  ) {
+    this.outputProbes = new Int32Array(2 * outputs.length);
+    outputs.forEach((output, i) => {
+      const probe = rarestCell(output);
+      this.outputProbes[2 * i] = (probe / output.width) | 0;
+      this.outputProbes[2 * i + 1] = probe % output.width;
+    });
+  }
 
   /** Room for more goals. */
   get open(): boolean {
@@ -64,23 +74,16 @@ export class CropGoals {
       if (!r || r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
     }
     const rectangles = new Int32Array(4 * train);
-    const probes = new Int32Array(2 * train);
     let key = '';
     for (let i = 0; i < this.examples; i++) {
       const r = cropsAt(argument.values[i]);
       if (!r) return undefined;
-      if (i < train) {
-        const output = this.outputs[i]!;
-        rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
-        const probe = rarestCell(output);
-        probes[2 * i] = (probe / output.width) | 0;
-        probes[2 * i + 1] = probe % output.width;
-      }
+      if (i < train) rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
       key += `${r.top},${r.left},${r.height},${r.width};`;
     }
     if (this.seen.has(key)) return undefined;
     this.seen.add(key);
-    const goal: CropGoal = { production, argument, rectangles, probes, cost: production.bits + argument.cost };
+    const goal: CropGoal = { production, argument, rectangles, probes: this.outputProbes, cost: production.bits + argument.cost };
     this.goals.push(goal);
     return goal;
   }
@@ -128,8 +131,7 @@ export class CropGoals {
 
 /** Index of the first cell of the colour the grid has least of. */
 function rarestCell(g: Grid): number {
-  const counts = new Uint32Array(10);
-  for (const v of g.cells) counts[v]!++;
+  const counts = colourCounts(g);
   let best = 0;
   for (let i = 1; i < g.cells.length; i++) if (counts[g.cells[i]!]! < counts[g.cells[best]!]!) best = i;
   return best;
