@@ -6,7 +6,7 @@
  * cuts every grid it keeps into objects several ways, and most of those objects are only counted,
  * compared or painted, which the cells serve without a Grid of their own.
  */
-import { EMPTY, Grid, hashCells } from './grid.ts';
+import { EMPTY, Grid, hashCells, sameCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Work buffer for {@link GridObject.mainColour} (asked of most objects the search makes). */
@@ -49,10 +49,7 @@ export class GridObject {
   equals(other: GridObject): boolean {
     if (this === other) return true;
     if (this.hash !== other.hash || this.top !== other.top || this.left !== other.left || this.height !== other.height || this.width !== other.width) return false;
-    const a = this.cells;
-    const b = other.cells;
-    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-    return true;
+    return sameCells(this.cells, other.cells);
   }
 
   /** The colour of the object's most frequent cell (lowest colour on ties). */

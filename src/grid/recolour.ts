@@ -2,39 +2,48 @@
  * Recolouring cell by cell through a colour table: one colour to another, a whole colour map,
  * two colours swapped, everything but one colour (or but the background) made one colour.
  */
-import { backgroundColour } from './components.ts';
+import { backgroundColour, colourCounts } from './components.ts';
 import { Grid, newCells, copyCells } from './grid.ts';
 
 /**
  * The grid with every colour c replaced by `target[c]` (`target` holds an entry for every
- * value a cell can have); the same grid when nothing changes.
+ * value a cell can have); the same grid when nothing changes (read off the grid's colour counts,
+ * which most grids have memoised already).
  */
 export function mapColours(g: Grid, target: Uint8Array): Grid {
-  const source = g.cells;
+  const counts = colourCounts(g);
   let changed = false;
   for (let c = 0; c < 10; c++) {
-    if (target[c] !== c && source.indexOf(c) >= 0) {
+    if (target[c] !== c && counts[c]! > 0) {
       changed = true;
       break;
     }
   }
   if (!changed) return g;
+  const source = g.cells;
   const cells = newCells(source.length);
   for (let i = 0; i < source.length; i++) cells[i] = target[source[i]!]!;
   return new Grid(g.height, g.width, cells);
 }
 
-/** A colour table that changes nothing. */
-function unchangedTable(): Uint8Array {
-  const target = newCells(256);
-  for (let c = 0; c < 256; c++) target[c] = c;
-  return target;
+/**
+ * One colour table for every call (filled afresh by each; mapColours reads it before returning):
+ * a table per call would cost the search an allocation each time.
+ */
+const table = new Uint8Array(256);
+
+/** The shared table, filled with `colour` (or, by default, each value mapped to itself). */
+function freshTable(colour = -1): Uint8Array {
+  if (colour >= 0) table.fill(colour);
+  else for (let c = 0; c < 256; c++) table[c] = c;
+  return table;
 }
 
 /** Cells of `from` get `to`; the same grid when there are none or the colours are equal. */
 export function recolour(g: Grid, from: number, to: number): Grid {
+  if (from === to || (from < 10 && colourCounts(g)[from] === 0)) return g;
   const source = g.cells;
-  const first = from === to ? -1 : source.indexOf(from);
+  const first = source.indexOf(from);
   if (first < 0) return g;
   const cells = copyCells(source);
   for (let i = first; i < cells.length; i++) if (cells[i] === from) cells[i] = to;
@@ -43,14 +52,14 @@ export function recolour(g: Grid, from: number, to: number): Grid {
 
 /** Every colour c becomes `colourMap[c]` (ten entries, colours 0–9), all at once. */
 export function applyColourMap(g: Grid, colourMap: ArrayLike<number>): Grid {
-  const target = unchangedTable();
+  const target = freshTable();
   for (let c = 0; c < 10; c++) target[c] = colourMap[c]!;
   return mapColours(g, target);
 }
 
 /** Cells of `a` get `b` and cells of `b` get `a`. */
 export function swapColours(g: Grid, a: number, b: number): Grid {
-  const target = unchangedTable();
+  const target = freshTable();
   target[a] = b;
   target[b] = a;
   return mapColours(g, target);
@@ -59,15 +68,15 @@ export function swapColours(g: Grid, a: number, b: number): Grid {
 /** Cells of the colour keep it; every other cell becomes the background. */
 export function keepColour(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
-  const target = newCells(256).fill(background);
+  const target = freshTable(background);
   target[colour] = colour;
   return mapColours(g, target);
 }
 
 /** Every cell that is not the background gets the colour. */
 export function recolourAllButBackground(g: Grid, colour: number): Grid {
-  const target = newCells(256).fill(colour);
   const background = backgroundColour(g);
+  const target = freshTable(colour);
   target[background] = background;
   return mapColours(g, target);
 }
