@@ -2,7 +2,7 @@
  * Marks beside cells: background cells that have a cell of a colour (or any drawn cell) among
  * their neighbours take a colour.
  */
-import { backgroundColour } from './components.ts';
+import { backgroundColour, colourCounts } from './components.ts';
 import { Grid, copyCells } from './grid.ts';
 
 /** `source` value meaning any cell that is not the background. */
@@ -29,6 +29,8 @@ const STEPS: Readonly<Record<Neighbourhood, readonly number[]>> = {
 export function markBeside(g: Grid, source: number, colour: number, neighbourhood: Neighbourhood): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
+  // Nothing to mark: no neighbour of the colour anywhere, or the mark is the background itself.
+  if (colour === background || (source !== ANY_DRAWN_CELL && colourCounts(g)[source] === 0)) return g;
   const steps = STEPS[neighbourhood];
   const out = copyCells(cells);
   for (let r = 0; r < height; r++) {
