@@ -6,7 +6,7 @@
  * cuts every grid it keeps into objects several ways, and most of those objects are only counted,
  * compared or painted, which the cells serve without a Grid of their own.
  */
-import { EMPTY, Grid, hashCells, sameCells } from './grid.ts';
+import { EMPTY, Grid, HASH_MASK, hashCells, sameCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Work buffer for {@link GridObject.mainColour} (asked of most objects the search makes). */
@@ -68,5 +68,5 @@ function countFilled(cells: Uint8Array): number {
 }
 
 function objectHash(shapeHash: number, top: number, left: number): number {
-  return (Math.imul(shapeHash ^ (top * 64 + left), 0x85ebca6b) ^ 0x5bd1e995) >>> 0;
+  return (Math.imul(shapeHash ^ (top * 64 + left), 0x85ebca6b) ^ 0x5bd1e995) & HASH_MASK;
 }

@@ -142,6 +142,12 @@ export function cellBytesAllocated(): number {
   return cellBytes;
 }
 
+/**
+ * Hashes are cut to 30 bits: V8 then holds them as small integers, in a grid's field and as Map
+ * keys, where a full 32-bit value would be a boxed number (an allocation per grid made).
+ */
+export const HASH_MASK = 0x3fffffff;
+
 /** Below this many cells a loop in JavaScript compares faster than the native call. */
 const NATIVE_COMPARE_FROM = 48;
 
@@ -192,7 +198,7 @@ export function hashCells(height: number, width: number, cells: Uint8Array): num
   h ^= h >>> 13;
   h = Math.imul(h, 0xc2b2ae35);
   h ^= h >>> 16;
-  return h >>> 0;
+  return h & HASH_MASK;
 }
 
 function mixWord(h: number, word: number): number {

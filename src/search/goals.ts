@@ -7,7 +7,7 @@
  * led to the goal. Goals are expanded from the outputs, cheapest first, up to a cost bound, so
  * a program of d + 1 calls is found when the search has built its inner d.
  */
-import type { Grid } from '../grid/grid.ts';
+import { HASH_MASK, type Grid } from '../grid/grid.ts';
 import type { Production } from './productions.ts';
 import type { Candidate } from './value-store.ts';
 
@@ -38,7 +38,7 @@ export interface GoalLimits {
 export function demonstrationHash(values: readonly unknown[], count: number): number {
   let h = 0x1b873593;
   for (let i = 0; i < count; i++) h = Math.imul(h ^ (values[i] as Grid).hash, 0x5bd1e995) ^ (h >>> 15);
-  return h >>> 0;
+  return h & HASH_MASK;
 }
 
 /** True when the first b.length values equal b's grids, one by one. */

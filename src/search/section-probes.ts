@@ -13,7 +13,7 @@
  * told apart by nothing, so signatures are switched off for the whole task.
  */
 import { backgroundColour, components } from '../grid/components.ts';
-import type { Grid } from '../grid/grid.ts';
+import { HASH_MASK, type Grid } from '../grid/grid.ts';
 import type { GridObject } from '../grid/grid-object.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
 import { isBaseType, splitFunctionType, type BaseType, type Type } from '../language/types.ts';
@@ -69,7 +69,7 @@ export class SectionProbes {
     const result = splitFunctionType(type)!.result;
     let h = 0x2545f491;
     for (let i = 0; i < results.length; i++) h = Math.imul(h ^ hashValue(result, results[i]), 0x5bd1e995) ^ (h >>> 15);
-    return h >>> 0;
+    return h & HASH_MASK;
   }
 
   static equal(type: Type, a: readonly unknown[], b: readonly unknown[]): boolean {

@@ -6,7 +6,7 @@
  * behavioural signature (see section-probes.ts).
  */
 import type { Expression } from '../language/ast.ts';
-import { Grid } from '../grid/grid.ts';
+import { Grid, HASH_MASK } from '../grid/grid.ts';
 import { GridObject } from '../grid/grid-object.ts';
 import type { BaseType, Type } from '../language/types.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
@@ -89,7 +89,7 @@ export class ValueStore {
     if (this.isFunction[typeId]) return signature ? SectionProbes.hash(type, signature) : 0;
     let h = 0x9747b28c;
     for (let i = 0; i < values.length; i++) h = Math.imul(h ^ hashValue(type as BaseType, values[i]), 0x5bd1e995) ^ (h >>> 15);
-    return h >>> 0;
+    return h & HASH_MASK;
   }
 
   /** True when a candidate with equal values (or, for a section, an equal signature) is kept. */
