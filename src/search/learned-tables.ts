@@ -485,10 +485,7 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
     return all;
   });
   const claimed = new Uint8Array(total);
-  const chosen: { feature: number; value: number; colour: number; second?: number; secondValue?: number }[] = [];
-  const pairCovered = new Int32Array(256);
-  const pairChanged = new Int32Array(256);
-  const pairBecomes = new Int16Array(256);
+  const chosen: { feature: number; value: number; colour: number }[] = [];
   // Per value of a feature: cells covered, cells changed, and the one colour they become (NONE when they differ).
   const covered = new Int32Array(16);
   const changed = new Int32Array(16);
@@ -519,50 +516,11 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
         }
       }
     }
-    const mode = Number(process.env.PAIRS ?? 0);
-    let pair: { feature: number; value: number; second: number; secondValue: number; colour: number; changed: number; covered: number } | undefined;
-    if (mode === 1 || (mode === 2 && !best)) {
-      for (let f = 0; f < columns.length; f++) {
-        const a = columns[f]!;
-        for (let g = f + 1; g < columns.length; g++) {
-          const b = columns[g]!;
-          pairCovered.fill(0);
-          pairChanged.fill(0);
-          pairBecomes.fill(UNSET);
-          for (let i = 0; i < total; i++) {
-            if (claimed[i]) continue;
-            const v = (a[i]! << 4) | b[i]!;
-            pairCovered[v]!++;
-            pairChanged[v]! += changes[i]!;
-            const x = pairBecomes[v]!;
-            if (x === UNSET) pairBecomes[v] = target[i]!;
-            else if (x !== target[i]) pairBecomes[v] = NONE;
-          }
-          for (let v = 0; v < 256; v++) {
-            if (pairChanged[v] === 0 || pairBecomes[v]! < 0) continue;
-            if (!pair || pairChanged[v]! > pair.changed || (pairChanged[v] === pair.changed && pairCovered[v]! > pair.covered)) {
-              pair = { feature: f, value: v >> 4, second: g, secondValue: v & 15, colour: pairBecomes[v]!, changed: pairChanged[v]!, covered: pairCovered[v]! };
-            }
-          }
-        }
-      }
-    }
-    if (!best && !pair) return undefined;
-    if (pair && (!best || pair.changed > best.changed)) {
-      chosen.push({ feature: pair.feature, value: pair.value, colour: pair.colour, second: pair.second, secondValue: pair.secondValue });
-      const a = columns[pair.feature]!;
-      const b = columns[pair.second]!;
-      for (let i = 0; i < total; i++) {
-        if (claimed[i] || a[i] !== pair.value || b[i] !== pair.secondValue) continue;
-        claimed[i] = 1;
-        changesLeft -= changes[i]!;
-      }
-      continue;
-    }
-    chosen.push(best!);
-    const column = columns[best!.feature]!;
+    if (!best) return undefined;
+    chosen.push(best);
+    const column = columns[best.feature]!;
     for (let i = 0; i < total; i++) {
-      if (claimed[i] || column[i] !== best!.value) continue;
+      if (claimed[i] || column[i] !== best.value) continue;
       claimed[i] = 1;
       changesLeft -= changes[i]!;
     }
@@ -575,16 +533,12 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
   const backgroundIndex = candidates.findIndex((f) => f.name === 'background');
   const first = chosen.some((c) => c.feature === colourIndex) ? colourIndex : backgroundIndex;
   const features: CellFeature[] = [first >= 0 ? candidates[first]! : { name: 'background' }];
-  for (const c of chosen) {
-    if (c.feature !== first && !used.includes(c.feature)) used.push(c.feature);
-    if (c.second !== undefined && c.second !== first && !used.includes(c.second)) used.push(c.second);
-  }
+  for (const c of chosen) if (c.feature !== first && !used.includes(c.feature)) used.push(c.feature);
   for (const f of used) features.push(candidates[f]!);
   const position = (feature: number): number => (feature === first ? 0 : 1 + used.indexOf(feature));
   const entries: CellRuleEntry[] = chosen.map((c) => {
     const key = new Array<number>(features.length).fill(ANY);
     key[position(c.feature)] = c.value;
-    if (c.second !== undefined) key[position(c.second)] = c.secondValue!;
     return { key, colour: c.colour };
   });
   entries.push({ key: new Array<number>(features.length).fill(ANY), colour: KEEP });
