@@ -53,7 +53,7 @@ export class Grid {
   }
 
   static filled(height: number, width: number, colour: number): Grid {
-    return new Grid(height, width, new Uint8Array(height * width).fill(colour));
+    return new Grid(height, width, newCells(height * width).fill(colour));
   }
 
   /** Builds a grid from a list of rows; rows must be equally long. */
@@ -103,6 +103,8 @@ const SLAB_BYTES = 1 << 18;
 /** Larger cell arrays get their own buffer. */
 const LARGEST_SLAB_PIECE = 4096;
 let slab = new ArrayBuffer(SLAB_BYTES);
+/** The current slab as 32-bit words, for hashing four cells at a time (hashCells). */
+let slabWords = new Int32Array(slab);
 let slabOffset = 0;
 let cellBytes = 0;
 
@@ -114,6 +116,7 @@ export function newCells(length: number): Uint8Array {
   }
   if (slabOffset + length > SLAB_BYTES) {
     slab = new ArrayBuffer(SLAB_BYTES);
+    slabWords = new Int32Array(slab);
     slabOffset = 0;
     cellBytes += SLAB_BYTES;
   }
@@ -160,26 +163,20 @@ export function sameCells(a: Uint8Array, b: Uint8Array): boolean {
 
 /** Whether this machine stores the low byte of a word first, as an Int32Array view then reads four cells at once. */
 const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
-/** A word view of the buffer read last (a slab, nearly always), made again only when the buffer changes. */
-let wordsBuffer: ArrayBufferLike | undefined;
-let words: Int32Array<ArrayBufferLike> = new Int32Array(0);
 
 /**
  * Hash of the shape and the cells, four cells at a time (a murmur-style step per 32-bit word, the
  * cells read little end first, then the cells left over one by one), finished with a murmur-style
  * mix. Every grid is hashed when made, so this is on the search's hot path: cells in a slab are
- * read through one word view of it; cells anywhere else give the same words, built from bytes.
+ * read through the current slab's word view; cells anywhere else (an older slab, a buffer of their
+ * own) give the same words, built from bytes, so where the cells lie never changes the hash.
  */
 export function hashCells(height: number, width: number, cells: Uint8Array): number {
   let h = 0x811c9dc5 ^ (height * 31 + width);
   const length = cells.length;
   const count = length >> 2;
-  if (LITTLE_ENDIAN && count >= 4 && (cells.byteOffset & 3) === 0) {
-    const buffer = cells.buffer;
-    if (buffer !== wordsBuffer) {
-      wordsBuffer = buffer;
-      words = new Int32Array(buffer, 0, buffer.byteLength >> 2);
-    }
+  if (LITTLE_ENDIAN && cells.buffer === slab && (cells.byteOffset & 3) === 0) {
+    const words = slabWords;
     const from = cells.byteOffset >> 2;
     for (let k = 0; k < count; k++) h = mixWord(h, words[from + k]!);
   } else {
