@@ -31,11 +31,13 @@ export function mapColours(g: Grid, target: Uint8Array): Grid {
  * a table per call would cost the search an allocation each time.
  */
 const table = new Uint8Array(256);
+/** Every value mapped to itself, copied into the shared table in one native call. */
+const IDENTITY = Uint8Array.from({ length: 256 }, (_, c) => c);
 
 /** The shared table, filled with `colour` (or, by default, each value mapped to itself). */
 function freshTable(colour = -1): Uint8Array {
   if (colour >= 0) table.fill(colour);
-  else for (let c = 0; c < 256; c++) table[c] = c;
+  else table.set(IDENTITY);
   return table;
 }
 

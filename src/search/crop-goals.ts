@@ -22,12 +22,6 @@ export interface CropGoal {
   readonly argument: Candidate;
   /** Top, left, height, width of the rectangle on each demonstration, in turn. */
   readonly rectangles: Int32Array;
-  /**
-   * Row and column, within each demonstration's output, of a cell of the colour that output has
-   * least: compared first, it turns most grids away at one read (a corner cell is usually
-   * background, as is the grid there).
-   */
-  readonly probes: Int32Array;
   /** Bits of the call and its second argument (the cut grid's own are added when met). */
   readonly cost: number;
 }
@@ -36,8 +30,14 @@ export class CropGoals {
   readonly goals: CropGoal[] = [];
   /** The rectangles on every input (test inputs too) of each goal taken, as text: two values naming the same ones make one goal. */
   private readonly seen = new Set<string>();
-  /** Row and column of each output's probe cell (the same for every goal), in turn. */
+  /**
+   * Row and column, within each demonstration's output, of a cell of the colour that output has
+   * least, in turn (the same for every goal): compared first, it turns most grids away at one read
+   * (a corner cell is usually background, as is the grid there).
+   */
   private readonly outputProbes: Int32Array;
+  /** The demonstrations' rectangles of the value being considered, before it becomes a goal. */
+  private readonly found: Int32Array;
 
   constructor(
     private readonly outputs: readonly Grid[],
@@ -50,6 +50,7 @@ export class CropGoals {
       this.outputProbes[2 * i] = (probe / output.width) | 0;
       this.outputProbes[2 * i + 1] = probe % output.width;
     });
+    this.found = new Int32Array(4 * outputs.length);
   }
 
   /** Room for more goals. */
@@ -68,22 +69,25 @@ export class CropGoals {
     if (!cropsAt) return undefined;
     const train = this.outputs.length;
     // Most values name a rectangle of another size: turned away before anything is built.
+    const found = this.found;
     for (let i = 0; i < train; i++) {
       const r = cropsAt(argument.values[i]);
       const output = this.outputs[i]!;
       if (!r || r.height !== output.height || r.width !== output.width || r.top < 0 || r.left < 0) return undefined;
+      found[4 * i] = r.top;
+      found[4 * i + 1] = r.left;
+      found[4 * i + 2] = r.height;
+      found[4 * i + 3] = r.width;
     }
-    const rectangles = new Int32Array(4 * train);
-    let key = '';
-    for (let i = 0; i < this.examples; i++) {
+    let key = found.join(',');
+    for (let i = train; i < this.examples; i++) {
       const r = cropsAt(argument.values[i]);
       if (!r) return undefined;
-      if (i < train) rectangles.set([r.top, r.left, r.height, r.width], 4 * i);
-      key += `${r.top},${r.left},${r.height},${r.width};`;
+      key += `;${r.top},${r.left},${r.height},${r.width}`;
     }
     if (this.seen.has(key)) return undefined;
     this.seen.add(key);
-    const goal: CropGoal = { production, argument, rectangles, probes: this.outputProbes, cost: production.bits + argument.cost };
+    const goal: CropGoal = { production, argument, rectangles: found.slice(), cost: production.bits + argument.cost };
     this.goals.push(goal);
     return goal;
   }
@@ -108,8 +112,8 @@ export class CropGoals {
     const top = r[4 * i]!;
     const left = r[4 * i + 1]!;
     if (top + r[4 * i + 2]! > grid.height || left + r[4 * i + 3]! > grid.width) return false;
-    const row = goal.probes[2 * i]!;
-    const column = goal.probes[2 * i + 1]!;
+    const row = this.outputProbes[2 * i]!;
+    const column = this.outputProbes[2 * i + 1]!;
     const output = this.outputs[i]!;
     return grid.cells[(top + row) * grid.width + left + column] === output.cells[row * output.width + column];
   }
