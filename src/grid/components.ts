@@ -3,7 +3,7 @@
  * (4 = edges only, 8 = edges and corners), either of one colour or of any non-background
  * colour.
  */
-import { EMPTY, Grid, newCells } from './grid.ts';
+import { EMPTY, Grid, newCells, pinCells } from './grid.ts';
 import { GridObject } from './grid-object.ts';
 import { backgroundOfCounts } from './most-frequent-colour.ts';
 
@@ -33,6 +33,8 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   let forGrid = grid.componentsMemo;
   if (forGrid) for (let i = 0; i < forGrid.length; i += 2) if (forGrid[i] === key) return forGrid[i + 1] as readonly GridObject[];
   const found = computeComponents(grid, options);
+  // The objects' cells stay with the grid (see cellsRewind).
+  pinCells();
   analysisBytes += 96 + 8 * found.length;
   for (const o of found) analysisBytes += 200 + o.cells.length;
   if (!forGrid) grid.componentsMemo = forGrid = [];
@@ -96,7 +98,7 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
       const c = index - r * width;
       shape[(r - top) * w + (c - left)] = cells[index]!;
     }
-    objects.push(new GridObject(top, left, h, w, shape));
+    objects.push(new GridObject(top, left, h, w, shape, tail));
   }
   return objects;
 }

@@ -22,14 +22,18 @@ export class GridObject {
   readonly cells: Uint8Array;
   /** Number of cells that belong to the object. */
   readonly size: number;
-  readonly hash: number;
+  /** The hash, made on first use (-1 until then): most objects are painted or counted, never compared. */
+  private hashMemo = -1;
   private shapeMemo: Grid | undefined;
 
   /** The object whose bounding box is the grid, at (top, left). */
   constructor(top: number, left: number, shape: Grid);
-  /** An object from its bounding box's cells (taken over, not copied), with no Grid made for them yet. */
-  constructor(top: number, left: number, height: number, width: number, cells: Uint8Array);
-  constructor(top: number, left: number, shapeOrHeight: Grid | number, width?: number, cells?: Uint8Array) {
+  /**
+   * An object from its bounding box's cells (taken over, not copied), with no Grid made for them
+   * yet; `size`, when the caller knows it, is the number of cells that are not EMPTY.
+   */
+  constructor(top: number, left: number, height: number, width: number, cells: Uint8Array, size?: number);
+  constructor(top: number, left: number, shapeOrHeight: Grid | number, width?: number, cells?: Uint8Array, size?: number) {
     const shape = typeof shapeOrHeight === 'number' ? undefined : shapeOrHeight;
     this.top = top;
     this.left = left;
@@ -37,8 +41,12 @@ export class GridObject {
     this.width = shape ? shape.width : width!;
     this.cells = shape ? shape.cells : cells!;
     this.shapeMemo = shape;
-    this.size = countFilled(this.cells);
-    this.hash = objectHash(shape ? shape.hash : hashCells(this.height, this.width, this.cells), top, left);
+    this.size = size ?? countFilled(this.cells);
+  }
+
+  get hash(): number {
+    if (this.hashMemo < 0) this.hashMemo = objectHash(this.shapeMemo ? this.shapeMemo.hash : hashCells(this.height, this.width, this.cells), this.top, this.left);
+    return this.hashMemo;
   }
 
   /** The bounding box as a grid (made on first use). */
@@ -48,7 +56,7 @@ export class GridObject {
 
   equals(other: GridObject): boolean {
     if (this === other) return true;
-    if (this.hash !== other.hash || this.top !== other.top || this.left !== other.left || this.height !== other.height || this.width !== other.width) return false;
+    if (this.top !== other.top || this.left !== other.left || this.height !== other.height || this.width !== other.width || this.hash !== other.hash) return false;
     return sameCells(this.cells, other.cells);
   }
 

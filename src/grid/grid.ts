@@ -105,8 +105,18 @@ const LARGEST_SLAB_PIECE = 4096;
 let slab = new ArrayBuffer(SLAB_BYTES);
 /** The current slab as 32-bit words, for hashing four cells at a time (hashCells). */
 let slabWords = new Int32Array(slab);
+/** The current slab as bytes, for clearing cells handed back (cellsRewind). */
+let slabBytes = new Uint8Array(slab);
+/** Counts the slabs made, so that a checkpoint knows whether the slab changed since. */
+let slabSerial = 0;
 let slabOffset = 0;
 let cellBytes = 0;
+/** Counts {@link pinCells} calls. */
+let pins = 0;
+/** The checkpoint (cellsCheckpoint): the slab, the place in it and the pins at the time. */
+let checkpointSerial = -1;
+let checkpointOffset = 0;
+let checkpointPins = 0;
 
 /** A zeroed cell array of this length, for building a new grid. */
 export function newCells(length: number): Uint8Array {
@@ -117,12 +127,43 @@ export function newCells(length: number): Uint8Array {
   if (slabOffset + length > SLAB_BYTES) {
     slab = new ArrayBuffer(SLAB_BYTES);
     slabWords = new Int32Array(slab);
+    slabBytes = new Uint8Array(slab);
+    slabSerial++;
     slabOffset = 0;
     cellBytes += SLAB_BYTES;
   }
   const view = new Uint8Array(slab, slabOffset, length);
   slabOffset += (length + 7) & ~7;
   return view;
+}
+
+/**
+ * Handing cells back. The search builds a candidate's values, compares them with what it holds
+ * and drops most of them at once (equal to a kept value, or failed on some input). It marks a
+ * checkpoint before building them and rewinds to it when it drops them: the slab space they took
+ * is cleared and handed out again, so the next candidate's cells are written where the last
+ * one's were (memory the processor has at hand) and slabs fill only with values kept.
+ *
+ * Rewinding is safe only if nothing made since the checkpoint is still held. Whatever keeps cells
+ * beyond the call that made them (an analysis memoised on a grid, such as its components) calls
+ * {@link pinCells}, and a rewind after a pin does nothing. One checkpoint at a time.
+ */
+export function cellsCheckpoint(): void {
+  checkpointSerial = slabSerial;
+  checkpointOffset = slabOffset;
+  checkpointPins = pins;
+}
+
+/** Hands back the cells made since the checkpoint, unless the slab changed or something was pinned since. */
+export function cellsRewind(): void {
+  if (checkpointSerial !== slabSerial || checkpointPins !== pins || slabOffset === checkpointOffset) return;
+  slabBytes.fill(0, checkpointOffset, slabOffset);
+  slabOffset = checkpointOffset;
+}
+
+/** Says that cells made since the last checkpoint are kept beyond the call (a rewind then does nothing). */
+export function pinCells(): void {
+  pins++;
 }
 
 /** A copy of a cell array, for building a changed grid from an old one. */

@@ -31,20 +31,32 @@ function spread(mark: Uint8Array, height: number, width: number, queue: Int32Arr
 /** Work arrays for the flood fills below. */
 const enclosedQueue = new WorkArray(Int32Array);
 const regionQueue = new WorkArray(Int32Array);
+const markWork = new WorkArray(Uint8Array);
 
 /**
  * Marks, in a new array, the cells of colour `open` that are enclosed: not connected to the
  * border by edge steps through cells of that colour (1 = enclosed).
  */
 export function enclosedCells(grid: Grid, open: number): Uint8Array {
-  const { height, width, cells } = grid;
+  const mark = newCells(grid.cells.length);
+  markEnclosed(grid.height, grid.width, grid.cells, open, mark);
+  return mark;
+}
+
+/**
+ * Marks in `mark` (at least as long as the cells; the rest is left alone) the cells of colour
+ * `open` that are enclosed (1) and every other cell (0); returns how many are enclosed.
+ */
+function markEnclosed(height: number, width: number, cells: Uint8Array, open: number, mark: Uint8Array): number {
   const n = cells.length;
   // 0 = not open, 1 = open and enclosed (so far), 2 = open and reached from the border
-  const mark = newCells(n);
   const queue = enclosedQueue.take(n);
   let tail = 0;
   for (let i = 0; i < n; i++) {
-    if (cells[i] !== open) continue;
+    if (cells[i] !== open) {
+      mark[i] = 0;
+      continue;
+    }
     mark[i] = 1;
     const r = (i / width) | 0;
     const c = i - r * width;
@@ -54,17 +66,26 @@ export function enclosedCells(grid: Grid, open: number): Uint8Array {
     }
   }
   spread(mark, height, width, queue, tail, 1, 2);
-  for (let i = 0; i < n; i++) mark[i] = mark[i] === 1 ? 1 : 0;
-  return mark;
+  let enclosed = 0;
+  for (let i = 0; i < n; i++) {
+    if (mark[i] === 1) enclosed++;
+    else mark[i] = 0;
+  }
+  return enclosed;
 }
 
 /** How many separate enclosed regions (edge-connected) of colour `open` the grid has. */
 export function countEnclosedRegions(grid: Grid, open: number): number {
-  const { height, width } = grid;
-  const mark = enclosedCells(grid, open);
-  const queue = regionQueue.take(mark.length);
+  return regionsEnclosed(grid.height, grid.width, grid.cells, open);
+}
+
+/** How many separate enclosed regions (edge-connected) of colour `open` the cells have. */
+function regionsEnclosed(height: number, width: number, cells: Uint8Array, open: number): number {
+  const mark = markWork.take(cells.length);
+  if (markEnclosed(height, width, cells, open, mark) === 0) return 0;
+  const queue = regionQueue.take(cells.length);
   let regions = 0;
-  for (let start = 0; start < mark.length; start++) {
+  for (let start = 0; start < cells.length; start++) {
     if (mark[start] !== 1) continue;
     regions++;
     mark[start] = 0;
@@ -94,7 +115,9 @@ export function enclosedRegions(grid: Grid): readonly GridObject[] {
 export function fillEnclosed(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
   if (colour === background) return g;
-  const enclosed = enclosedCells(g, background);
+  const enclosed = markWork.take(g.cells.length);
+  // Nothing enclosed: the grid itself, not a copy.
+  if (markEnclosed(g.height, g.width, g.cells, background, enclosed) === 0) return g;
   const out = copyCells(g.cells);
   for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
   return new Grid(g.height, g.width, out);
@@ -102,5 +125,5 @@ export function fillEnclosed(g: Grid, colour: number): Grid {
 
 /** How many separate gaps the object closes in: regions of its box, not its cells, that cannot reach the box's edge. */
 export function holeCount(o: GridObject): number {
-  return countEnclosedRegions(o.shape, EMPTY);
+  return regionsEnclosed(o.height, o.width, o.cells, EMPTY);
 }

@@ -33,18 +33,18 @@ export function markBeside(g: Grid, source: number, colour: number, neighbourhoo
   if (colour === background || (source !== ANY_DRAWN_CELL && colourCounts(g)[source] === 0)) return g;
   const steps = STEPS[neighbourhood];
   const out = copyCells(cells);
+  // From each source cell to the background cells around it (every neighbourhood is symmetric,
+  // so this marks exactly the background cells with a source among their neighbours): sources
+  // are usually far fewer than background cells.
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {
-      if (cells[r * width + c] !== background) continue;
+      const v = cells[r * width + c]!;
+      if (source === ANY_DRAWN_CELL ? v === background : v !== source) continue;
       for (let k = 0; k < steps.length; k += 2) {
         const nr = r + steps[k]!;
         const nc = c + steps[k + 1]!;
         if (nr < 0 || nr >= height || nc < 0 || nc >= width) continue;
-        const v = cells[nr * width + nc]!;
-        if (source === ANY_DRAWN_CELL ? v !== background : v === source) {
-          out[r * width + c] = colour;
-          break;
-        }
+        if (cells[nr * width + nc] === background) out[nr * width + nc] = colour;
       }
     }
   }

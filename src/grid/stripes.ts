@@ -4,34 +4,59 @@
  */
 import { Grid, newCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
+import { WorkArray } from './work-array.ts';
 
-/** Each row (alongRows) or column becomes its most frequent colour, the lowest on ties. */
-export function majorityLines(g: Grid, alongRows: boolean): Grid {
+/** Work arrays: colour counts of one line, and each line's most frequent colour. */
+const lineCounts = new Uint16Array(10);
+const rowBest = new WorkArray(Uint8Array);
+const columnBest = new WorkArray(Uint8Array);
+
+/** Each line's (row's when alongRows, else column's) most frequent colour, the lowest on ties, into `best`. */
+function lineMajorities(g: Grid, alongRows: boolean, best: Uint8Array): void {
   const { height, width, cells } = g;
-  const out = newCells(cells.length);
-  const counts = new Uint16Array(10);
   const lines = alongRows ? height : width;
   const length = alongRows ? width : height;
   const step = alongRows ? 1 : width;
   for (let line = 0; line < lines; line++) {
     const start = alongRows ? line * width : line;
-    counts.fill(0);
-    for (let k = 0; k < length; k++) counts[cells[start + k * step]!]!++;
-    const best = mostFrequentColour(counts);
-    for (let k = 0; k < length; k++) out[start + k * step] = best;
+    lineCounts.fill(0);
+    for (let k = 0; k < length; k++) lineCounts[cells[start + k * step]!]!++;
+    best[line] = mostFrequentColour(lineCounts);
   }
+}
+
+/** The grid with each line painted in its colour from `best`. */
+function paintLines(g: Grid, alongRows: boolean, best: Uint8Array): Grid {
+  const { height, width } = g;
+  const out = newCells(height * width);
+  if (alongRows) for (let r = 0; r < height; r++) out.fill(best[r]!, r * width, (r + 1) * width);
+  else for (let r = 0; r < height; r++) for (let c = 0; c < width; c++) out[r * width + c] = best[c]!;
   return new Grid(height, width, out);
 }
 
-function agreement(a: Grid, b: Grid): number {
-  let same = 0;
-  for (let i = 0; i < a.cells.length; i++) if (a.cells[i] === b.cells[i]) same++;
-  return same;
+/** Each row (alongRows) or column becomes its most frequent colour, the lowest on ties. */
+export function majorityLines(g: Grid, alongRows: boolean): Grid {
+  const best = (alongRows ? rowBest : columnBest).take(alongRows ? g.height : g.width);
+  lineMajorities(g, alongRows, best);
+  return paintLines(g, alongRows, best);
 }
 
 /** Row stripes or column stripes (see majorityLines), whichever keeps more cells as they were; rows on ties. */
 export function restoreStripes(g: Grid): Grid {
-  const rows = majorityLines(g, true);
-  const columns = majorityLines(g, false);
-  return agreement(columns, g) > agreement(rows, g) ? columns : rows;
+  const { height, width, cells } = g;
+  const rows = rowBest.take(height);
+  const columns = columnBest.take(width);
+  lineMajorities(g, true, rows);
+  lineMajorities(g, false, columns);
+  // Cells each direction keeps as they were, counted without painting either.
+  let keptByRows = 0;
+  let keptByColumns = 0;
+  for (let r = 0; r < height; r++) {
+    for (let c = 0; c < width; c++) {
+      const v = cells[r * width + c]!;
+      if (v === rows[r]) keptByRows++;
+      if (v === columns[c]) keptByColumns++;
+    }
+  }
+  return keptByColumns > keptByRows ? paintLines(g, false, columns) : paintLines(g, true, rows);
 }

@@ -11,7 +11,7 @@
  */
 import { getHeapStatistics } from 'node:v8';
 import { analysisBytesSoFar, backgroundColour } from '../grid/components.ts';
-import { Grid } from '../grid/grid.ts';
+import { Grid, cellsCheckpoint, cellsRewind } from '../grid/grid.ts';
 import type { Expression } from '../language/ast.ts';
 import { FAILURE } from '../language/failure.ts';
 import { literalValue } from '../language/interpreter.ts';
@@ -590,6 +590,8 @@ export class Enumerator {
     }
     const call = (this.callScratch[arity] ??= new Array<unknown>(arity));
     const gridResult = rule.resultType === this.gridType;
+    // The cells of values dropped below are handed back (cellsRewind in src/grid/grid.ts).
+    cellsCheckpoint();
     let from = 0;
     if (this.lastStepsOnly && this.trainCount > 0) {
       // Nothing is kept now, so a grid matters only as an answer or a goal's argument: one that
@@ -598,9 +600,13 @@ export class Enumerator {
       const first = applyOperation(operation, call);
       if (first === FAILURE) {
         stats.failed++;
+        cellsRewind();
         return;
       }
-      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid) && !this.layerMayMeetFirst(first as Grid) && !this.crops?.mayMeetFirst(first as Grid)) return;
+      if (!(first as Grid).equals(this.outputs[0]!) && !this.goals?.mayWantFirst(first as Grid) && !this.layerMayMeetFirst(first as Grid) && !this.crops?.mayMeetFirst(first as Grid)) {
+        cellsRewind();
+        return;
+      }
       values[0] = first;
       from = 1;
     }
@@ -609,6 +615,7 @@ export class Enumerator {
       const v = applyOperation(operation, call);
       if (v === FAILURE) {
         stats.failed++;
+        cellsRewind();
         return;
       }
       // A grid equal to the grid it was made from is that grid: kept values then hold fewer objects,
@@ -616,23 +623,23 @@ export class Enumerator {
       const source = call[0];
       values[i] = gridResult && source !== v && source instanceof Grid && source.equals(v as Grid) ? source : v;
     }
-    this.offer(rule.resultType, cost, values, rule.production, undefined, undefined);
+    if (!this.offer(rule.resultType, cost, values, rule.production, undefined, undefined)) cellsRewind();
   }
 
-  /** Keeps a candidate unless an equal one is kept; `values` may be scratch (copied when kept). */
-  private offer(typeId: number, cost: number, values: readonly unknown[], production: Production | undefined, leaf: Expression | undefined, signature: unknown[] | undefined): void {
+  /**
+   * Keeps a candidate unless an equal one is kept; `values` may be scratch (copied when kept).
+   * Returns whether anything made from the values is still held (false: they were all dropped).
+   */
+  private offer(typeId: number, cost: number, values: readonly unknown[], production: Production | undefined, leaf: Expression | undefined, signature: unknown[] | undefined): boolean {
     const store = this.store;
-    if (this.lastStepsOnly && typeId !== this.gridType) return;
+    if (this.lastStepsOnly && typeId !== this.gridType) return false;
     const hash = store.hashOf(typeId, values, signature);
     if (store.has(typeId, hash, values, signature)) {
       this.statistics.pruned++;
       if (signature) this.statistics.sectionsPruned++;
-      return;
+      return false;
     }
-    if (this.lastStepsOnly) {
-      if (production) this.offerLastStep(cost, values, production);
-      return;
-    }
+    if (this.lastStepsOnly) return production ? this.offerLastStep(cost, values, production) : false;
     const candidate: Candidate = {
       type: production ? production.result : this.types.type(typeId),
       typeId,
@@ -657,6 +664,7 @@ export class Enumerator {
     } else if (this.crops?.open) {
       for (const rule of this.cropRules) if (rule.argumentTypes[1] === typeId) this.addCropGoal(rule.production, candidate);
     }
+    return true;
   }
 
   /** A crop goal from a kept value that names a rectangle, when it makes one: every grid kept so far is tested against it at once. */
@@ -679,7 +687,7 @@ export class Enumerator {
    * Last steps only: a new grid is kept as a candidate only when it is an answer or meets a
    * goal (it could not be an argument of anything now); everything else is dropped at once.
    */
-  private offerLastStep(cost: number, values: readonly unknown[], production: Production): void {
+  private offerLastStep(cost: number, values: readonly unknown[], production: Production): boolean {
     const answers = this.answers(values);
     const goals = this.goals ? this.goals.matching(values, this.trainCount) : undefined;
     const layers = this.layers.length > 0 && !answers ? this.layersMet(values) : undefined;
@@ -687,13 +695,14 @@ export class Enumerator {
     // A grid that answers the first demonstration (all a last step has checked before running the
     // others) and not every one can be one side of a case split.
     const part = !answers && this.splits !== undefined && (values[0] as Grid).equals(this.outputs[0]!);
-    if (!answers && (!goals || goals.length === 0) && !layers && !part && !crops) return;
+    if (!answers && (!goals || goals.length === 0) && !layers && !part && !crops) return false;
     const candidate: Candidate = { type: production.result, typeId: this.gridType, cost, values: values.slice(), production, arguments: this.args.slice(), leaf: undefined, signature: undefined };
     if (part) this.splits!.noteGrid(candidate);
     this.checkSolution(candidate);
     if (goals) for (const goal of goals) this.meetGoal(candidate, goal);
     if (layers) for (const goal of layers) this.meetLayerGoal(candidate, goal);
     if (crops) for (const goal of crops) this.meetCropGoal(candidate, goal);
+    return true;
   }
 
   /** True when the grid meets some layer goal on the first demonstration. */
