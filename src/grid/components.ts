@@ -42,77 +42,91 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   return found;
 }
 
-/** Work buffers shared by every call (the search calls this very often; allocation shows). */
+/**
+ * Work buffers shared by every call (the search calls this very often; allocation shows): seen
+ * marks, and the queue's cells with their rows and columns (kept beside each cell, not worked
+ * out again by a division per cell).
+ */
 let seenBuffer = new Uint8Array(0);
 let queueBuffer = new Int32Array(0);
+let rowBuffer = new Int32Array(0);
+let columnBuffer = new Int32Array(0);
 
 function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] {
   const { height, width, cells } = grid;
   if (seenBuffer.length < cells.length) {
     seenBuffer = new Uint8Array(cells.length);
     queueBuffer = new Int32Array(cells.length);
+    rowBuffer = new Int32Array(cells.length);
+    columnBuffer = new Int32Array(cells.length);
   }
   const seen = seenBuffer;
   const queue = queueBuffer;
+  const rows = rowBuffer;
+  const columns = columnBuffer;
   seen.fill(0, 0, cells.length);
   const objects: GridObject[] = [];
   const { background, multicolour, diagonal } = options;
+  const lastRow = height - 1;
+  const lastColumn = width - 1;
   for (let start = 0; start < cells.length; start++) {
     if (seen[start] || cells[start] === background) continue;
     const colour = cells[start]!;
     let head = 0;
-    let tail = 0;
-    queue[tail++] = start;
+    let tail = 1;
+    const startRow = (start / width) | 0;
+    queue[0] = start;
+    rows[0] = startRow;
+    columns[0] = start - startRow * width;
     seen[start] = 1;
     let top = height, left = width, bottom = -1, right = -1;
     while (head < tail) {
-      const index = queue[head++]!;
-      const r = (index / width) | 0;
-      const c = index - r * width;
+      const index = queue[head]!;
+      const r = rows[head]!;
+      const c = columns[head]!;
+      head++;
       if (r < top) top = r;
       if (r > bottom) bottom = r;
       if (c < left) left = c;
       if (c > right) right = c;
       const up = r > 0;
-      const down = r < height - 1;
+      const down = r < lastRow;
       const leftOpen = c > 0;
-      const rightOpen = c < width - 1;
+      const rightOpen = c < lastColumn;
       // A closure per object would cost an allocation (and a name helper under tsx) each time.
-      if (up) tail = join(index - width, cells, seen, queue, tail, background, multicolour, colour);
-      if (down) tail = join(index + width, cells, seen, queue, tail, background, multicolour, colour);
-      if (leftOpen) tail = join(index - 1, cells, seen, queue, tail, background, multicolour, colour);
-      if (rightOpen) tail = join(index + 1, cells, seen, queue, tail, background, multicolour, colour);
+      if (up) tail = join(index - width, r - 1, c, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+      if (down) tail = join(index + width, r + 1, c, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+      if (leftOpen) tail = join(index - 1, r, c - 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+      if (rightOpen) tail = join(index + 1, r, c + 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
       if (diagonal) {
-        if (up && leftOpen) tail = join(index - width - 1, cells, seen, queue, tail, background, multicolour, colour);
-        if (up && rightOpen) tail = join(index - width + 1, cells, seen, queue, tail, background, multicolour, colour);
-        if (down && leftOpen) tail = join(index + width - 1, cells, seen, queue, tail, background, multicolour, colour);
-        if (down && rightOpen) tail = join(index + width + 1, cells, seen, queue, tail, background, multicolour, colour);
+        if (up && leftOpen) tail = join(index - width - 1, r - 1, c - 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+        if (up && rightOpen) tail = join(index - width + 1, r - 1, c + 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+        if (down && leftOpen) tail = join(index + width - 1, r + 1, c - 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
+        if (down && rightOpen) tail = join(index + width + 1, r + 1, c + 1, cells, seen, queue, rows, columns, tail, background, multicolour, colour);
       }
     }
     const h = bottom - top + 1;
     const w = right - left + 1;
     const shape = newCells(h * w).fill(EMPTY);
-    for (let i = 0; i < tail; i++) {
-      const index = queue[i]!;
-      const r = (index / width) | 0;
-      const c = index - r * width;
-      shape[(r - top) * w + (c - left)] = cells[index]!;
-    }
+    for (let i = 0; i < tail; i++) shape[(rows[i]! - top) * w + (columns[i]! - left)] = cells[queue[i]!]!;
     objects.push(new GridObject(top, left, h, w, shape, tail));
   }
   return objects;
 }
 
 /**
- * Visits neighbour n of a growing object: it joins (queued, marked seen) when unseen, not
- * background and, for one-colour objects, of the object's colour. Returns the queue's new end.
+ * Visits neighbour n (at row nr, column nc) of a growing object: it joins (queued with its row
+ * and column, marked seen) when unseen, not background and, for one-colour objects, of the
+ * object's colour. Returns the queue's new end.
  */
-function join(n: number, cells: Uint8Array, seen: Uint8Array, queue: Int32Array, tail: number, background: number, multicolour: boolean, colour: number): number {
+function join(n: number, nr: number, nc: number, cells: Uint8Array, seen: Uint8Array, queue: Int32Array, rows: Int32Array, columns: Int32Array, tail: number, background: number, multicolour: boolean, colour: number): number {
   if (seen[n]) return tail;
   const v = cells[n]!;
   if (v === background || (!multicolour && v !== colour)) return tail;
   seen[n] = 1;
   queue[tail] = n;
+  rows[tail] = nr;
+  columns[tail] = nc;
   return tail + 1;
 }
 

@@ -1,0 +1,82 @@
+/**
+ * Connected components against a plain reference: labels found by a stack flood written here
+ * from the definition (cells joined through edges, or edges and corners; of one colour or of any
+ * colour but the background), then each label's box. The fast flood in src/grid/components.ts
+ * must cut every grid the same way, list the objects in reading order of their first cell, and
+ * give each object the size and hash an object made from its box grid has.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { components, type ComponentOptions } from '../src/grid/components.ts';
+import { EMPTY, type Grid } from '../src/grid/grid.ts';
+import { GridObject } from '../src/grid/grid-object.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
+
+interface ReferenceObject {
+  top: number;
+  left: number;
+  height: number;
+  width: number;
+  cells: number[];
+  size: number;
+}
+
+function referenceComponents(g: Grid, options: ComponentOptions): ReferenceObject[] {
+  const label = new Array<number>(g.cells.length).fill(-1);
+  const steps = options.diagonal ? [[-1, 0], [1, 0], [0, -1], [0, 1], [-1, -1], [-1, 1], [1, -1], [1, 1]] : [[-1, 0], [1, 0], [0, -1], [0, 1]];
+  const found: ReferenceObject[] = [];
+  for (let start = 0; start < g.cells.length; start++) {
+    if (label[start] !== -1 || g.cells[start] === options.background) continue;
+    const id = found.length;
+    const members: number[] = [];
+    const stack = [start];
+    label[start] = id;
+    while (stack.length > 0) {
+      const i = stack.pop()!;
+      members.push(i);
+      const r = Math.floor(i / g.width);
+      const c = i % g.width;
+      for (const [dr, dc] of steps) {
+        const nr = r + dr!;
+        const nc = c + dc!;
+        if (nr < 0 || nc < 0 || nr >= g.height || nc >= g.width) continue;
+        const n = nr * g.width + nc;
+        const v = g.cells[n]!;
+        if (label[n] !== -1 || v === options.background) continue;
+        if (!options.multicolour && v !== g.cells[start]) continue;
+        label[n] = id;
+        stack.push(n);
+      }
+    }
+    const rows = members.map((i) => Math.floor(i / g.width));
+    const columns = members.map((i) => i % g.width);
+    const top = Math.min(...rows);
+    const left = Math.min(...columns);
+    const height = Math.max(...rows) - top + 1;
+    const width = Math.max(...columns) - left + 1;
+    const cells = new Array<number>(height * width).fill(EMPTY);
+    for (const i of members) cells[(Math.floor(i / g.width) - top) * width + ((i % g.width) - left)] = g.cells[i]!;
+    found.push({ top, left, height, width, cells, size: members.length });
+  }
+  return found;
+}
+
+describe('components', () => {
+  it('cuts every grid as the reference does, whatever the options', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 12, maxWidth: 12 }), fc.boolean(), fc.boolean(), fc.integer({ min: -1, max: 9 }), (g, diagonal, multicolour, background) => {
+        const options = { diagonal, multicolour, background };
+        const objects = components(g, options);
+        const expected = referenceComponents(g, options);
+        expect(objects.length).toBe(expected.length);
+        objects.forEach((o, k) => {
+          const e = expected[k]!;
+          expect([o.top, o.left, o.height, o.width, o.size]).toEqual([e.top, e.left, e.height, e.width, e.size]);
+          expect(Array.from(o.cells)).toEqual(e.cells);
+          expect(o.hash).toBe(new GridObject(o.top, o.left, o.shape).hash);
+        });
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
