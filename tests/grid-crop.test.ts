@@ -18,6 +18,23 @@ describe('bounds and crops of cells', () => {
     expect(cellBounds(g, 7, true)).toBeUndefined();
   });
 
+  it('cellBounds agrees with the extremes of the qualifying cells, found one by one', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 10, maxWidth: 10 }), fc.integer({ min: 0, max: 9 }), fc.boolean(), (x, colour, match) => {
+        const rows: number[] = [];
+        const columns: number[] = [];
+        for (let r = 0; r < x.height; r++) {
+          for (let c = 0; c < x.width; c++) {
+            if ((x.get(r, c) === colour) === match) rows.push(r), columns.push(c);
+          }
+        }
+        const expected = rows.length === 0 ? undefined : { top: Math.min(...rows), left: Math.min(...columns), bottom: Math.max(...rows), right: Math.max(...columns) };
+        expect(cellBounds(x, colour, match)).toEqual(expected);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('cropToCells cuts to the content or to a colour; null when there is none', () => {
     expect(cropToCells(g, 0, false)!.toRows()).toEqual([[2, 0], [0, 3]]);
     expect(cropToCells(G([[0, 8, 1, 8]]), 8, true)!.toRows()).toEqual([[8, 1, 8]]);

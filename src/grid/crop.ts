@@ -22,18 +22,30 @@ export interface Bounds {
  */
 export function cellBounds(grid: Grid, colour: number, match: boolean): Bounds | undefined {
   const { height, width, cells } = grid;
-  let top = height, left = width, bottom = -1, right = -1;
-  for (let r = 0; r < height; r++) {
-    const base = r * width;
-    for (let c = 0; c < width; c++) {
-      if ((cells[base + c] === colour) !== match) continue;
-      if (r < top) top = r;
-      if (r > bottom) bottom = r;
-      if (c < left) left = c;
-      if (c > right) right = c;
-    }
-  }
-  return bottom < 0 ? undefined : { top, left, bottom, right };
+  // Each side is found by scanning in from it, stopping at the first line that has such a cell:
+  // most grids have one near every edge, so few cells are read.
+  let top = 0;
+  while (top < height && !rowHas(cells, top * width, width, colour, match)) top++;
+  if (top === height) return undefined;
+  let bottom = height - 1;
+  while (bottom > top && !rowHas(cells, bottom * width, width, colour, match)) bottom--;
+  let left = 0;
+  while (!columnHas(cells, left, width, top, bottom, colour, match)) left++;
+  let right = width - 1;
+  while (right > left && !columnHas(cells, right, width, top, bottom, colour, match)) right--;
+  return { top, left, bottom, right };
+}
+
+/** True when the row starting at `base` has a cell that is (`match`) or is not the colour. */
+function rowHas(cells: Uint8Array, base: number, width: number, colour: number, match: boolean): boolean {
+  for (let c = 0; c < width; c++) if ((cells[base + c] === colour) === match) return true;
+  return false;
+}
+
+/** True when column `column`, rows top..bottom, has a cell that is (`match`) or is not the colour. */
+function columnHas(cells: Uint8Array, column: number, width: number, top: number, bottom: number, colour: number, match: boolean): boolean {
+  for (let r = top; r <= bottom; r++) if ((cells[r * width + column] === colour) === match) return true;
+  return false;
 }
 
 /** Copies the rectangle at (top, left) of the given size; the caller keeps it inside the grid. */
