@@ -9,6 +9,7 @@
  */
 import { HASH_MASK, type Grid } from '../grid/grid.ts';
 import type { Production } from './productions.ts';
+import { foldHash } from './tuple-hash.ts';
 import type { Candidate } from './value-store.ts';
 
 /** One call on the way from a goal's grid to the answer; `rest` are its other arguments (constant leaves). */
@@ -37,7 +38,7 @@ export interface GoalLimits {
 /** Hash of the first `count` grids of a value tuple. */
 export function demonstrationHash(values: readonly unknown[], count: number): number {
   let h = 0x1b873593;
-  for (let i = 0; i < count; i++) h = Math.imul(h ^ (values[i] as Grid).hash, 0x5bd1e995) ^ (h >>> 15);
+  for (let i = 0; i < count; i++) h = foldHash(h, (values[i] as Grid).hash);
   return h & HASH_MASK;
 }
 

@@ -17,6 +17,7 @@ import { HASH_MASK, type Grid } from '../grid/grid.ts';
 import type { GridObject } from '../grid/grid-object.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
 import { isBaseType, splitFunctionType, type BaseType, type Type } from '../language/types.ts';
+import { foldHash } from './tuple-hash.ts';
 
 /** At most this many probe objects per example input. */
 const MAXIMUM_PROBES = 48;
@@ -68,7 +69,7 @@ export class SectionProbes {
   static hash(type: Type, results: readonly unknown[]): number {
     const result = splitFunctionType(type)!.result;
     let h = 0x2545f491;
-    for (let i = 0; i < results.length; i++) h = Math.imul(h ^ hashValue(result, results[i]), 0x5bd1e995) ^ (h >>> 15);
+    for (let i = 0; i < results.length; i++) h = foldHash(h, hashValue(result, results[i]));
     return h & HASH_MASK;
   }
 

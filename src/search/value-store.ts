@@ -12,6 +12,7 @@ import type { BaseType, Type } from '../language/types.ts';
 import { hashValue, valuesEqual } from '../language/value-identity.ts';
 import type { Production } from './productions.ts';
 import { SectionProbes } from './section-probes.ts';
+import { foldHash } from './tuple-hash.ts';
 
 export interface Candidate {
   readonly type: Type;
@@ -88,7 +89,7 @@ export class ValueStore {
     const type = this.typeNames[typeId]!;
     if (this.isFunction[typeId]) return signature ? SectionProbes.hash(type, signature) : 0;
     let h = 0x9747b28c;
-    for (let i = 0; i < values.length; i++) h = Math.imul(h ^ hashValue(type as BaseType, values[i]), 0x5bd1e995) ^ (h >>> 15);
+    for (let i = 0; i < values.length; i++) h = foldHash(h, hashValue(type as BaseType, values[i]));
     return h & HASH_MASK;
   }
 
