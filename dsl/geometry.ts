@@ -14,7 +14,7 @@ import { paneColours, splitAtSeparatorLines } from '../src/grid/separator-lines.
 import { settleObjects } from '../src/grid/settle-objects.ts';
 import { slideTowardColour } from '../src/grid/slide-toward.ts';
 import { splitAcross, splitDown, splitIntoSquares } from '../src/grid/split.ts';
-import { fractalTile, repeatToSize, tile } from '../src/grid/tile.ts';
+import { fractalTile, fractalTileWith, repeatToSize, tile } from '../src/grid/tile.ts';
 import { translate } from '../src/grid/translate.ts';
 import { undoScaleUp, undoTile } from '../src/grid/undo.ts';
 import { primitive } from '../src/library/primitive.ts';
@@ -95,6 +95,20 @@ export const geometryPrimitives = [
       output: [[1, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 0], [0, 0, 0, 1]],
     },
     run: fractalTile,
+  }),
+  primitive({
+    name: 'fractal_tile_with',
+    category: 'geometry',
+    parameters: ['Grid', 'Grid'],
+    result: 'Grid',
+    bits: 7,
+    doc: 'Each non-background cell of the first grid becomes a copy of the second grid, and each background cell a blank block of the same size.',
+    example: {
+      input: [[2, 0], [1, 2]],
+      expression: 'fractal_tile_with(keep_colour(grid, #2), grid)',
+      output: [[2, 0, 0, 0], [1, 2, 0, 0], [0, 0, 2, 0], [0, 0, 1, 2]],
+    },
+    run: fractalTileWith,
   }),
   primitive({
     name: 'join_right',

@@ -2,7 +2,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Grid } from '../src/grid/grid.ts';
-import { fractalTile, repeatToSize, tile } from '../src/grid/tile.ts';
+import { backgroundColour } from '../src/grid/components.ts';
+import { fractalTile, fractalTileWith, repeatToSize, tile } from '../src/grid/tile.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 
 const G = Grid.fromRows;
@@ -23,6 +24,23 @@ describe('tiling', () => {
   it('fractalTile puts a copy of the grid where its cells are drawn', () => {
     expect(fractalTile(G([[1, 0], [0, 1]]))!.toRows()).toEqual([[1, 0, 0, 0], [0, 1, 0, 0], [0, 0, 1, 0], [0, 0, 0, 1]]);
     expect(fractalTile(Grid.filled(6, 6, 1))).toBeNull();
+  });
+
+  it('fractalTileWith puts a copy of the second grid where the first has a drawn cell, else its background', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 5, maxWidth: 5 }), arbitraryGrid({ maxHeight: 5, maxWidth: 5 }), (mask, pattern) => {
+        const t = fractalTileWith(mask, pattern)!;
+        const background = backgroundColour(mask);
+        expect([t.height, t.width]).toEqual([mask.height * pattern.height, mask.width * pattern.width]);
+        for (let r = 0; r < t.height; r++) {
+          for (let c = 0; c < t.width; c++) {
+            const drawn = mask.get(Math.floor(r / pattern.height), Math.floor(c / pattern.width)) !== background;
+            expect(t.get(r, c)).toBe(drawn ? pattern.get(r % pattern.height, c % pattern.width) : background);
+          }
+        }
+      }),
+    );
+    expect(fractalTileWith(Grid.filled(6, 6, 1), Grid.filled(6, 1, 2))).toBeNull();
   });
 
   it('every cell of a tiling is the cell of the grid at the same place modulo its size', () => {

@@ -1,4 +1,7 @@
-/** Tiling: a grid repeated to a size or a number of times, and the grid made of copies of itself where its cells are drawn. */
+/**
+ * Tiling: a grid repeated to a size or a number of times, and the grid made of copies of itself
+ * (or of another grid) where its cells are drawn.
+ */
 import { backgroundColour } from './components.ts';
 import { Grid, getSizeCap, shapeAllowed, newCells, copyRun } from './grid.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
@@ -25,16 +28,24 @@ export function tile(g: Grid, down: number, across: number): Grid | null {
 
 /** Each non-background cell becomes a copy of the whole grid, each background cell a blank block; null past the size cap. */
 export function fractalTile(g: Grid): Grid | null {
+  return fractalTileWith(g, g);
+}
+
+/**
+ * Each non-background cell of `g` becomes a copy of `pattern`, each background cell a block of
+ * the pattern's size in g's background colour; null past the size cap.
+ */
+export function fractalTileWith(g: Grid, pattern: Grid): Grid | null {
   const { height, width, cells } = g;
-  const outHeight = height * height;
-  const outWidth = width * width;
+  const outHeight = height * pattern.height;
+  const outWidth = width * pattern.width;
   if (!shapeAllowed(outHeight, outWidth)) return null;
   const background = backgroundColour(g);
   const out = newCells(outHeight * outWidth).fill(background);
   for (let br = 0; br < height; br++) {
     for (let bc = 0; bc < width; bc++) {
       if (cells[br * width + bc] === background) continue;
-      for (let r = 0; r < height; r++) copyRun(cells, r * width, out, (br * height + r) * outWidth + bc * width, width);
+      for (let r = 0; r < pattern.height; r++) copyRun(pattern.cells, r * pattern.width, out, (br * pattern.height + r) * outWidth + bc * pattern.width, pattern.width);
     }
   }
   return new Grid(outHeight, outWidth, out);
