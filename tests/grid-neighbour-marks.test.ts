@@ -28,6 +28,32 @@ describe('markBeside', () => {
     expect(markBeside(G([[1, 0, 1]]), 0, 6, 'edges').toRows()).toEqual([[1, 0, 1]]);
   });
 
+  it('marks exactly the background cells that have a neighbour of the source colour (the definition, cell by cell)', () => {
+    const steps = {
+      edges: [[-1, 0], [1, 0], [0, -1], [0, 1]],
+      corners: [[-1, -1], [-1, 1], [1, -1], [1, 1]],
+      block: [[-1, -1], [-1, 0], [-1, 1], [0, -1], [0, 0], [0, 1], [1, -1], [1, 0], [1, 1]],
+    } as const;
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 8, maxWidth: 8 }), fc.integer({ min: -1, max: 9 }), fc.constantFrom('edges', 'corners', 'block'), (x, source, neighbourhood: 'edges' | 'corners' | 'block') => {
+        const background = backgroundOf(x);
+        const marked = markBeside(x, source, 10, neighbourhood);
+        for (let r = 0; r < x.height; r++) {
+          for (let c = 0; c < x.width; c++) {
+            const beside = steps[neighbourhood].some(([dr, dc]) => {
+              const nr = r + dr;
+              const nc = c + dc;
+              if (nr < 0 || nc < 0 || nr >= x.height || nc >= x.width) return false;
+              const v = x.get(nr, nc);
+              return source === ANY_DRAWN_CELL ? v !== background : v === source;
+            });
+            expect(marked.get(r, c)).toBe(x.get(r, c) === background && beside ? 10 : x.get(r, c));
+          }
+        }
+      }),
+    );
+  });
+
   it('only background cells change; edges and corners together mark what the block marks', () => {
     fc.assert(
       fc.property(arbitraryGrid(), fc.integer({ min: 1, max: 9 }), (x, source) => {

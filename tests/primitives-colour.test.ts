@@ -331,6 +331,17 @@ describe('stripes: the most frequent colour per row or column', () => {
     expect(gridOf('restore_stripes', down).toRows()).toEqual([[4, 6, 6], [4, 6, 6], [4, 6, 6]]);
   });
 
+  it('restore_stripes is the majority per row or per column, whichever agrees with more cells (rows on ties)', () => {
+    fc.assert(
+      fc.property(arbitraryGrid(), (g) => {
+        const rows = gridOf('majority_per_row', g);
+        const columns = gridOf('majority_per_column', g);
+        const agreement = (x: Grid) => x.cells.reduce((n, v, i) => n + (v === g.cells[i] ? 1 : 0), 0);
+        expect(gridOf('restore_stripes', g).equals(agreement(columns) > agreement(rows) ? columns : rows)).toBe(true);
+      }),
+    );
+  });
+
   it('majority per column is majority per row seen transposed', () => {
     fc.assert(
       fc.property(arbitraryGrid(), (g) => {
