@@ -133,7 +133,7 @@ describe('the solver', () => {
           });
         }
       }),
-      { numRuns: 40, seed: 20261202 },
+      { numRuns: 100, seed: 20261202 },
     );
     // Each kind of program was drawn and checked several times.
     for (const [flavour, count] of Object.entries(checked)) expect(count, flavour).toBeGreaterThanOrEqual(3);
