@@ -98,16 +98,11 @@ function regionsEnclosed(height: number, width: number, cells: Uint8Array, open:
 /** Regions of background cells (edge neighbours) that cannot reach the border, in reading order. */
 export function enclosedRegions(grid: Grid): readonly GridObject[] {
   const background = backgroundColour(grid);
-  const enclosed = enclosedCells(grid, background);
-  const cells = newCells(enclosed.length);
-  let any = false;
-  for (let i = 0; i < enclosed.length; i++) {
-    if (enclosed[i]) {
-      cells[i] = background;
-      any = true;
-    } else cells[i] = OUTSIDE;
-  }
-  if (!any) return [];
+  const n = grid.cells.length;
+  const enclosed = markWork.take(n);
+  if (markEnclosed(grid.height, grid.width, grid.cells, background, enclosed) === 0) return [];
+  const cells = newCells(n);
+  for (let i = 0; i < n; i++) cells[i] = enclosed[i] ? background : OUTSIDE;
   return components(new Grid(grid.height, grid.width, cells), { diagonal: false, multicolour: false, background: OUTSIDE });
 }
 
