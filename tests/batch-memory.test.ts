@@ -1,10 +1,11 @@
 // The memory cap per worker: one number sets the search's byte cap and the worker's heap limit
 // so that they agree (the heap limit leaves room for twice the counted bytes); reaching the cap
 // stops the task with the reason 'memory', and the run goes on with the next task.
+import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_MEMORY_CAP_MB, workerMemory } from '../src/batch/memory-cap.ts';
-import { solveFiles } from '../src/batch/solve-files.ts';
+import { solveFiles, workerDeathReport } from '../src/batch/solve-files.ts';
 
 const demo = new URL('../tasks-demo/', import.meta.url).pathname;
 
@@ -25,5 +26,21 @@ describe('the memory cap per worker', () => {
     expect(reports[0]!.status).toBe('not found');
     expect(reports[0]!.reason).toBe('memory');
     expect(reports[1]!.status).not.toBe('error');
+  });
+
+  it('tells a worker that filled its heap from one that crashed, by what a real V8 process writes as it dies', () => {
+    // A real Node process with a 16 MiB heap that keeps every array it makes: V8 aborts it.
+    const full = spawnSync(process.execPath, ['--max-old-space-size=16', '-e', 'const kept = []; for (;;) kept.push(new Array(10000).fill(kept.length));'], { encoding: 'utf8' });
+    expect(full.status === 0 && full.signal === null).toBe(false);
+    const memory = workerDeathReport('a.json', full.stderr, full.status, full.signal, 1500, 1);
+    expect(memory.reason).toBe('memory');
+    expect(memory.status).toBe('not found');
+    // A process that throws is a crash, and the report names how it ended and its last words.
+    const thrown = spawnSync(process.execPath, ['-e', 'throw new Error("a broken primitive")'], { encoding: 'utf8' });
+    const crash = workerDeathReport('a.json', thrown.stderr, thrown.status, thrown.signal, 1500, 1);
+    expect(crash.status).toBe('error');
+    expect(crash.failure).toBe('worker crashed');
+    expect(crash.error).toContain('exit code 1');
+    expect(crash.error).toContain('a broken primitive');
   });
 });

@@ -1,5 +1,5 @@
 /**
- * The memory cap of a worker thread. One number, in megabytes (10^6 bytes), sets two limits
+ * The memory cap of a worker process. One number, in megabytes (10^6 bytes), sets two limits
  * that must agree:
  *
  * - the search's own count: the bytes its value store holds (every kept value with the cells
@@ -32,7 +32,7 @@ export const HEAP_BASE_MIB = 512;
 export interface WorkerMemory {
   /** The search's cap on the bytes it holds (SolveOptions.maxStoreBytes). */
   readonly maxStoreBytes: number;
-  /** The worker's heap limit in MiB (resourceLimits.maxOldGenerationSizeMb). */
+  /** The worker's heap limit in MiB (its `--max-old-space-size`). */
   readonly heapMib: number;
 }
 

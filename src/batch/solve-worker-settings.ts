@@ -1,9 +1,9 @@
-/** Settings a worker thread takes over from the process that started it. */
+/** Settings a worker process takes over from the process that started it (through the environment). */
 import { setSizeCap } from '../grid/grid.ts';
 import { defaultLibrary } from '../../dsl/index.ts';
 import type { Library } from '../library/library.ts';
 
-/** Environment variable carrying the grid size cap (`pithy --size-cap N`) into worker threads. */
+/** Environment variable carrying the grid size cap (`pithy --size-cap N`) into worker processes. */
 export const SIZE_CAP_VARIABLE = 'PITHY_SIZE_CAP';
 
 export function applyWorkerSettings(): void {
@@ -11,7 +11,7 @@ export function applyWorkerSettings(): void {
   if (cap !== undefined) setSizeCap(Number(cap));
 }
 
-/** Primitive bits from a priors file, as plain data that crosses to worker threads (name → bits). */
+/** Primitive bits from a priors file, as plain data that crosses to worker processes (name → bits). */
 export type PriorBits = Readonly<Record<string, number>>;
 
 let priorsLibrary: { key: string; library: Library } | undefined;

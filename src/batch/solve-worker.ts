@@ -1,5 +1,10 @@
-/** Worker thread: solves the task files it is sent, one at a time. */
-import { parentPort } from 'node:worker_threads';
+/**
+ * Worker process: solves the task files it is sent over the IPC channel, one at a time.
+ *
+ * The process that started it governs it: Ctrl-C and SIGTERM (which reach the whole process
+ * group) are left to that process, which stops its workers itself; and when that process
+ * goes away without stopping them (killed outright), the channel closes and the worker quits.
+ */
 import type { SolveOptions } from '../search/solve.ts';
 import { errorReport, solveFile } from './solve-file.ts';
 import { applyWorkerSettings, libraryWithPriors, type PriorBits } from './solve-worker-settings.ts';
@@ -13,12 +18,16 @@ export interface WorkerRequest {
   readonly priors?: PriorBits;
 }
 
-parentPort!.on('message', (request: WorkerRequest) => {
+process.on('SIGINT', () => {});
+process.on('SIGTERM', () => {});
+process.on('disconnect', () => process.exit(0));
+
+process.on('message', (request: WorkerRequest) => {
   let report;
   try {
     report = solveFile(request.file, { ...request.options, library: libraryWithPriors(request.priors) });
   } catch (error) {
     report = errorReport(request.file, `${request.file}: the solver stopped with an internal error: ${(error as Error).message}`, 'internal error');
   }
-  parentPort!.postMessage({ id: request.id, report });
+  process.send!({ id: request.id, report });
 });

@@ -1,4 +1,4 @@
-// Worker threads start without tsx's loader; register it, then load the TypeScript worker.
+// Worker processes start without tsx's loader; register it, then load the TypeScript worker.
 import { register } from 'tsx/esm/api';
 
 register();

@@ -49,7 +49,7 @@ export function buildProgram(): Command {
       } catch (error) {
         program.error(`error: option '--size-cap': ${(error as Error).message}`, { exitCode: 2 });
       }
-      // Worker threads read it from the environment they inherit.
+      // Worker processes read it from the environment they inherit.
       process.env[SIZE_CAP_VARIABLE] = String(cap);
     });
   registerRunCommand(program);

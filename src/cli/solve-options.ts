@@ -33,7 +33,7 @@ export function addSolveFlags(command: Command): Command {
   return command
     .option('--time-limit <seconds>', 'wall-time limit per task', positiveNumber('--time-limit', false), 20)
     .option('--attempts <n>', 'attempts per test input, from the cheapest programs with distinct outputs', positiveNumber('--attempts', true), 2)
-    .option('--jobs <n>', 'tasks solved in parallel (worker threads)', positiveNumber('--jobs', true), 1)
+    .option('--jobs <n>', 'tasks solved in parallel (worker processes)', positiveNumber('--jobs', true), 1)
     .option('--max-candidates <n>', 'cap on candidate programs evaluated per task', positiveNumber('--max-candidates', true))
     .option('--memory-cap <MB>', 'memory cap per worker in megabytes: once the search holds this much it keeps no more values, tries only last steps on those it holds, and reports the reason memory if nothing is found', positiveNumber('--memory-cap', false), DEFAULT_MEMORY_CAP_MB)
     .option('--no-retry', 'when resuming, keep tasks whose worker crashed or overran instead of solving them again')

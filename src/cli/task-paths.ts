@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { taskFiles, TaskFileError } from '../tasks/read-task.ts';
 
 /**
- * `-` (standard input) becomes a file the worker threads can read by path: the text is copied
+ * `-` (standard input) becomes a file the worker processes can read by path: the text is copied
  * to `stdin.json` in a fresh temporary folder, removed when the process exits.
  */
 function standardInputFile(): string {
