@@ -517,6 +517,60 @@ describe('repeating patterns, empty squares, diagonal rays and neighbours, exten
     expect(checked / runs).toBeGreaterThan(0.5);
   });
 
+  it('complete_repeating_pattern fills from the first tile (by area, then height, then shift) that agrees with the known cells and covers every hole, as a search written from the definition does', () => {
+    // The definition, tile by tile with no shortcut (small grids: the real search's comparison budget is never reached).
+    const reference = (g: Grid, hole: number): Grid | typeof FAILURE => {
+      const size = g.height * g.width;
+      const holes = g.cells.filter((v) => v === hole).length;
+      if (holes === 0 || holes === size) return FAILURE;
+      for (let area = 1; area * 2 <= size; area++) {
+        for (let ph = 1; ph <= Math.min(g.height, area); ph++) {
+          if (area % ph !== 0 || area / ph > g.width) continue;
+          const pw = area / ph;
+          for (let shift = 0; shift < (ph === 1 && g.height > 1 ? pw : 1); shift++) {
+            const tileOf = (r: number, c: number) => (r % ph) * pw + ((((c - shift * Math.floor(r / ph)) % pw) + pw) % pw);
+            const tile = new Map<number, number>();
+            let agrees = true;
+            for (let r = 0; r < g.height; r++) {
+              for (let c = 0; c < g.width; c++) {
+                const v = g.get(r, c);
+                if (v === hole) continue;
+                const t = tileOf(r, c);
+                if (tile.has(t) && tile.get(t) !== v) agrees = false;
+                tile.set(t, v);
+              }
+            }
+            if (!agrees) continue;
+            const out: number[][] = [];
+            let covered = true;
+            for (let r = 0; r < g.height; r++) {
+              const row: number[] = [];
+              for (let c = 0; c < g.width; c++) {
+                const v = g.get(r, c);
+                if (v !== hole) row.push(v);
+                else if (tile.has(tileOf(r, c))) row.push(tile.get(tileOf(r, c))!);
+                else covered = false;
+              }
+              out.push(row);
+            }
+            if (covered) return G(out);
+          }
+        }
+      }
+      return FAILURE;
+    };
+    fc.assert(
+      fc.property(fc.oneof({ arbitrary: punchedWallpaper, weight: 2 }, { arbitrary: anyGridWithHoles, weight: 1 }), ({ grid: g, hole }) => {
+        fc.pre(g.height * g.width <= 100);
+        const out = apply('complete_repeating_pattern', g, hole);
+        const expected = reference(g, hole);
+        if (expected === FAILURE) expect(out).toBe(FAILURE);
+        else expect(rows(out as Grid)).toEqual(rows(expected));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('complete_repeating_pattern restores a punched two-by-two wallpaper and a diagonal one (worked by hand)', () => {
     expect(rows(apply('complete_repeating_pattern', G([[1, 2, 1, 2, 1], [3, 4, 0, 4, 3], [1, 0, 1, 2, 1]]), 0))).toEqual([
       [1, 2, 1, 2, 1],

@@ -13,6 +13,9 @@ const rowWork = new WorkArray(Int32Array);
 const columnWork = new WorkArray(Int32Array);
 const tileWork = new WorkArray(Int8Array);
 const stampWork = new WorkArray(Int32Array);
+const acrossWork = new WorkArray(Int8Array);
+const downWork = new WorkArray(Int8Array);
+const slantWork = new WorkArray(Int8Array);
 
 /** How many known cells the search may compare in all, over every tile it tries. */
 const CHECK_BUDGET = 60_000;
@@ -27,6 +30,12 @@ const CHECK_BUDGET = 60_000;
  * row high. Tiles are tried by area, then height, then
  * shift, so the answer is deterministic. The search gives up (null) after a fixed number
  * of cell comparisons.
+ *
+ * Before a tile is tried cell by cell, two checks it needs are looked up (each worked out once
+ * per call and shared by every tile that needs it): known cells `pw` apart in a row agree, and
+ * known cells `ph` apart in a column agree (for a shifted one-row tile: each known cell agrees
+ * with the known cell one row down and `shift` columns right). Most tiles fail one of them,
+ * so they are not tried at all.
  */
 export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null {
   const { height, width, cells } = grid;
@@ -63,6 +72,22 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
   let trial = 0;
   // A fixed budget of cell checks keeps the worst case bounded on large, nearly repeating grids.
   let budget = CHECK_BUDGET;
+  // Per distance, whether known cells that far apart agree: -1 not yet worked out, 0 no, 1 yes.
+  const across = acrossWork.take(width + 1).fill(-1, 0, width + 1);
+  const down = downWork.take(height + 1).fill(-1, 0, height + 1);
+  const slant = slantWork.take(width).fill(-1, 0, width);
+  // Known cells (r, c) and (r + rows, c + columns) agree wherever both lie in the grid; -1 when
+  // the budget runs out. The cells are taken in the scattered order, so a disagreement shows early.
+  const agreeApart = (rows: number, columns: number): number => {
+    const step = rows * width + columns;
+    for (let k = 0; k < knownCount; k++) {
+      if (knownRow[k]! + rows >= height || knownColumn[k]! + columns >= width) continue;
+      if (--budget < 0) return -1;
+      const there = cells[known[k]! + step]!;
+      if (there !== hole && there !== cells[known[k]!]) return 0;
+    }
+    return 1;
+  };
   const classOf = (i: number, ph: number, pw: number, shift: number): number => {
     const r = (i / width) | 0;
     const c = i - r * width;
@@ -79,7 +104,16 @@ export function completeRepeatingPattern(grid: Grid, hole: number): Grid | null 
       if (pw > width) continue;
       // Shifted bands are tried only one row high: diagonal stripes, each row the one above moved.
       const shifts = ph === 1 && height > 1 ? pw : 1;
+      if (across[pw] === -1 && (across[pw] = agreeApart(0, pw)) === -1) return null;
+      if (across[pw] === 0) continue;
       for (let shift = 0; shift < shifts; shift++) {
+        if (shift === 0 || ph > 1) {
+          if (down[ph] === -1 && (down[ph] = agreeApart(ph, 0)) === -1) return null;
+          if (down[ph] === 0) continue;
+        } else {
+          if (slant[shift] === -1 && (slant[shift] = agreeApart(1, shift)) === -1) return null;
+          if (slant[shift] === 0) continue;
+        }
         trial++;
         let agrees = true;
         for (let k = 0; k < knownCount && agrees; k++) {
