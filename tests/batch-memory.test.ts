@@ -1,7 +1,9 @@
 // The memory cap per worker: one number sets the search's byte cap and the worker's heap limit
 // so that they agree (the heap limit leaves room for twice the counted bytes); reaching the cap
 // stops the task with the reason 'memory', and the run goes on with the next task.
-import { spawnSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_MEMORY_CAP_MB, workerMemory } from '../src/batch/memory-cap.ts';
@@ -42,5 +44,37 @@ describe('the memory cap per worker', () => {
     expect(crash.failure).toBe('worker crashed');
     expect(crash.error).toContain('exit code 1');
     expect(crash.error).toContain('a broken primitive');
+  });
+
+  it('reports a task whose worker is killed as a crash, and the next task gets a fresh worker', async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'pithy-killed-'));
+    try {
+      // Noise in, other noise out: no program fits, so the search runs until it is stopped.
+      const noise = (seed: number) => Array.from({ length: 9 }, (_, r) => Array.from({ length: 9 }, (_, c) => (r * 7 + c * 3 + seed * 5 + ((r * c) % 4)) % 10));
+      const hopeless = join(folder, 'hopeless.json');
+      writeFileSync(hopeless, JSON.stringify({ train: [{ input: noise(1), output: noise(2) }, { input: noise(3), output: noise(8) }], test: [{ input: noise(5), output: noise(6) }] }));
+      const files = [hopeless, join(demo, 'marker-buoys.json')];
+      // Kill the worker (the only child of this process besides tools) as soon as it exists.
+      const killer = setInterval(() => {
+        let pids: string[] = [];
+        try {
+          pids = execFileSync('ps', ['-o', 'pid=,args=', '--ppid', String(process.pid)], { encoding: 'utf8' }).split('\n').filter((l) => l.includes('worker-entry'));
+        } catch {
+          return;
+        }
+        for (const line of pids) {
+          process.kill(Number(line.trim().split(/\s+/)[0]), 'SIGKILL');
+          clearInterval(killer);
+        }
+      }, 100);
+      const reports = await solveFiles(files, { solve: { attempts: 1, timeLimitSeconds: 60 } });
+      clearInterval(killer);
+      expect(reports[0]!.status).toBe('error');
+      expect(reports[0]!.failure).toBe('worker crashed');
+      expect(reports[0]!.error).toContain('signal SIGKILL');
+      expect(reports[1]!.status).toBe('found');
+    } finally {
+      rmSync(folder, { recursive: true, force: true });
+    }
   });
 });
