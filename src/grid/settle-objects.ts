@@ -3,16 +3,17 @@
  * touches the border or another object, keeping their shapes.
  */
 import { backgroundColour, components } from './components.ts';
-import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid, newCells } from './grid.ts';
 import { paintObjectInto } from './paint-object.ts';
 import { WorkArray } from './work-array.ts';
 
-/** Work arrays: which object holds each cell (index + 1, 0 for none), each object's shift, the order objects move in. */
+/** Work arrays: which object holds each cell (index + 1, 0 for none), each object's shift, the order objects move in, each object's cells. */
 const ownerWork = new WorkArray(Int32Array);
 const shiftWork = new WorkArray(Int32Array);
 const orderWork = new WorkArray(Int32Array);
 const reachWork = new WorkArray(Int32Array);
+const startWork = new WorkArray(Int32Array);
+const offsetWork = new WorkArray(Int32Array);
 
 /**
  * Moves every object (non-background cells joined through edges and corners, any colours)
@@ -40,50 +41,56 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
     }
     order[j] = i;
   }
+  // Each object's cells as offsets into the grid, listed once (starts[index] .. starts[index + 1]):
+  // a step then checks and marks only the object's cells, and the border by its box alone.
+  const starts = startWork.take(count + 1);
+  let total = 0;
+  for (let index = 0; index < count; index++) total += objects[index]!.size;
+  const offsets = offsetWork.take(total);
+  let at = 0;
+  for (let index = 0; index < count; index++) {
+    starts[index] = at;
+    const o = objects[index]!;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) if (o.cells[r * o.width + c] !== EMPTY) offsets[at++] = (o.top + r) * width + o.left + c;
+    }
+  }
+  starts[count] = at;
   // Objects fall one step at a time, nearest the side first in each round, each blocked by the
   // border and by every other object where it is then: an object whose box reaches past another's
   // cannot pass through it, and no cell is ever covered twice.
   const owner = ownerWork.take(height * width).fill(0, 0, height * width);
   const shift = shiftWork.take(count).fill(0, 0, count);
-  for (let index = 0; index < count; index++) place(objects[index]!, owner, width, 0, 0, index + 1);
+  for (let index = 0; index < count; index++) for (let k = starts[index]!; k < starts[index + 1]!; k++) owner[offsets[k]!] = index + 1;
+  const step = rowStep * width + columnStep;
   for (let moved = true; moved; ) {
     moved = false;
     for (let k = 0; k < count; k++) {
       const index = order[k]!;
       const o = objects[index]!;
       const d = shift[index]! + 1;
-      if (!fits(o, owner, height, width, rowStep * d, columnStep * d, index + 1)) continue;
-      place(o, owner, width, rowStep * (d - 1), columnStep * (d - 1), 0);
+      // The box stays in the grid (it is tight: each of its sides holds a cell of the object).
+      const top = o.top + rowStep * d;
+      const left = o.left + columnStep * d;
+      if (top < 0 || left < 0 || top + o.height > height || left + o.width > width) continue;
+      const mark = index + 1;
+      const from = starts[index]!;
+      const to = starts[index + 1]!;
+      const ahead = step * d;
+      let free = true;
+      for (let j = from; j < to && free; j++) {
+        const there = owner[offsets[j]! + ahead]!;
+        if (there !== 0 && there !== mark) free = false;
+      }
+      if (!free) continue;
+      const behind = ahead - step;
+      for (let j = from; j < to; j++) owner[offsets[j]! + behind] = 0;
+      for (let j = from; j < to; j++) owner[offsets[j]! + ahead] = mark;
       shift[index] = d;
-      place(o, owner, width, rowStep * d, columnStep * d, index + 1);
       moved = true;
     }
   }
   const out = newCells(height * width).fill(background);
   for (let index = 0; index < count; index++) paintObjectInto(out, height, width, objects[index]!, undefined, rowStep * shift[index]!, columnStep * shift[index]!);
   return new Grid(height, width, out);
-}
-
-/** Marks the object's cells, shifted, with `mark` in the owner map. */
-function place(o: GridObject, owner: Int32Array, width: number, rowShift: number, columnShift: number, mark: number): void {
-  for (let r = 0; r < o.height; r++) {
-    for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] !== EMPTY) owner[(o.top + r + rowShift) * width + (o.left + c + columnShift)] = mark;
-    }
-  }
-}
-
-/** True when every cell of the object, shifted, lies in the grid on a cell free or its own (`mark`). */
-function fits(o: GridObject, owner: Int32Array, height: number, width: number, rowShift: number, columnShift: number, mark: number): boolean {
-  for (let r = 0; r < o.height; r++) {
-    const gr = o.top + r + rowShift;
-    for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] === EMPTY) continue;
-      const gc = o.left + c + columnShift;
-      if (gr < 0 || gr >= height || gc < 0 || gc >= width) return false;
-      const there = owner[gr * width + gc]!;
-      if (there !== 0 && there !== mark) return false;
-    }
-  }
-  return true;
 }
