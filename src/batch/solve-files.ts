@@ -8,6 +8,7 @@
  * reported), so what was reported is exactly what finished.
  */
 import { fork, type ChildProcess } from 'node:child_process';
+import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import type { SolveOptions } from '../search/solve.ts';
 import { DEFAULT_MEMORY_CAP_MB, workerMemory } from './memory-cap.ts';
@@ -38,10 +39,14 @@ export interface BatchOptions {
  *   helper threads, which with one worker per core take time from the other worker. The same
  *   work (12 training tasks to 2,000,000 candidates each, two workers) took 80.6 s against
  *   84.6 s with the collector's helper threads (three runs each, BENCHMARKS.md): about 5%.
- *   A V8 flag holds for a whole process, which is why the workers are processes, not threads.
+ *   So when there are as many workers as cores, they run with `--single-threaded-gc`. A V8
+ *   flag holds for a whole process, which is why the workers are processes, not threads.
  */
-function workerFlags(heapMib: number): string[] {
-  return ['--single-threaded-gc', '--max-semi-space-size=64', `--max-old-space-size=${heapMib}`];
+function workerFlags(heapMib: number, jobs: number): string[] {
+  const flags = ['--max-semi-space-size=64', `--max-old-space-size=${heapMib}`];
+  // With a core to spare, the helper threads take nothing from another worker and speed this one.
+  if (jobs >= availableParallelism()) flags.unshift('--single-threaded-gc');
+  return flags;
 }
 
 const ENTRY = fileURLToPath(new URL('./worker-entry.js', import.meta.url));
@@ -90,7 +95,7 @@ export async function solveFiles(files: readonly string[], options: BatchOptions
   const runLane = async (): Promise<void> => {
     let worker: WorkerProcess | undefined;
     const fresh = (): WorkerProcess => {
-      const child = fork(ENTRY, [], { execArgv: workerFlags(memory.heapMib), serialization: 'advanced', stdio: ['ignore', 'inherit', 'pipe', 'ipc'] });
+      const child = fork(ENTRY, [], { execArgv: workerFlags(memory.heapMib, jobs), serialization: 'advanced', stdio: ['ignore', 'inherit', 'pipe', 'ipc'] });
       const made: WorkerProcess = { child, errors: '' };
       child.stderr!.setEncoding('utf8');
       child.stderr!.on('data', (text: string) => (made.errors = (made.errors + text).slice(-ERROR_TAIL)));
