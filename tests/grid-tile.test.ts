@@ -2,9 +2,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Grid } from '../src/grid/grid.ts';
-import { backgroundColour } from '../src/grid/components.ts';
 import { fractalTile, fractalTileWith, repeatToSize, tile } from '../src/grid/tile.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
+import { backgroundOf } from './support/background-oracle.ts';
 
 const G = Grid.fromRows;
 
@@ -30,7 +30,7 @@ describe('tiling', () => {
     fc.assert(
       fc.property(arbitraryGrid({ maxHeight: 5, maxWidth: 5 }), arbitraryGrid({ maxHeight: 5, maxWidth: 5 }), (mask, pattern) => {
         const t = fractalTileWith(mask, pattern)!;
-        const background = backgroundColour(mask);
+        const background = backgroundOf(mask);
         expect([t.height, t.width]).toEqual([mask.height * pattern.height, mask.width * pattern.width]);
         for (let r = 0; r < t.height; r++) {
           for (let c = 0; c < t.width; c++) {

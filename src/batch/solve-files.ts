@@ -109,7 +109,7 @@ export async function solveFiles(files: readonly string[], options: BatchOptions
       while (next < files.length && !stop.signal.aborted) {
         const index = next++;
         const file = files[index]!;
-        if (worker && (worker.child.exitCode !== null || worker.child.signalCode !== null)) worker = undefined;
+        if (worker && hasExited(worker.child)) worker = undefined;
         worker ??= fresh();
         const started = performance.now();
         const seconds = () => (performance.now() - started) / 1000;
@@ -192,9 +192,14 @@ export function workerDeathReport(file: string, errors: string, code: number | n
   return errorReport(file, `${file}: the solver's worker died (${how})${said ? `: ${said}` : ''}`, 'worker crashed', seconds);
 }
 
+/** True once the process has ended (by itself or by a signal). */
+function hasExited(child: ChildProcess): boolean {
+  return child.exitCode !== null || child.signalCode !== null;
+}
+
 /** Stops a worker that is waiting for work, and resolves once it has gone. */
 function ended(child: ChildProcess): Promise<void> {
-  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  if (hasExited(child)) return Promise.resolve();
   return new Promise((resolve) => {
     child.once('exit', () => resolve());
     child.kill('SIGKILL');
