@@ -71,6 +71,42 @@ describe('objectKeys', () => {
     expect(objectKeys(lagoon, objects, 'smallest')).toEqual([0, 1, 1, 1]);
   });
 
+  it('tells objects above, below and beside a line drawn across the grid, and symmetric boxes', () => {
+    //   0 1 0 0 3 0
+    //   0 0 0 0 3 0
+    //   6 6 6 6 6 6   <- a line: a whole row of one colour
+    //   2 2 0 0 3 0
+    //   2 0 0 0 3 4
+    // (the 3s are a column but not a line: the 6 crosses them)
+    const quay = G([
+      [0, 1, 0, 0, 3, 0],
+      [0, 0, 0, 0, 3, 0],
+      [6, 6, 6, 6, 6, 6],
+      [2, 2, 0, 0, 3, 0],
+      [2, 0, 0, 0, 3, 4],
+    ]);
+    const objects = objectsOf(quay, 'by_colour');
+    // reading order: 1 (0,1), upper 3 (0,4), the 6 line (2,0), the 2s (3,0), lower 3 (3,4), 4 (4,5)
+    expect(objects.map((o) => [o.top, o.left, o.mainColour])).toEqual([[0, 1, 1], [0, 4, 3], [2, 0, 6], [3, 0, 2], [3, 4, 3], [4, 5, 4]]);
+    expect(objectKeys(quay, objects, 'above_line')).toEqual([1, 1, 0, 0, 0, 0]);
+    expect(objectKeys(quay, objects, 'below_line')).toEqual([0, 0, 0, 1, 1, 1]);
+    // no column is wholly one colour
+    expect(objectKeys(quay, objects, 'left_of_line')).toEqual([0, 0, 0, 0, 0, 0]);
+    expect(objectKeys(quay, objects, 'right_of_line')).toEqual([0, 0, 0, 0, 0, 0]);
+    // the 2s make an L (xx/x.): no mirror keeps it; a single cell, a bar and the line do
+    expect(objectKeys(quay, objects, 'symmetric')).toEqual([1, 1, 1, 0, 1, 1]);
+    //   5 0 8 0 0
+    //   5 0 8 0 7
+    //   5 0 8 0 0
+    const wall = G([[5, 0, 8, 0, 0], [5, 0, 8, 0, 7], [5, 0, 8, 0, 0]]);
+    const parts = objectsOf(wall, 'by_colour');
+    expect(parts.map((o) => o.mainColour)).toEqual([5, 8, 7]);
+    // two columns are lines (5 and 8): the 5 lies left of the 8, the 7 right of both
+    expect(objectKeys(wall, parts, 'left_of_line')).toEqual([1, 0, 0]);
+    expect(objectKeys(wall, parts, 'right_of_line')).toEqual([0, 1, 1]);
+    expect(objectKeys(wall, parts, 'above_line')).toEqual([0, 0, 0]);
+  });
+
   it('gives equal sizes one rank', () => {
     const g = G([[1, 0, 2], [0, 0, 0], [3, 3, 0]]);
     expect(objectKeys(g, objectsOf(g, 'by_colour'), 'size_rank')).toEqual([2, 2, 1]);

@@ -39,6 +39,11 @@ export const OBJECT_PROPERTIES = [
   'unique_colour',
   'largest',
   'smallest',
+  'symmetric',
+  'above_line',
+  'below_line',
+  'left_of_line',
+  'right_of_line',
 ] as const;
 export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
 
@@ -53,7 +58,10 @@ export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
  * border, and no background cell beside it reaches the border through background: it lies in a
  * region another object closes), `unique_shape` / `unique_colour` (no other object of the grid
  * has its shape / its main colour), `largest` / `smallest` (no object of the grid is larger /
- * smaller; ties all count). Unlike a rank, a yes/no key takes the same two values whatever the
+ * smaller; ties all count), `symmetric` (its box, cells and gaps alike, equals its mirror image
+ * left to right or top to bottom), `above_line` / `below_line` (a line lies below / above it: a
+ * whole row of the grid in one colour other than the background, wholly beyond the object's box),
+ * `left_of_line` / `right_of_line` (the same with a whole column on its right / left). Unlike a rank, a yes/no key takes the same two values whatever the
  * number of objects, so a test input with more objects than any demonstration still finds its
  * keys in the table.
  */
@@ -86,6 +94,11 @@ export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 
     case 'unique_colour':
     case 'largest':
     case 'smallest':
+    case 'symmetric':
+    case 'above_line':
+    case 'below_line':
+    case 'left_of_line':
+    case 'right_of_line':
       return 'yes or no';
     default:
       return 'number';
@@ -165,7 +178,53 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return uniqueFlags(objects.map(shapePattern));
     case 'unique_colour':
       return uniqueFlags(objects.map((o) => o.mainColour));
+    case 'symmetric':
+      return objects.map((o) => (mirrorSymmetric(o) ? 1 : 0));
+    case 'above_line': {
+      const lines = fullLines(g, true);
+      return objects.map((o) => (lines.some((r) => r > o.top + o.height - 1) ? 1 : 0));
+    }
+    case 'below_line': {
+      const lines = fullLines(g, true);
+      return objects.map((o) => (lines.some((r) => r < o.top) ? 1 : 0));
+    }
+    case 'left_of_line': {
+      const lines = fullLines(g, false);
+      return objects.map((o) => (lines.some((c) => c > o.left + o.width - 1) ? 1 : 0));
+    }
+    case 'right_of_line': {
+      const lines = fullLines(g, false);
+      return objects.map((o) => (lines.some((c) => c < o.left) ? 1 : 0));
+    }
   }
+}
+
+/** True when the object's box (cells and gaps) equals its mirror image left to right or top to bottom. */
+function mirrorSymmetric(o: GridObject): boolean {
+  const { height, width, cells } = o;
+  let leftRight = true;
+  for (let r = 0; r < height && leftRight; r++) for (let c = 0; c < width >> 1; c++) if (cells[r * width + c] !== cells[r * width + width - 1 - c]) leftRight = false;
+  if (leftRight) return true;
+  for (let r = 0; r < height >> 1; r++) for (let c = 0; c < width; c++) if (cells[r * width + c] !== cells[(height - 1 - r) * width + c]) return false;
+  return true;
+}
+
+/** The rows (`rows` true) or columns of the grid that are wholly one colour other than the background. */
+function fullLines(g: Grid, rows: boolean): number[] {
+  const { height, width, cells } = g;
+  const background = backgroundColour(g);
+  const lines: number[] = [];
+  const count = rows ? height : width;
+  const length = rows ? width : height;
+  for (let k = 0; k < count; k++) {
+    const at = (i: number): number => (rows ? cells[k * width + i]! : cells[i * width + k]!);
+    const colour = at(0);
+    if (colour === background) continue;
+    let whole = true;
+    for (let i = 1; i < length && whole; i++) if (at(i) !== colour) whole = false;
+    if (whole) lines.push(k);
+  }
+  return lines;
 }
 
 /** Each value's rank among the distinct values, 1 for the lowest. */

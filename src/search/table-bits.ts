@@ -22,7 +22,7 @@
  */
 import { featureValues, isOrderedRule, ANY, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
-import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
+import { OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { LiteralValue } from '../language/ast.ts';
 
@@ -46,9 +46,9 @@ export const FIRST_FEATURE_BITS = 1;
 /** Bits for choosing a feature after the first (22 kinds), and a colour it names. */
 export const FEATURE_CHOICE_BITS = 5;
 export const FEATURE_COLOUR_BITS = 4;
-/** Bits for an object rule's way of cutting into objects (4) and its property (16). */
+/** Bits for an object rule's way of cutting into objects (4) and its property (one of OBJECT_PROPERTIES). */
 export const GROUPING_BITS = 2;
-export const PROPERTY_BITS = 4;
+export const PROPERTY_BITS = Math.ceil(Math.log2(OBJECT_PROPERTIES.length));
 /** Bits for a grid rule's property (8), and for saying whether all its grids share one size. */
 export const GRID_PROPERTY_BITS = 3;
 export const SHARED_SIZE_BITS = 1;
