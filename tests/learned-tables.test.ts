@@ -140,6 +140,32 @@ describe('an object rule read off the demonstrations', () => {
     expect(run(programApplying('apply_object_rule', duskRule), G([[0, 8, 8, 8, 8]]))).toBe(FAILURE);
   });
 
+  it('keys the outcome by the side of the quay wall a boat lies on', () => {
+    // Invented: boats moored above the quay wall (a whole row of 6) are lit (4); those below it
+    // and the wall itself keep their colours. Colours, sizes, shapes and edges are mixed on both
+    // sides, so only the side of the line tells them apart.
+    const quay: Puzzle = {
+      name: 'quay',
+      train: [
+        {
+          input: G([[0, 1, 0, 0, 0], [0, 0, 0, 2, 0], [6, 6, 6, 6, 6], [0, 2, 0, 0, 1], [0, 0, 0, 0, 0]]),
+          output: G([[0, 4, 0, 0, 0], [0, 0, 0, 4, 0], [6, 6, 6, 6, 6], [0, 2, 0, 0, 1], [0, 0, 0, 0, 0]]),
+        },
+        {
+          input: G([[0, 0, 0, 0, 0, 0], [0, 3, 3, 0, 0, 1], [0, 0, 0, 0, 0, 0], [0, 0, 0, 0, 0, 0], [6, 6, 6, 6, 6, 6], [1, 1, 0, 0, 3, 0]]),
+          output: G([[0, 0, 0, 0, 0, 0], [0, 4, 4, 0, 0, 4], [0, 0, 0, 0, 0, 0], [0, 0, 0, 0, 0, 0], [6, 6, 6, 6, 6, 6], [1, 1, 0, 0, 3, 0]]),
+        },
+      ],
+      testInputs: [G([[0, 2, 2, 0], [6, 6, 6, 6], [0, 0, 1, 0]])],
+    };
+    const learned = learnObjectRules(quay).map((t) => printLiteral(t.literal));
+    expect(learned.some((text) => /^object_rule\[by_colour(_diagonal)?, above_line\]/.test(text))).toBe(true);
+    // Every rule learned keys on a side of the wall: no other property tells the boats apart.
+    for (const text of learned) expect(text).toMatch(/(above|below)_line/);
+    const rule = learned.find((text) => text.includes('above_line'))!;
+    expect((run(programApplying('apply_object_rule', rule), quay.testInputs[0]!) as Grid).toRows()).toEqual([[0, 4, 4, 0], [6, 6, 6, 6], [0, 0, 1, 0]]);
+  });
+
   it('learns moves: boats of colour 1 sail one row up, boats of colour 2 stay moored', () => {
     const sailing: Puzzle = {
       name: 'sailing',
