@@ -105,6 +105,11 @@ describe('objectKeys', () => {
     expect(objectKeys(wall, parts, 'left_of_line')).toEqual([1, 0, 0]);
     expect(objectKeys(wall, parts, 'right_of_line')).toEqual([0, 1, 1]);
     expect(objectKeys(wall, parts, 'above_line')).toEqual([0, 0, 0]);
+    // the quay: tops 0, 0, 2, 3, 3, 4; bottoms 0, 1, 2, 4, 4, 4; lefts 1, 4, 0, 0, 4, 5; rights 1, 4, 5, 1, 4, 5
+    expect(objectKeys(quay, objects, 'topmost')).toEqual([1, 1, 0, 0, 0, 0]);
+    expect(objectKeys(quay, objects, 'bottommost')).toEqual([0, 0, 0, 1, 1, 1]);
+    expect(objectKeys(quay, objects, 'leftmost')).toEqual([0, 0, 1, 1, 0, 0]);
+    expect(objectKeys(quay, objects, 'rightmost')).toEqual([0, 0, 1, 0, 0, 1]);
   });
 
   it('gives equal sizes one rank', () => {

@@ -44,6 +44,10 @@ export const OBJECT_PROPERTIES = [
   'below_line',
   'left_of_line',
   'right_of_line',
+  'topmost',
+  'bottommost',
+  'leftmost',
+  'rightmost',
 ] as const;
 export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
 
@@ -61,7 +65,9 @@ export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
  * smaller; ties all count), `symmetric` (its box, cells and gaps alike, equals its mirror image
  * left to right or top to bottom), `above_line` / `below_line` (a line lies below / above it: a
  * whole row of the grid in one colour other than the background, wholly beyond the object's box),
- * `left_of_line` / `right_of_line` (the same with a whole column on its right / left). Unlike a rank, a yes/no key takes the same two values whatever the
+ * `left_of_line` / `right_of_line` (the same with a whole column on its right / left), `topmost` /
+ * `bottommost` / `leftmost` / `rightmost` (no object's box reaches higher / lower / further left /
+ * further right; ties all count). Unlike a rank, a yes/no key takes the same two values whatever the
  * number of objects, so a test input with more objects than any demonstration still finds its
  * keys in the table.
  */
@@ -99,6 +105,10 @@ export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 
     case 'below_line':
     case 'left_of_line':
     case 'right_of_line':
+    case 'topmost':
+    case 'bottommost':
+    case 'leftmost':
+    case 'rightmost':
       return 'yes or no';
     default:
       return 'number';
@@ -196,7 +206,21 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       const lines = fullLines(g, false);
       return objects.map((o) => (lines.some((c) => c < o.left) ? 1 : 0));
     }
+    case 'topmost':
+      return extremeFlags(objects.map((o) => -o.top));
+    case 'bottommost':
+      return extremeFlags(objects.map((o) => o.top + o.height));
+    case 'leftmost':
+      return extremeFlags(objects.map((o) => -o.left));
+    case 'rightmost':
+      return extremeFlags(objects.map((o) => o.left + o.width));
   }
+}
+
+/** 1 for each value equal to the largest, else 0. */
+function extremeFlags(values: readonly number[]): number[] {
+  const most = Math.max(...values);
+  return values.map((v) => (v === most ? 1 : 0));
 }
 
 /** True when the object's box (cells and gaps) equals its mirror image left to right or top to bottom. */
