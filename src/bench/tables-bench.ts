@@ -36,7 +36,7 @@ function tableKind(t: TableProgram): string {
   if (!table || table.kind !== 'literal') return 'other';
   const l = table.literal;
   if (l.type === 'CellRule') return isOrderedRule(l.entries) ? 'cell list' : `cell rule (${l.features[0]?.name ?? '?'} first)`;
-  if (l.type === 'ObjectRule') return `object rule (${l.property})`;
+  if (l.type === 'ObjectRule') return `object rule (${l.second === undefined ? l.property : `${l.property}, ${l.second}`})`;
   if (l.type === 'GridRule') return `grid rule (${l.property})`;
   return l.type === 'Palette' ? 'palette' : 'other';
 }

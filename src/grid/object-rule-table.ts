@@ -81,7 +81,14 @@ export type ObjectOutcome =
 
 export interface ObjectRuleEntry {
   readonly key: ObjectKey;
+  /** The value of the rule's second property, when it has one. */
+  readonly secondKey?: ObjectKey;
   readonly outcome: ObjectOutcome;
+}
+
+/** An entry's key as one text: the first property's value, and the second's after a space. */
+export function entryKeyCode(key: ObjectKey, secondKey: ObjectKey | undefined): string {
+  return secondKey === undefined ? tableKeyCode(key) : `${tableKeyCode(key)} ${tableKeyCode(secondKey)}`;
 }
 
 /** What kind of key a property has. */
@@ -290,31 +297,38 @@ function insideFlags(g: Grid, objects: readonly GridObject[]): number[] {
   });
 }
 
-/** A cut of a grid into objects, a property and a table from its values to outcomes. */
+/**
+ * A cut of a grid into objects, a property (or two) and a table from their values to outcomes.
+ * With two properties each object's key is the pair of its values: the rule says what becomes of
+ * an object from two things about it at once (the topmost of the large ones, say).
+ */
 export class ObjectRule {
   readonly grouping: ObjectGrouping;
   readonly property: ObjectProperty;
+  readonly second: ObjectProperty | undefined;
   readonly entries: readonly ObjectRuleEntry[];
   readonly hash: number;
   private readonly table = new Map<string, ObjectOutcome>();
 
   /** The first entry for a key counts (the parser rejects repeated keys). */
-  constructor(grouping: ObjectGrouping, property: ObjectProperty, entries: readonly ObjectRuleEntry[]) {
+  constructor(grouping: ObjectGrouping, property: ObjectProperty, entries: readonly ObjectRuleEntry[], second?: ObjectProperty) {
     this.grouping = grouping;
     this.property = property;
+    this.second = second;
     this.entries = entries;
     for (const e of entries) {
-      const code = tableKeyCode(e.key);
+      const code = entryKeyCode(e.key, second === undefined ? undefined : e.secondKey);
       if (!this.table.has(code)) this.table.set(code, e.outcome);
     }
-    let h = Math.imul(0x3c6ef372 ^ (OBJECT_GROUPINGS.indexOf(grouping) * 16 + OBJECT_PROPERTIES.indexOf(property)), 0x01000193);
+    const properties = OBJECT_PROPERTIES.indexOf(property) + (second === undefined ? 0 : (OBJECT_PROPERTIES.indexOf(second) + 1) * 64);
+    let h = Math.imul(0x3c6ef372 ^ (OBJECT_GROUPINGS.indexOf(grouping) + 4 * properties), 0x01000193);
     let sum = 0;
     for (const [key, outcome] of this.table) sum = (sum + textHash(`${key}=${outcomeCode(outcome)}`)) | 0;
     this.hash = (Math.imul(h ^ sum, 0x85ebca6b) ^ this.table.size) >>> 0;
   }
 
-  outcomeFor(key: ObjectKey): ObjectOutcome | undefined {
-    return this.table.get(tableKeyCode(key));
+  outcomeFor(key: ObjectKey, secondKey?: ObjectKey): ObjectOutcome | undefined {
+    return this.table.get(entryKeyCode(key, secondKey));
   }
 
   get size(): number {
@@ -323,7 +337,7 @@ export class ObjectRule {
 
   equals(other: ObjectRule): boolean {
     if (this === other) return true;
-    if (this.hash !== other.hash || this.grouping !== other.grouping || this.property !== other.property || this.table.size !== other.table.size) return false;
+    if (this.hash !== other.hash || this.grouping !== other.grouping || this.property !== other.property || this.second !== other.second || this.table.size !== other.table.size) return false;
     for (const [key, outcome] of this.table) {
       const theirs = other.table.get(key);
       if (!theirs || outcomeCode(theirs) !== outcomeCode(outcome)) return false;
@@ -336,9 +350,10 @@ export class ObjectRule {
 export function applyObjectRule(g: Grid, rule: ObjectRule): Grid | null {
   const objects = objectsOf(g, rule.grouping);
   const keys = objectKeys(g, objects, rule.property);
+  const secondKeys = rule.second === undefined ? undefined : objectKeys(g, objects, rule.second);
   const outcomes: ObjectOutcome[] = [];
-  for (const key of keys) {
-    const outcome = rule.outcomeFor(key);
+  for (let i = 0; i < keys.length; i++) {
+    const outcome = rule.outcomeFor(keys[i]!, secondKeys?.[i]);
     if (!outcome) return null;
     outcomes.push(outcome);
   }

@@ -14,11 +14,15 @@ export type LiteralValue =
   | { readonly type: 'Palette'; readonly pairs: readonly (readonly [number, number])[] }
   /** A learned table from features of a cell to its output colour (src/grid/cell-rule-table.ts). */
   | { readonly type: 'CellRule'; readonly features: readonly CellFeature[]; readonly entries: readonly CellRuleEntry[] }
-  /** A learned table from a property of an object to what becomes of it (src/grid/object-rule-table.ts). */
+  /**
+   * A learned table from a property of an object (or two: `second`, and each entry's
+   * `secondKey`) to what becomes of it (src/grid/object-rule-table.ts).
+   */
   | {
       readonly type: 'ObjectRule';
       readonly grouping: ObjectGrouping;
       readonly property: ObjectProperty;
+      readonly second?: ObjectProperty;
       readonly entries: readonly ObjectRuleEntry[];
     }
   /** A learned table from a property of the whole grid to an output grid (src/grid/grid-rule-table.ts). */

@@ -56,7 +56,7 @@ export function literalValue(l: LiteralValue): unknown {
     case 'CellRule':
       return new CellRule(l.features, l.entries);
     case 'ObjectRule':
-      return new ObjectRule(l.grouping, l.property, l.entries);
+      return new ObjectRule(l.grouping, l.property, l.entries, l.second);
     case 'GridRule':
       return new GridRule(l.property, l.entries);
   }

@@ -26,6 +26,7 @@ import {
   type ObjectOutcome,
   type ObjectProperty,
   type ObjectRuleEntry,
+  entryKeyCode,
 } from '../grid/object-rule-table.ts';
 import { shapeAllowed } from '../grid/grid.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
@@ -265,19 +266,46 @@ function parseOutcome(r: LineReader): ObjectOutcome {
   return { kind: 'move', rows, columns };
 }
 
-/** `object_rule[grouping, property]{value -> outcome, ...}`, after the word `object_rule`. */
+/**
+ * `object_rule[grouping, property]{value -> outcome, ...}`, or with a second property
+ * `object_rule[grouping, property, property]{value value -> outcome, ...}`, after the word `object_rule`.
+ */
 function parseObjectRule(r: LineReader): LiteralValue {
   r.expect('[');
   const grouping = oneOf(r, OBJECT_GROUPINGS, `a way of cutting into objects (${OBJECT_GROUPINGS.join(', ')})`);
   r.expect(',', "',' after the way of cutting into objects");
   const property = oneOf(r, OBJECT_PROPERTIES, `an object property (${OBJECT_PROPERTIES.join(', ')})`);
-  r.expect(']', "']' after the property");
+  let second: ObjectProperty | undefined;
+  if (r.peek() === ',') {
+    r.expect(',');
+    r.skipSpaces();
+    const start = r.position;
+    second = oneOf(r, OBJECT_PROPERTIES, `a second object property (${OBJECT_PROPERTIES.join(', ')})`);
+    if (second === property) {
+      r.position = start;
+      r.fail('a second property other than the first');
+    }
+  }
+  r.expect(']', second === undefined ? "',' or ']' after the property" : "']' after the second property");
+  if (second === undefined) {
+    const entries: ObjectRuleEntry[] = parseKeyedEntries(
+      r,
+      () => parseObjectKey(r, property),
+      (key) => ({ key, outcome: parseOutcome(r) }),
+    );
+    return { type: 'ObjectRule', grouping, property, entries };
+  }
+  // The pair read last, for the entry; the key handed to parseKeyedEntries is its text, to find repeats.
+  let pair: [ObjectKey, ObjectKey] = [0, 0];
   const entries: ObjectRuleEntry[] = parseKeyedEntries(
     r,
-    () => parseObjectKey(r, property),
-    (key) => ({ key, outcome: parseOutcome(r) }),
+    () => {
+      pair = [parseObjectKey(r, property), parseObjectKey(r, second)];
+      return entryKeyCode(pair[0], pair[1]);
+    },
+    () => ({ key: pair[0], secondKey: pair[1], outcome: parseOutcome(r) }),
   );
-  return { type: 'ObjectRule', grouping, property, entries };
+  return { type: 'ObjectRule', grouping, property, second, entries };
 }
 
 /**

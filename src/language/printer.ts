@@ -25,7 +25,7 @@
  */
 import { featureTakesColour, featureValues, ANY, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { gridDigits, gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
-import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
+import { propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import type { Expression, LiteralValue, Program } from './ast.ts';
 
 function printFeature(f: CellFeature): string {
@@ -102,8 +102,10 @@ export function printLiteral(l: LiteralValue): string {
       return `cell_rule[${l.features.map(printFeature).join(', ')}]{${entries.join(', ')}}`;
     }
     case 'ObjectRule': {
-      const entries = l.entries.map((e) => `${printObjectKey(l.property, e.key)} -> ${printOutcome(e.outcome)}`);
-      return `object_rule[${l.grouping}, ${l.property}]{${entries.join(', ')}}`;
+      const second = l.second;
+      const key = (e: ObjectRuleEntry): string => (second === undefined ? printObjectKey(l.property, e.key) : `${printObjectKey(l.property, e.key)} ${printObjectKey(second, e.secondKey!)}`);
+      const entries = l.entries.map((e) => `${key(e)} -> ${printOutcome(e.outcome)}`);
+      return `object_rule[${l.grouping}, ${l.property}${second === undefined ? '' : `, ${second}`}]{${entries.join(', ')}}`;
     }
     case 'GridRule': {
       const entries = l.entries.map((e) => `${printGridKey(l.property, e.key)} -> ${gridDigits(e.rows)}`);

@@ -27,7 +27,7 @@ export type ValueData =
 function tableText(value: CellRule | ObjectRule | GridRule): string {
   if (value instanceof CellRule) return printLiteral({ type: 'CellRule', features: value.features, entries: value.entries });
   if (value instanceof GridRule) return printLiteral({ type: 'GridRule', property: value.property, entries: value.entries });
-  return printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, entries: value.entries });
+  return printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, ...(value.second === undefined ? {} : { second: value.second }), entries: value.entries });
 }
 
 function rowsWithEmpty(grid: Grid): (number | null)[][] {

@@ -37,6 +37,7 @@ import {
 import type { Grid } from '../grid/grid.ts';
 import {
   applyObjectRule,
+  entryKeyCode,
   ObjectRule,
   OBJECT_GROUPINGS,
   OBJECT_PROPERTIES,
@@ -47,6 +48,7 @@ import {
   possibleOutcomes,
   type ObjectKey,
   type ObjectOutcome,
+  type ObjectProperty,
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
 import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridKey, type GridRuleEntry } from '../grid/grid-rule-table.ts';
@@ -280,26 +282,40 @@ interface ObjectsOfPair {
   readonly choices: readonly (readonly string[])[];
 }
 
-/** The object rule for one way of cutting and one property, or undefined (see learnCellRule). */
+/** Each demonstration's objects' values of a property, worked out once per property and grouping. */
+type KeysOfPairs = (property: ObjectProperty) => readonly ObjectKey[][];
+
+/**
+ * The object rule for one way of cutting and one property (or two: `second`), or undefined (see
+ * learnCellRule). With two, an object's key is the pair of its values.
+ */
 function learnObjectRuleFrom(
   puzzle: Puzzle,
   pairs: readonly ObjectsOfPair[],
   outcomes: ReadonlyMap<string, ObjectOutcome>,
   grouping: (typeof OBJECT_GROUPINGS)[number],
-  property: (typeof OBJECT_PROPERTIES)[number],
+  property: ObjectProperty,
+  second: ObjectProperty | undefined,
+  keysOf: KeysOfPairs,
 ): LiteralValue | undefined {
-  const allowed = new Map<string, { key: ObjectKey; codes: string[] }>();
-  const keysOfPairs: ObjectKey[][] = [];
-  for (const pair of pairs) {
-    const keys = objectKeys(pair.input, pair.objects, property);
-    keysOfPairs.push(keys);
+  const allowed = new Map<string, { key: ObjectKey; secondKey: ObjectKey | undefined; codes: string[] }>();
+  const namesOfPairs: string[][] = [];
+  const firstKeys = keysOf(property);
+  const secondKeys = second === undefined ? undefined : keysOf(second);
+  for (let p = 0; p < pairs.length; p++) {
+    const pair = pairs[p]!;
+    const keys = firstKeys[p]!;
+    const names: string[] = [];
+    namesOfPairs.push(names);
     for (let i = 0; i < keys.length; i++) {
-      const name = String(keys[i]);
+      const secondKey = secondKeys?.[p]![i];
+      const name = entryKeyCode(keys[i]!, secondKey);
+      names.push(name);
       const known = allowed.get(name);
       const mine = pair.choices[i]!;
       if (!known) {
         if (allowed.size >= MAXIMUM_ENTRIES) return undefined;
-        allowed.set(name, { key: keys[i]!, codes: [...mine] });
+        allowed.set(name, { key: keys[i]!, secondKey, codes: [...mine] });
         continue;
       }
       const kept = known.codes.filter((c) => mine.includes(c));
@@ -317,21 +333,28 @@ function learnObjectRuleFrom(
   if (!changes) return undefined;
   for (let p = 0; p < pairs.length; p++) {
     const pair = pairs[p]!;
-    const painted = paintOutcomes(pair.input, pair.objects, keysOfPairs[p]!.map((k) => chosen.get(String(k))!));
+    const painted = paintOutcomes(pair.input, pair.objects, namesOfPairs[p]!.map((name) => chosen.get(name)!));
     if (!painted.equals(pair.output)) return undefined;
   }
   for (const g of puzzle.testInputs) {
     const objects = objectsOf(g, grouping);
-    for (const k of objectKeys(g, objects, property)) if (!allowed.has(String(k))) return undefined;
+    const keys = objectKeys(g, objects, property);
+    const more = second === undefined ? undefined : objectKeys(g, objects, second);
+    for (let i = 0; i < keys.length; i++) if (!allowed.has(entryKeyCode(keys[i]!, more?.[i]))) return undefined;
   }
-  const entries: ObjectRuleEntry[] = [...allowed.values()].map(({ key }) => ({ key, outcome: chosen.get(String(key))! }));
-  entries.sort((a, b) => compareTableKeys(a.key, b.key));
-  return { type: 'ObjectRule', grouping, property, entries };
+  const entries: ObjectRuleEntry[] = [...allowed.entries()].map(([name, { key, secondKey }]) =>
+    secondKey === undefined ? { key, outcome: chosen.get(name)! } : { key, secondKey, outcome: chosen.get(name)! },
+  );
+  entries.sort((a, b) => compareTableKeys(a.key, b.key) || (a.secondKey === undefined ? 0 : compareTableKeys(a.secondKey, b.secondKey!)));
+  return second === undefined ? { type: 'ObjectRule', grouping, property, entries } : { type: 'ObjectRule', grouping, property, second, entries };
 }
 
 /** Table keys in order: numbers by value, texts by their characters. */
 function compareTableKeys(a: number | string, b: number | string): number {
-  return typeof a === 'number' && typeof b === 'number' ? a - b : String(a) < String(b) ? -1 : 1;
+  if (typeof a === 'number' && typeof b === 'number') return a - b;
+  const x = String(a);
+  const y = String(b);
+  return x < y ? -1 : x > y ? 1 : 0;
 }
 
 /** The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each), cheapest first. */
@@ -362,11 +385,29 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity):
       pairs.push({ input, output, objects, choices });
     }
     if (!usable) continue;
+    const cache = new Map<ObjectProperty, ObjectKey[][]>();
+    const keysOf: KeysOfPairs = (property) => {
+      let keys = cache.get(property);
+      if (!keys) cache.set(property, (keys = pairs.map((pair) => objectKeys(pair.input, pair.objects, property))));
+      return keys;
+    };
+    const before = found.length;
     for (const property of OBJECT_PROPERTIES) {
-      const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, property);
+      const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, property, undefined, keysOf);
       if (!literal) continue;
       const bits = tableBits(literal)!;
       if (bits <= maxBits) found.push({ literal, bits });
+    }
+    // Two properties at once, only where no single one explains the objects under this cut: a
+    // pair costs another property's bits and more entries, so it is rarely the cheaper anyway.
+    if (found.length > before) continue;
+    for (let a = 0; a < OBJECT_PROPERTIES.length; a++) {
+      for (let b = a + 1; b < OBJECT_PROPERTIES.length; b++) {
+        const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, OBJECT_PROPERTIES[a]!, OBJECT_PROPERTIES[b]!, keysOf);
+        if (!literal) continue;
+        const bits = tableBits(literal)!;
+        if (bits <= maxBits) found.push({ literal, bits });
+      }
     }
   }
   return cheapestDistinct(found, limit, puzzle);
@@ -418,7 +459,7 @@ export function learnGridRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): L
 /** What a table does to a grid (null where it lacks a key). */
 export function applyTable(literal: LiteralValue, g: Grid): Grid | null {
   if (literal.type === 'CellRule') return applyCellRule(g, new CellRule(literal.features, literal.entries));
-  if (literal.type === 'ObjectRule') return applyObjectRule(g, new ObjectRule(literal.grouping, literal.property, literal.entries));
+  if (literal.type === 'ObjectRule') return applyObjectRule(g, new ObjectRule(literal.grouping, literal.property, literal.entries, literal.second));
   if (literal.type === 'GridRule') return applyGridRule(g, new GridRule(literal.property, literal.entries));
   return null;
 }

@@ -46,8 +46,12 @@ export const FIRST_FEATURE_BITS = 1;
 /** Bits for choosing a feature after the first (22 kinds), and a colour it names. */
 export const FEATURE_CHOICE_BITS = 5;
 export const FEATURE_COLOUR_BITS = 4;
-/** Bits for an object rule's way of cutting into objects (4) and its property (one of OBJECT_PROPERTIES). */
+/**
+ * Bits for an object rule's way of cutting into objects (4), for saying whether it keys on one
+ * property or two, and for each property (one of OBJECT_PROPERTIES).
+ */
 export const GROUPING_BITS = 2;
+export const PROPERTY_COUNT_BITS = 1;
 export const PROPERTY_BITS = Math.ceil(Math.log2(OBJECT_PROPERTIES.length));
 /** Bits for a grid rule's property (8), and for saying whether all its grids share one size. */
 export const GRID_PROPERTY_BITS = 3;
@@ -183,13 +187,15 @@ export function tableBits(l: LiteralValue): number | undefined {
     }
     case 'ObjectRule': {
       const colours = new Set<number>();
+      const second = l.second;
       for (const e of l.entries) {
         if (propertyValues(l.property) === 'colour') colours.add(e.key as number);
+        if (second !== undefined && propertyValues(second) === 'colour') colours.add(e.secondKey as number);
         if (e.outcome.kind === 'recolour') colours.add(e.outcome.colour);
       }
       const c = colourBits(colours.size);
-      let bits = GROUPING_BITS + PROPERTY_BITS;
-      for (const e of l.entries) bits += objectKeyBits(l.property, e.key, c) + outcomeBits(e.outcome, c);
+      let bits = GROUPING_BITS + PROPERTY_COUNT_BITS + PROPERTY_BITS * (second === undefined ? 1 : 2);
+      for (const e of l.entries) bits += objectKeyBits(l.property, e.key, c) + (second === undefined ? 0 : objectKeyBits(second, e.secondKey!, c)) + outcomeBits(e.outcome, c);
       return bits;
     }
     case 'GridRule': {

@@ -342,7 +342,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
   },
   ObjectRule: {
     entries: [
-      { token: '<object_rule>', meaning: 'an object rule: how to cut objects, the property, then each key with its outcome' },
+      { token: '<object_rule>', meaning: 'an object rule: how to cut objects, the property (or two), then each key with its outcome' },
       { token: '</object_rule>', meaning: 'ends an object rule' },
       ...OBJECT_GROUPINGS.map((name) => ({ token: `grouping:${name}`, meaning: `objects cut ${name.replace(/_/g, ' ')}` })),
       ...OBJECT_PROPERTIES.map((name) => ({ token: `property:${name}`, meaning: `the object property ${name}` })),
@@ -359,21 +359,28 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       '<object_rule>',
       `grouping:${l.grouping}`,
       `property:${l.property}`,
-      ...l.entries.flatMap((e) => [...objectKeyTokens(l.property, e.key), ...outcomeTokens(e.outcome)]),
+      ...(l.second === undefined ? [] : [`property:${l.second}`]),
+      ...l.entries.flatMap((e) => [...objectKeyTokens(l.property, e.key), ...(l.second === undefined ? [] : objectKeyTokens(l.second, e.secondKey!)), ...outcomeTokens(e.outcome)]),
       '</object_rule>',
     ],
     decode: (r) => {
       r.expect('<object_rule>');
       const grouping = prefixed(r, 'grouping:', OBJECT_GROUPINGS, 'a grouping token');
       const property = prefixed(r, 'property:', OBJECT_PROPERTIES, 'a property token');
+      // A second property token, when the rule keys on two.
+      const second = r.peek()?.startsWith('property:') ? prefixed(r, 'property:', OBJECT_PROPERTIES, 'a property token') : undefined;
       const entries: ObjectRuleEntry[] = [];
       while (r.peek() !== '</object_rule>') {
         if (r.atEnd()) r.fail("an entry or '</object_rule>'");
         const key = readObjectKey(r, property);
-        entries.push({ key, outcome: readOutcome(r) });
+        if (second === undefined) entries.push({ key, outcome: readOutcome(r) });
+        else {
+          const secondKey = readObjectKey(r, second);
+          entries.push({ key, secondKey, outcome: readOutcome(r) });
+        }
       }
       r.expect('</object_rule>');
-      return { type: 'ObjectRule', grouping, property, entries };
+      return second === undefined ? { type: 'ObjectRule', grouping, property, entries } : { type: 'ObjectRule', grouping, property, second, entries };
     },
   },
   GridRule: {

@@ -73,7 +73,7 @@ export function valueJson(type: BaseType, value: unknown): ValueJson {
     }
     case 'ObjectRule': {
       const rule = value as ObjectRule;
-      return printExpression({ kind: 'literal', literal: { type: 'ObjectRule', grouping: rule.grouping, property: rule.property, entries: rule.entries } });
+      return printExpression({ kind: 'literal', literal: { type: 'ObjectRule', grouping: rule.grouping, property: rule.property, ...(rule.second === undefined ? {} : { second: rule.second }), entries: rule.entries } });
     }
     case 'GridRule': {
       const rule = value as GridRule;

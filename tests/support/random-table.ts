@@ -25,6 +25,7 @@ import {
   type ObjectOutcome,
   type ObjectRuleEntry,
 } from '../../src/grid/object-rule-table.ts';
+import { tableKeyCode } from '../../src/grid/text-hash.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridRuleEntry } from '../../src/grid/grid-rule-table.ts';
 import type { LiteralValue } from '../../src/language/ast.ts';
 
@@ -139,8 +140,24 @@ export function randomObjectRule(choose: Chooser): LiteralValue {
   const grouping = OBJECT_GROUPINGS[choose(OBJECT_GROUPINGS.length)]!;
   const property = OBJECT_PROPERTIES[choose(OBJECT_PROPERTIES.length)]!;
   const values = propertyValues(property);
-  const entries: ObjectRuleEntry[] = distinctKeyed(choose(6), () => randomObjectKey(choose, values), (key) => ({ key, outcome: randomOutcome(choose) }));
-  return { type: 'ObjectRule', grouping, property, entries };
+  // A third of the rules key on a second property too (never the first again).
+  const secondIndex = choose(3) === 0 ? choose(OBJECT_PROPERTIES.length - 1) : -1;
+  if (secondIndex < 0) {
+    const entries: ObjectRuleEntry[] = distinctKeyed(choose(6), () => randomObjectKey(choose, values), (key) => ({ key, outcome: randomOutcome(choose) }));
+    return { type: 'ObjectRule', grouping, property, entries };
+  }
+  const second = OBJECT_PROPERTIES.filter((p) => p !== property)[secondIndex]!;
+  const secondValues = propertyValues(second);
+  let pair: [ObjectKey, ObjectKey] = [0, 0];
+  const entries: ObjectRuleEntry[] = distinctKeyed(
+    choose(6),
+    () => {
+      pair = [randomObjectKey(choose, values), randomObjectKey(choose, secondValues)];
+      return `${tableKeyCode(pair[0])} ${tableKeyCode(pair[1])}`;
+    },
+    () => ({ key: pair[0], secondKey: pair[1], outcome: randomOutcome(choose) }),
+  );
+  return { type: 'ObjectRule', grouping, property, second, entries };
 }
 
 const chooserArbitrary: fc.Arbitrary<Chooser> = fc.gen().map((g) => (count: number) => (count <= 1 ? 0 : g(fc.nat, { max: count - 1 })));
