@@ -357,8 +357,11 @@ function compareTableKeys(a: number | string, b: number | string): number {
   return x < y ? -1 : x > y ? 1 : 0;
 }
 
-/** The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each), cheapest first. */
-export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
+/**
+ * The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each),
+ * cheapest first; with `pairs`, rules keyed on two properties where no one property explains a cut.
+ */
+export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity, pairs = true): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
   const found: LearnedTable[] = [];
   for (const grouping of OBJECT_GROUPINGS) {
@@ -400,7 +403,7 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity):
     }
     // Two properties at once, only where no single one explains the objects under this cut: a
     // pair costs another property's bits and more entries, so it is rarely the cheaper anyway.
-    if (found.length > before) continue;
+    if (!pairs || found.length > before) continue;
     for (let a = 0; a < OBJECT_PROPERTIES.length; a++) {
       for (let b = a + 1; b < OBJECT_PROPERTIES.length; b++) {
         const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, OBJECT_PROPERTIES[a]!, OBJECT_PROPERTIES[b]!, keysOf);
