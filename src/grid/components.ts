@@ -37,8 +37,9 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   pinCells();
   analysisBytes += 96 + 8 * found.length;
   for (const o of found) analysisBytes += 200 + o.cells.length;
-  if (!forGrid) grid.componentsMemo = forGrid = [];
-  forGrid.push(key, found);
+  // A literal of two holds exactly two (an empty list's first push would make room for 17).
+  if (!forGrid) grid.componentsMemo = [key, found];
+  else forGrid.push(key, found);
   return found;
 }
 
@@ -51,6 +52,7 @@ let seenBuffer = new Uint8Array(0);
 let queueBuffer = new Int32Array(0);
 let rowBuffer = new Int32Array(0);
 let columnBuffer = new Int32Array(0);
+const objectBuffer: (GridObject | undefined)[] = [];
 
 function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] {
   const { height, width, cells } = grid;
@@ -65,7 +67,10 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
   const rows = rowBuffer;
   const columns = columnBuffer;
   seen.fill(0, 0, cells.length);
-  const objects: GridObject[] = [];
+  // Objects are gathered in a list kept for every call and copied out at their exact count: the
+  // list is kept with the grid, and one grown by pushing holds room for 17 however few there are.
+  const objects = objectBuffer;
+  let count = 0;
   const { background, multicolour, diagonal } = options;
   const lastRow = height - 1;
   const lastColumn = width - 1;
@@ -109,9 +114,11 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
     const w = right - left + 1;
     const shape = newCells(h * w).fill(EMPTY);
     for (let i = 0; i < tail; i++) shape[(rows[i]! - top) * w + (columns[i]! - left)] = cells[queue[i]!]!;
-    objects.push(new GridObject(top, left, h, w, shape, tail));
+    objects[count++] = new GridObject(top, left, h, w, shape, tail);
   }
-  return objects;
+  const found = objects.slice(0, count);
+  objects.fill(undefined, 0, count);
+  return found as GridObject[];
 }
 
 /**
