@@ -197,22 +197,14 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return uniqueFlags(objects.map((o) => o.mainColour));
     case 'symmetric':
       return objects.map((o) => (mirrorSymmetric(o) ? 1 : 0));
-    case 'above_line': {
-      const lines = fullLines(g, true);
-      return objects.map((o) => (lines.some((r) => r > o.top + o.height - 1) ? 1 : 0));
-    }
-    case 'below_line': {
-      const lines = fullLines(g, true);
-      return objects.map((o) => (lines.some((r) => r < o.top) ? 1 : 0));
-    }
-    case 'left_of_line': {
-      const lines = fullLines(g, false);
-      return objects.map((o) => (lines.some((c) => c > o.left + o.width - 1) ? 1 : 0));
-    }
-    case 'right_of_line': {
-      const lines = fullLines(g, false);
-      return objects.map((o) => (lines.some((c) => c < o.left) ? 1 : 0));
-    }
+    case 'above_line':
+      return lineFlags(g, objects, true, true);
+    case 'below_line':
+      return lineFlags(g, objects, true, false);
+    case 'left_of_line':
+      return lineFlags(g, objects, false, true);
+    case 'right_of_line':
+      return lineFlags(g, objects, false, false);
     case 'topmost':
       return extremeFlags(objects.map((o) => -o.top));
     case 'bottommost':
@@ -238,6 +230,19 @@ function mirrorSymmetric(o: GridObject): boolean {
   if (leftRight) return true;
   for (let r = 0; r < height >> 1; r++) for (let c = 0; c < width; c++) if (cells[r * width + c] !== cells[(height - 1 - r) * width + c]) return false;
   return true;
+}
+
+/**
+ * 1 for an object with a line (a whole row when `rows`, else a whole column, in one colour other
+ * than the background) wholly past its box: after it (below, to the right) when `after`, else before it.
+ */
+function lineFlags(g: Grid, objects: readonly GridObject[], rows: boolean, after: boolean): number[] {
+  const lines = fullLines(g, rows);
+  return objects.map((o) => {
+    const first = rows ? o.top : o.left;
+    const last = first + (rows ? o.height : o.width) - 1;
+    return lines.some((k) => (after ? k > last : k < first)) ? 1 : 0;
+  });
 }
 
 /** The rows (`rows` true) or columns of the grid that are wholly one colour other than the background. */
