@@ -175,14 +175,10 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return objects.map(shapePattern);
     case 'size_rank':
       return ranks(objects.map((o) => -o.size));
-    case 'largest': {
-      const most = Math.max(...objects.map((o) => o.size));
-      return objects.map((o) => (o.size === most ? 1 : 0));
-    }
-    case 'smallest': {
-      const least = Math.min(...objects.map((o) => o.size));
-      return objects.map((o) => (o.size === least ? 1 : 0));
-    }
+    case 'largest':
+      return extremeFlags(objects.map((o) => o.size));
+    case 'smallest':
+      return extremeFlags(objects.map((o) => -o.size));
     case 'hollow':
       return objects.map((o) => (holeCount(o) > 0 ? 1 : 0));
     case 'wide':
@@ -252,12 +248,15 @@ function fullLines(g: Grid, rows: boolean): number[] {
   const lines: number[] = [];
   const count = rows ? height : width;
   const length = rows ? width : height;
+  // Line k starts at cell `k × first` and goes on `step` cells at a time.
+  const first = rows ? width : 1;
+  const step = rows ? 1 : width;
   for (let k = 0; k < count; k++) {
-    const at = (i: number): number => (rows ? cells[k * width + i]! : cells[i * width + k]!);
-    const colour = at(0);
+    const start = k * first;
+    const colour = cells[start]!;
     if (colour === background) continue;
     let whole = true;
-    for (let i = 1; i < length && whole; i++) if (at(i) !== colour) whole = false;
+    for (let i = 1; i < length && whole; i++) if (cells[start + i * step] !== colour) whole = false;
     if (whole) lines.push(k);
   }
   return lines;

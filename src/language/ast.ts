@@ -28,6 +28,11 @@ export type LiteralValue =
   /** A learned table from a property of the whole grid to an output grid (src/grid/grid-rule-table.ts). */
   | { readonly type: 'GridRule'; readonly property: GridProperty; readonly entries: readonly GridRuleEntry[] };
 
+/** An object rule literal, with `second` written only when the rule keys on two properties. */
+export function objectRuleLiteral(grouping: ObjectGrouping, property: ObjectProperty, second: ObjectProperty | undefined, entries: readonly ObjectRuleEntry[]): Extract<LiteralValue, { type: 'ObjectRule' }> {
+  return second === undefined ? { type: 'ObjectRule', grouping, property, entries } : { type: 'ObjectRule', grouping, property, second, entries };
+}
+
 export type Expression =
   | { readonly kind: 'variable'; readonly name: string }
   | { readonly kind: 'literal'; readonly literal: LiteralValue }

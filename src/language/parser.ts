@@ -30,7 +30,7 @@ import {
 } from '../grid/object-rule-table.ts';
 import { shapeAllowed } from '../grid/grid.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
-import type { Expression, LiteralValue, Program, Step } from './ast.ts';
+import { objectRuleLiteral, type Expression, type LiteralValue, type Program, type Step } from './ast.ts';
 
 export class ProgramSyntaxError extends Error {
   constructor(
@@ -287,25 +287,20 @@ function parseObjectRule(r: LineReader): LiteralValue {
     }
   }
   r.expect(']', second === undefined ? "',' or ']' after the property" : "']' after the second property");
-  if (second === undefined) {
-    const entries: ObjectRuleEntry[] = parseKeyedEntries(
-      r,
-      () => parseObjectKey(r, property),
-      (key) => ({ key, outcome: parseOutcome(r) }),
-    );
-    return { type: 'ObjectRule', grouping, property, entries };
-  }
-  // The pair read last, for the entry; the key handed to parseKeyedEntries is its text, to find repeats.
-  let pair: [ObjectKey, ObjectKey] = [0, 0];
+  // The key read last (with the second property's value, when there is one), for the entry; the
+  // key handed to parseKeyedEntries is its text, to find repeats.
+  let key: ObjectKey = 0;
+  let secondKey: ObjectKey | undefined;
   const entries: ObjectRuleEntry[] = parseKeyedEntries(
     r,
     () => {
-      pair = [parseObjectKey(r, property), parseObjectKey(r, second)];
-      return entryKeyCode(pair[0], pair[1]);
+      key = parseObjectKey(r, property);
+      secondKey = second === undefined ? undefined : parseObjectKey(r, second);
+      return entryKeyCode(key, secondKey);
     },
-    () => ({ key: pair[0], secondKey: pair[1], outcome: parseOutcome(r) }),
+    () => (secondKey === undefined ? { key, outcome: parseOutcome(r) } : { key, secondKey, outcome: parseOutcome(r) }),
   );
-  return { type: 'ObjectRule', grouping, property, second, entries };
+  return objectRuleLiteral(grouping, property, second, entries);
 }
 
 /**

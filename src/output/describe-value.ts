@@ -7,6 +7,7 @@ import { isFailure } from '../language/failure.ts';
 import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { printLiteral } from '../language/printer.ts';
+import { objectRuleLiteral } from '../language/ast.ts';
 import { CellRule } from '../grid/cell-rule-table.ts';
 import { GridRule } from '../grid/grid-rule-table.ts';
 import { ObjectRule } from '../grid/object-rule-table.ts';
@@ -27,7 +28,7 @@ export type ValueData =
 function tableText(value: CellRule | ObjectRule | GridRule): string {
   if (value instanceof CellRule) return printLiteral({ type: 'CellRule', features: value.features, entries: value.entries });
   if (value instanceof GridRule) return printLiteral({ type: 'GridRule', property: value.property, entries: value.entries });
-  return printLiteral({ type: 'ObjectRule', grouping: value.grouping, property: value.property, ...(value.second === undefined ? {} : { second: value.second }), entries: value.entries });
+  return printLiteral(objectRuleLiteral(value.grouping, value.property, value.second, value.entries));
 }
 
 function rowsWithEmpty(grid: Grid): (number | null)[][] {

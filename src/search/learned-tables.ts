@@ -52,7 +52,7 @@ import {
   type ObjectRuleEntry,
 } from '../grid/object-rule-table.ts';
 import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridKey, type GridRuleEntry } from '../grid/grid-rule-table.ts';
-import type { LiteralValue } from '../language/ast.ts';
+import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { distinctAttempts } from './distinct-attempts.ts';
 import { cellRuleBitsAtLeast, tableBits, writtenOutBits } from './table-bits.ts';
@@ -346,7 +346,7 @@ function learnObjectRuleFrom(
     secondKey === undefined ? { key, outcome: chosen.get(name)! } : { key, secondKey, outcome: chosen.get(name)! },
   );
   entries.sort((a, b) => compareTableKeys(a.key, b.key) || (a.secondKey === undefined ? 0 : compareTableKeys(a.secondKey, b.secondKey!)));
-  return second === undefined ? { type: 'ObjectRule', grouping, property, entries } : { type: 'ObjectRule', grouping, property, second, entries };
+  return objectRuleLiteral(grouping, property, second, entries);
 }
 
 /** Table keys in order: numbers by value, texts by their characters. */

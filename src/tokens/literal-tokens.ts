@@ -35,7 +35,7 @@ import {
 } from '../grid/cell-rule-table.ts';
 import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
-import type { LiteralValue } from '../language/ast.ts';
+import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
 import { readGrid, tokenizeGrid } from './grid-tokens.ts';
 import { TokenError, type TokenReader } from './token-reader.ts';
@@ -373,14 +373,11 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       while (r.peek() !== '</object_rule>') {
         if (r.atEnd()) r.fail("an entry or '</object_rule>'");
         const key = readObjectKey(r, property);
-        if (second === undefined) entries.push({ key, outcome: readOutcome(r) });
-        else {
-          const secondKey = readObjectKey(r, second);
-          entries.push({ key, secondKey, outcome: readOutcome(r) });
-        }
+        const secondKey = second === undefined ? undefined : readObjectKey(r, second);
+        entries.push(secondKey === undefined ? { key, outcome: readOutcome(r) } : { key, secondKey, outcome: readOutcome(r) });
       }
       r.expect('</object_rule>');
-      return second === undefined ? { type: 'ObjectRule', grouping, property, entries } : { type: 'ObjectRule', grouping, property, second, entries };
+      return objectRuleLiteral(grouping, property, second, entries);
     },
   },
   GridRule: {

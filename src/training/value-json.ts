@@ -16,6 +16,7 @@ import { EMPTY, Grid } from '../grid/grid.ts';
 import { GridObject } from '../grid/grid-object.ts';
 import { Palette } from '../language/palette.ts';
 import { printExpression } from '../language/printer.ts';
+import { objectRuleLiteral } from '../language/ast.ts';
 import type { CellRule } from '../grid/cell-rule-table.ts';
 import type { GridRule } from '../grid/grid-rule-table.ts';
 import type { ObjectRule } from '../grid/object-rule-table.ts';
@@ -73,7 +74,7 @@ export function valueJson(type: BaseType, value: unknown): ValueJson {
     }
     case 'ObjectRule': {
       const rule = value as ObjectRule;
-      return printExpression({ kind: 'literal', literal: { type: 'ObjectRule', grouping: rule.grouping, property: rule.property, ...(rule.second === undefined ? {} : { second: rule.second }), entries: rule.entries } });
+      return printExpression({ kind: 'literal', literal: objectRuleLiteral(rule.grouping, rule.property, rule.second, rule.entries) });
     }
     case 'GridRule': {
       const rule = value as GridRule;
