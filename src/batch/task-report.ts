@@ -21,6 +21,8 @@ export interface ReportedSolution {
   readonly throughIntermediateTable?: boolean;
   /** True when it chooses between two grids by a condition that tells the demonstrations apart (a case split). */
   readonly throughCaseSplit?: boolean;
+  /** True when its output on some test input breaks the size the demonstrations settle (ranked as 7 bits dearer). */
+  readonly breaksSize?: boolean;
 }
 
 export interface TaskReport {

@@ -107,7 +107,7 @@ export interface EnumerationOutcome {
   readonly throughIntermediateTables: ReadonlySet<Candidate>;
   /** The solutions that choose between two kept grids by a kept condition. */
   readonly throughCaseSplits: ReadonlySet<Candidate>;
-  /** The solutions that break the output size the demonstrations settle (last-resort attempts, listed last). */
+  /** The solutions that break the output size the demonstrations settle (ranked as SIZE_BREAK_BITS dearer). */
   readonly sizeFallbacks: ReadonlySet<Candidate>;
 }
 
@@ -801,8 +801,8 @@ export class Enumerator {
     if (pending && !this.throughIntermediateTables.has(candidate) && !this.throughCaseSplits.has(candidate)) this.throughGoals.add(candidate);
     for (let i = this.trainCount; i < this.examples; i++) {
       if (!fitsPrediction(values[i] as Grid, this.predictedSizes[i - this.trainCount]!)) {
-        // The demonstrations can agree on a size by chance: kept aside, used only if too few
-        // programs of the settled size are found.
+        // The demonstrations can agree on a size by chance: kept aside, ranked later among the
+        // attempts as SIZE_BREAK_BITS dearer (solve.ts).
         this.statistics.sizeRejected++;
         if (!this.sizeFallbacks.some((s) => sameTestOutputs(s.values, values, this.trainCount))) this.sizeFallbacks.push(candidate);
         if (this.solutions.length === 0 && this.sizeFallbacks.length === 1) this.firstFound(candidate);
@@ -828,11 +828,16 @@ export class Enumerator {
     this.deadline = Math.min(this.deadline, now + Math.max(1000, now - this.started));
   }
 
-  /** Fills the attempts left with programs that broke the settled size, cheapest first. */
+  /**
+   * Adds the cheapest programs that broke the settled size (as many as there are attempts, with
+   * test outputs unlike every solution's): solve.ts ranks them with the rest, charged for the break.
+   */
   private addSizeFallbacks(): void {
-    for (const candidate of this.sizeFallbacks) {
-      if (this.solutions.length >= this.limits.attempts) break;
+    let added = 0;
+    for (const candidate of this.sizeFallbacks.slice().sort((a, b) => a.cost - b.cost)) {
+      if (added >= this.limits.attempts) break;
       if (this.solutions.some((s) => sameTestOutputs(s.values, candidate.values, this.trainCount))) continue;
+      added++;
       this.solutions.push(candidate);
       if (this.throughGoals.has(candidate)) this.statistics.goalSolutions++;
       if (this.throughIntermediateTables.has(candidate)) this.statistics.intermediateSolutions++;

@@ -9,9 +9,9 @@ import { defaultLibrary } from '../../dsl/index.ts';
 import type { Library } from '../library/library.ts';
 import type { Puzzle } from '../tasks/task.ts';
 import { taskConstants } from './constants.ts';
-import { distinctAttempts } from './distinct-attempts.ts';
 import { enumerate, type EnumerationStatistics, type StopReason } from './enumerator.ts';
 import { programFromCandidate } from './program-from-candidate.ts';
+import { rankAttempts } from './rank-attempts.ts';
 import { buildProductions, type Production } from './productions.ts';
 import { tablePrograms } from './table-programs.ts';
 
@@ -58,6 +58,8 @@ export interface Solution {
   readonly throughIntermediateTable: boolean;
   /** True when it chooses between two grids the search kept by a condition that tells the demonstrations apart (src/search/case-splits.ts). */
   readonly throughCaseSplit: boolean;
+  /** True when its output on some test input breaks the size the demonstrations settle (ranked as SIZE_BREAK_BITS dearer, src/search/output-size.ts). */
+  readonly breaksSize: boolean;
 }
 
 export interface SolveResult {
@@ -108,20 +110,14 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
     lastStepsWhenFull: options.lastStepsWhenFull ?? true,
     caseSplits: options.caseSplits ?? true,
   }, INPUT_NAME);
-  const lastResort = new Set<Solution>();
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    const solution: Solution = { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c), throughCaseSplit: outcome.throughCaseSplits.has(c) };
-    if (outcome.sizeFallbacks.has(c)) lastResort.add(solution);
-    return solution;
+    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c), throughCaseSplit: outcome.throughCaseSplits.has(c), breaksSize: outcome.sizeFallbacks.has(c) };
   });
   for (const t of tables) {
-    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false, throughCaseSplit: false });
+    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false, throughCaseSplit: false, breaksSize: false });
   }
-  // By bits, except that programs breaking the settled output size stay behind all others.
-  const rank = (s: Solution): number => (lastResort.has(s) ? 1 : 0);
-  const ordered = found.map((s, i) => ({ s, i })).sort((a, b) => rank(a.s) - rank(b.s) || a.s.bits - b.s.bits || a.i - b.i).map(({ s }) => s);
-  const solutions = distinctAttempts(ordered, (s) => s.testOutputs, attempts);
+  const solutions = rankAttempts(found, attempts);
   const reason = solutions.length > 0 ? 'solved' : outcome.reason;
   return { task: puzzle.name, solutions, reason, seconds: (performance.now() - started) / 1000, statistics: outcome.statistics };
 }
