@@ -8,7 +8,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { components, type ComponentOptions } from '../src/grid/components.ts';
-import { EMPTY, type Grid } from '../src/grid/grid.ts';
+import { EMPTY, Grid } from '../src/grid/grid.ts';
 import { GridObject } from '../src/grid/grid-object.ts';
 import { arbitraryGrid } from './support/arbitrary-grid.ts';
 
@@ -77,6 +77,29 @@ describe('components', () => {
         });
       }),
       { numRuns: 300 },
+    );
+  });
+
+  // Each way a grid is cut is memoised on the grid: whatever order the ways are asked in, each
+  // must still be the reference's cut. Sparse grids (mostly background, a few colours) and dense ones.
+  const sparseGrid = fc
+    .tuple(fc.integer({ min: 1, max: 10 }), fc.integer({ min: 1, max: 10 }))
+    .chain(([h, w]) =>
+      fc
+        .array(fc.oneof({ weight: 6, arbitrary: fc.constant(0) }, { weight: 1, arbitrary: fc.integer({ min: 1, max: 3 }) }), { minLength: h * w, maxLength: h * w })
+        .map((values) => new Grid(h, w, Uint8Array.from(values))),
+    );
+  const request = fc.record({ diagonal: fc.boolean(), multicolour: fc.boolean(), background: fc.integer({ min: -1, max: 3 }) });
+  it('cuts a grid asked several ways in any order as the reference does each way', () => {
+    fc.assert(
+      fc.property(fc.oneof(sparseGrid, arbitraryGrid({ maxHeight: 10, maxWidth: 10 })), fc.array(request, { minLength: 1, maxLength: 8 }), (g, requests) => {
+        for (const options of requests) {
+          const objects = components(g, options);
+          const expected = referenceComponents(g, options);
+          expect(objects.map((o) => [o.top, o.left, o.height, o.width, o.size, ...o.cells])).toEqual(expected.map((e) => [e.top, e.left, e.height, e.width, e.size, ...e.cells]));
+        }
+      }),
+      { numRuns: 400 },
     );
   });
 });
