@@ -623,7 +623,23 @@ export class Enumerator {
       const source = call[0];
       values[i] = gridResult && source !== v && source instanceof Grid && source.equals(v as Grid) ? source : v;
     }
+    // The first argument itself on every input (a turn of a symmetric grid, a fill with nothing to
+    // fill): the store holds it already, as that argument.
+    if (gridResult && this.sameAsFirstArgument(values)) {
+      stats.pruned++;
+      cellsRewind();
+      return;
+    }
     if (!this.offer(rule.resultType, cost, values, rule.production, undefined, undefined)) cellsRewind();
+  }
+
+  /** True when every value is the first argument's value on that input (the very object). */
+  private sameAsFirstArgument(values: readonly unknown[]): boolean {
+    const first = this.args[0];
+    if (!first) return false;
+    const theirs = first.values;
+    for (let i = 0; i < this.examples; i++) if (values[i] !== theirs[i]) return false;
+    return true;
   }
 
   /**
