@@ -21,7 +21,7 @@ export interface ReportedSolution {
   readonly throughIntermediateTable?: boolean;
   /** True when it chooses between two grids by a condition that tells the demonstrations apart (a case split). */
   readonly throughCaseSplit?: boolean;
-  /** True when its output on some test input breaks the size the demonstrations settle (ranked as 7 bits dearer). */
+  /** True when its output on some test input breaks the size the demonstrations settle (ranked as SIZE_BREAK_BITS dearer, src/search/output-size.ts). */
   readonly breaksSize?: boolean;
 }
 

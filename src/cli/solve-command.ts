@@ -11,7 +11,8 @@ import { runResumable } from '../batch/resumable-run.ts';
 import { selectShard, shardLabel } from '../batch/shard.ts';
 import { taskNameOf } from '../batch/solve-file.ts';
 import { solveFiles } from '../batch/solve-files.ts';
-import type { TaskReport } from '../batch/task-report.ts';
+import type { ReportedSolution, TaskReport } from '../batch/task-report.ts';
+import { SIZE_BREAK_BITS } from '../search/output-size.ts';
 import { catchInterruptions } from './interrupt.ts';
 import { reportRunProblem } from './run-problems.ts';
 import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
@@ -36,12 +37,18 @@ export function reportLines(report: TaskReport): string[] {
   if (s === undefined) return [`${report.task}: no program found (${stopWords(report.reason)}${report.error ? `: ${report.error}` : ''})`];
   const figures = `${report.seconds.toFixed(2)} s, ${s.candidates.toLocaleString('en')} candidate${s.candidates === 1 ? '' : 's'} tried, ${s.kept.toLocaleString('en')} kept`;
   if (report.status === 'not found') return [`${report.task}: no program found (${stopWords(report.reason)}; ${figures})`];
-  const lines = [`${report.task}: ${report.solutions[0]!.bits} bits (${figures})`];
+  const first = report.solutions[0]!;
+  const lines = [`${report.task}: ${first.bits} bits${sizeBreak(first)} (${figures})`];
   report.solutions.forEach((solution, i) => {
-    if (i > 0) lines.push(`  attempt ${i + 1}, ${solution.bits} bits:`);
+    if (i > 0) lines.push(`  attempt ${i + 1}, ${solution.bits} bits${sizeBreak(solution)}:`);
     lines.push(...solution.program.trimEnd().split('\n').map((l) => `    ${l}`));
   });
   return lines;
+}
+
+/** Says that a program breaks the output size the demonstrations settle, and the bits it was ranked by. */
+function sizeBreak(solution: ReportedSolution): string {
+  return solution.breaksSize ? `, breaking the output size the demonstrations settle (ranked as ${solution.bits + SIZE_BREAK_BITS})` : '';
 }
 
 export function stopWords(reason: TaskReport['reason']): string {
