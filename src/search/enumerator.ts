@@ -73,7 +73,7 @@ export interface EnumerationStatistics {
   costReached: number;
   /** Goals: worked back from the outputs through inverses, layer goals, crop goals. */
   goals: number;
-  /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls). */
+  /** Solutions found by meeting a goal (a kept candidate wrapped in the goal's calls), size breakers handed on included. */
   goalSolutions: number;
   /** Kept grids that tables were learned from on their way to the outputs. */
   intermediateGrids: number;
@@ -81,7 +81,7 @@ export interface EnumerationStatistics {
   intermediateSolutions: number;
   /** Solutions that choose between two kept grids by a kept condition (case-splits.ts). */
   caseSplitSolutions: number;
-  /** Programs that fit the demonstrations but not the output size they settle on a test input (kept only as last-resort attempts). */
+  /** Programs that fit the demonstrations but not the output size they settle on a test input (the cheapest are handed on, ranked as SIZE_BREAK_BITS dearer). */
   sizeRejected: number;
   /** Bytes the search held when it stopped (when last steps began, if they did): kept values (cells counted) and memoised analyses. */
   bytesHeld: number;
