@@ -26,10 +26,10 @@ function report(breaksFirst: boolean, breaksSecond: boolean): TaskReport {
 describe('pithy solve, the lines of a task', () => {
   it('names a size breaker and the bits it was ranked by, wherever it stands', () => {
     const first = reportLines(report(true, false));
-    expect(first[0]).toContain(`5 bits, breaking the output size the demonstrations settle (ranked as ${5 + SIZE_BREAK_BITS})`);
+    expect(first[0]).toContain(`5 bits, breaking the output size the demonstrations settle, ranked as ${5 + SIZE_BREAK_BITS} (`);
     expect(first.join('\n')).not.toContain(`9 bits, breaking`);
     const second = reportLines(report(false, true));
     expect(second[0]).not.toContain('breaking');
-    expect(second).toContain(`  attempt 2, 9 bits, breaking the output size the demonstrations settle (ranked as ${9 + SIZE_BREAK_BITS}):`);
+    expect(second).toContain(`  attempt 2, 9 bits, breaking the output size the demonstrations settle, ranked as ${9 + SIZE_BREAK_BITS}:`);
   });
 });

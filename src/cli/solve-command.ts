@@ -48,7 +48,7 @@ export function reportLines(report: TaskReport): string[] {
 
 /** Says that a program breaks the output size the demonstrations settle, and the bits it was ranked by. */
 function sizeBreak(solution: ReportedSolution): string {
-  return solution.breaksSize ? `, breaking the output size the demonstrations settle (ranked as ${solution.bits + SIZE_BREAK_BITS})` : '';
+  return solution.breaksSize ? `, breaking the output size the demonstrations settle, ranked as ${solution.bits + SIZE_BREAK_BITS}` : '';
 }
 
 export function stopWords(reason: TaskReport['reason']): string {
