@@ -12,7 +12,7 @@ import { selectShard, shardLabel } from '../batch/shard.ts';
 import { taskNameOf } from '../batch/solve-file.ts';
 import { solveFiles } from '../batch/solve-files.ts';
 import type { ReportedSolution, TaskReport } from '../batch/task-report.ts';
-import { SIZE_BREAK_BITS } from '../search/output-size.ts';
+import { rankingBits } from '../search/rank-attempts.ts';
 import { catchInterruptions } from './interrupt.ts';
 import { reportRunProblem } from './run-problems.ts';
 import { addShardFlags, announceShard, resolveShard, type ShardFlags } from './shard-options.ts';
@@ -48,7 +48,7 @@ export function reportLines(report: TaskReport): string[] {
 
 /** Says that a program breaks the output size the demonstrations settle, and the bits it was ranked by. */
 function sizeBreak(solution: ReportedSolution): string {
-  return solution.breaksSize ? `, breaking the output size the demonstrations settle, ranked as ${solution.bits + SIZE_BREAK_BITS}` : '';
+  return solution.breaksSize ? `, breaking the output size the demonstrations settle, ranked as ${rankingBits(solution)}` : '';
 }
 
 export function stopWords(reason: TaskReport['reason']): string {

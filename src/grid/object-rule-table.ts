@@ -86,6 +86,11 @@ export interface ObjectRuleEntry {
   readonly outcome: ObjectOutcome;
 }
 
+/** An entry, with `secondKey` written only when the rule keys on two properties. */
+export function objectRuleEntry(key: ObjectKey, secondKey: ObjectKey | undefined, outcome: ObjectOutcome): ObjectRuleEntry {
+  return secondKey === undefined ? { key, outcome } : { key, secondKey, outcome };
+}
+
 /** An entry's key as one text: the first property's value, and the second's after a space. */
 export function entryKeyCode(key: ObjectKey, secondKey: ObjectKey | undefined): string {
   return secondKey === undefined ? tableKeyCode(key) : `${tableKeyCode(key)} ${tableKeyCode(secondKey)}`;

@@ -27,6 +27,7 @@ import {
   type ObjectProperty,
   type ObjectRuleEntry,
   entryKeyCode,
+  objectRuleEntry,
 } from '../grid/object-rule-table.ts';
 import { shapeAllowed } from '../grid/grid.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
@@ -298,7 +299,7 @@ function parseObjectRule(r: LineReader): LiteralValue {
       secondKey = second === undefined ? undefined : parseObjectKey(r, second);
       return entryKeyCode(key, secondKey);
     },
-    () => (secondKey === undefined ? { key, outcome: parseOutcome(r) } : { key, secondKey, outcome: parseOutcome(r) }),
+    () => objectRuleEntry(key, secondKey, parseOutcome(r)),
   );
   return objectRuleLiteral(grouping, property, second, entries);
 }

@@ -13,8 +13,8 @@
  * the cheapest few such candidates are tried: a fixed number per task and a fixed number of
  * cells in all, in the order the search keeps them, and only up to a cost bound. Counts, not
  * time, so that a search at a candidate cap gives the same programs on every run. Object rules
- * keyed on two properties are read off the inputs only, not here: trying every pair would cost
- * each of these grids several times what the single properties do.
+ * keyed on two properties are read off these grids too, as off the inputs, where no single
+ * property explains a cut.
  */
 import type { Grid } from '../grid/grid.ts';
 import type { LiteralValue } from '../language/ast.ts';
@@ -106,7 +106,7 @@ export class IntermediateTables {
     const cell = this.appliers.get('CellRule');
     if (cell) for (const t of learnCellRules(puzzle, 1, maxTotal - cost - cell.bits)) found.push({ literal: t.literal, bits: t.bits, production: cell });
     const object = this.appliers.get('ObjectRule');
-    if (object) for (const t of learnObjectRules(puzzle, 1, maxTotal - cost - object.bits, false)) found.push({ literal: t.literal, bits: t.bits, production: object });
+    if (object) for (const t of learnObjectRules(puzzle, 1, maxTotal - cost - object.bits)) found.push({ literal: t.literal, bits: t.bits, production: object });
     return found;
   }
 }

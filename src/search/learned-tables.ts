@@ -50,6 +50,7 @@ import {
   type ObjectOutcome,
   type ObjectProperty,
   type ObjectRuleEntry,
+  objectRuleEntry,
 } from '../grid/object-rule-table.ts';
 import { applyGridRule, GRID_PROPERTIES, gridKey, GridRule, type GridKey, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
@@ -342,9 +343,7 @@ function learnObjectRuleFrom(
     const more = second === undefined ? undefined : objectKeys(g, objects, second);
     for (let i = 0; i < keys.length; i++) if (!allowed.has(entryKeyCode(keys[i]!, more?.[i]))) return undefined;
   }
-  const entries: ObjectRuleEntry[] = [...allowed.entries()].map(([name, { key, secondKey }]) =>
-    secondKey === undefined ? { key, outcome: chosen.get(name)! } : { key, secondKey, outcome: chosen.get(name)! },
-  );
+  const entries: ObjectRuleEntry[] = [...allowed.entries()].map(([name, { key, secondKey }]) => objectRuleEntry(key, secondKey, chosen.get(name)!));
   entries.sort((a, b) => compareTableKeys(a.key, b.key) || (a.secondKey === undefined ? 0 : compareTableKeys(a.secondKey, b.secondKey!)));
   return objectRuleLiteral(grouping, property, second, entries);
 }
@@ -359,9 +358,9 @@ function compareTableKeys(a: number | string, b: number | string): number {
 
 /**
  * The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each),
- * cheapest first; with `pairs`, rules keyed on two properties where no one property explains a cut.
+ * cheapest first; rules keyed on two properties only where no one property explains a cut.
  */
-export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity, pairs = true): LearnedTable[] {
+export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
   const found: LearnedTable[] = [];
   for (const grouping of OBJECT_GROUPINGS) {
@@ -403,7 +402,7 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity, 
     }
     // Two properties at once, only where no single one explains the objects under this cut: a
     // pair costs another property's bits and more entries, so it is rarely the cheaper anyway.
-    if (!pairs || found.length > before) continue;
+    if (found.length > before) continue;
     for (let a = 0; a < OBJECT_PROPERTIES.length; a++) {
       for (let b = a + 1; b < OBJECT_PROPERTIES.length; b++) {
         const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, OBJECT_PROPERTIES[a]!, OBJECT_PROPERTIES[b]!, keysOf);

@@ -15,7 +15,7 @@ export interface Rankable {
 }
 
 /** The bits a program is ranked by: its own, plus the size exception's when it breaks the settled size. */
-export function rankingBits(s: Rankable): number {
+export function rankingBits(s: { readonly bits: number; readonly breaksSize?: boolean }): number {
   return s.bits + (s.breaksSize ? SIZE_BREAK_BITS : 0);
 }
 

@@ -33,7 +33,7 @@ import {
   type CellFeatureValues,
   type CellRuleEntry,
 } from '../grid/cell-rule-table.ts';
-import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
+import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, objectRuleEntry, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
@@ -374,7 +374,7 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
         if (r.atEnd()) r.fail("an entry or '</object_rule>'");
         const key = readObjectKey(r, property);
         const secondKey = second === undefined ? undefined : readObjectKey(r, second);
-        entries.push(secondKey === undefined ? { key, outcome: readOutcome(r) } : { key, secondKey, outcome: readOutcome(r) });
+        entries.push(objectRuleEntry(key, secondKey, readOutcome(r)));
       }
       r.expect('</object_rule>');
       return objectRuleLiteral(grouping, property, second, entries);
