@@ -13,8 +13,9 @@
  * the cheapest few such candidates are tried: a fixed number per task and a fixed number of
  * cells in all, in the order the search keeps them, and only up to a cost bound. Counts, not
  * time, so that a search at a candidate cap gives the same programs on every run. Object rules
- * keyed on two properties are read off these grids too, as off the inputs, where no single
- * property explains a cut.
+ * keyed on two properties are read off the inputs only, not off these grids: learning them costs
+ * several times the single properties per grid, and no task of the public training set was
+ * solved through one read off a made grid (BENCHMARKS.md, 2026-12-04).
  */
 import type { Grid } from '../grid/grid.ts';
 import type { LiteralValue } from '../language/ast.ts';
@@ -106,7 +107,7 @@ export class IntermediateTables {
     const cell = this.appliers.get('CellRule');
     if (cell) for (const t of learnCellRules(puzzle, 1, maxTotal - cost - cell.bits)) found.push({ literal: t.literal, bits: t.bits, production: cell });
     const object = this.appliers.get('ObjectRule');
-    if (object) for (const t of learnObjectRules(puzzle, 1, maxTotal - cost - object.bits)) found.push({ literal: t.literal, bits: t.bits, production: object });
+    if (object) for (const t of learnObjectRules(puzzle, 1, maxTotal - cost - object.bits, false)) found.push({ literal: t.literal, bits: t.bits, production: object });
     return found;
   }
 }

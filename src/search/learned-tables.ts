@@ -358,9 +358,10 @@ function compareTableKeys(a: number | string, b: number | string): number {
 
 /**
  * The cheapest object rules the demonstrations show (at most `limit`, of at most `maxBits` each),
- * cheapest first; rules keyed on two properties only where no one property explains a cut.
+ * cheapest first; rules keyed on two properties only where no one property explains a cut, and
+ * only when `twoProperties` is true.
  */
-export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity): LearnedTable[] {
+export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity, twoProperties = true): LearnedTable[] {
   if (!sameShapedPairs(puzzle)) return [];
   const found: LearnedTable[] = [];
   for (const grouping of OBJECT_GROUPINGS) {
@@ -402,7 +403,7 @@ export function learnObjectRules(puzzle: Puzzle, limit = 2, maxBits = Infinity):
     }
     // Two properties at once, only where no single one explains the objects under this cut: a
     // pair costs another property's bits and more entries, so it is rarely the cheaper anyway.
-    if (found.length > before) continue;
+    if (!twoProperties || found.length > before) continue;
     for (let a = 0; a < OBJECT_PROPERTIES.length; a++) {
       for (let b = a + 1; b < OBJECT_PROPERTIES.length; b++) {
         const literal = learnObjectRuleFrom(puzzle, pairs, outcomes, grouping, OBJECT_PROPERTIES[a]!, OBJECT_PROPERTIES[b]!, keysOf);
