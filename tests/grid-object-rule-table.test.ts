@@ -1,7 +1,8 @@
 /** Object rules: property values worked out by hand, applying a table, failing on a missing key, outcomes read off a pair. */
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Grid } from '../src/grid/grid.ts';
-import { applyObjectRule, objectKeys, objectsOf, ObjectRule, possibleOutcomes, shapePattern } from '../src/grid/object-rule-table.ts';
+import { applyObjectRule, objectKeys, objectsOf, ObjectRule, paintOutcomes, possibleOutcomes, shapePattern } from '../src/grid/object-rule-table.ts';
 
 const G = Grid.fromRows;
 //   1 1 0 2
@@ -160,5 +161,70 @@ describe('possibleOutcomes', () => {
 
   it('offers keep first, then recolouring to its own colour, for an unchanged one-colour object', () => {
     expect(possibleOutcomes(boats[2]!, harbour, harbour).slice(0, 2)).toEqual([{ kind: 'keep' }, { kind: 'recolour', colour: 3 }]);
+  });
+});
+
+// Kites on a field (invented): a hollow kite (a ring of 4 around one empty cell) and a flag-shaped
+// one, by colour.
+//   4 4 4 0 0 0
+//   4 0 4 0 6 6
+//   4 4 4 0 6 0
+//   0 0 0 0 6 0
+const field = G([[4, 4, 4, 0, 0, 0], [4, 0, 4, 0, 6, 6], [4, 4, 4, 0, 6, 0], [0, 0, 0, 0, 6, 0]]);
+const kites = objectsOf(field, 'by_colour');
+
+describe('mirror and fill outcomes', () => {
+  it('fills a hollow object and mirrors a lopsided one in its own box, worked out by hand', () => {
+    const rule = new ObjectRule('by_colour', 'hollow', [
+      { key: 1, outcome: { kind: 'fill', colour: 2 } },
+      { key: 0, outcome: { kind: 'mirror', across: 'left_right' } },
+    ]);
+    expect(applyObjectRule(field, rule)!.toRows()).toEqual([
+      [4, 4, 4, 0, 0, 0],
+      [4, 2, 4, 0, 6, 6],
+      [4, 4, 4, 0, 0, 6],
+      [0, 0, 0, 0, 0, 6],
+    ]);
+    const upsideDown = new ObjectRule('by_colour', 'hollow', [
+      { key: 1, outcome: { kind: 'keep' } },
+      { key: 0, outcome: { kind: 'mirror', across: 'top_bottom' } },
+    ]);
+    expect(applyObjectRule(field, upsideDown)!.toRows()).toEqual([
+      [4, 4, 4, 0, 0, 0],
+      [4, 0, 4, 0, 6, 0],
+      [4, 4, 4, 0, 6, 0],
+      [0, 0, 0, 0, 6, 6],
+    ]);
+  });
+
+  it('reads a mirror and a fill off a pair, and offers no mirror for an object its mirror leaves alike', () => {
+    const after = G([[4, 4, 4, 0, 0, 0], [4, 3, 4, 0, 6, 6], [4, 4, 4, 0, 0, 6], [0, 0, 0, 0, 0, 6]]);
+    // the fill first: keeping the ring would leave its filled hole unexplained
+    expect(possibleOutcomes(kites[0]!, field, after)).toEqual([{ kind: 'fill', colour: 3 }, { kind: 'keep' }, { kind: 'recolour', colour: 4 }]);
+    expect(possibleOutcomes(kites[1]!, field, after)).toEqual([{ kind: 'mirror', across: 'left_right' }]);
+    // the ring is its own mirror image either way: keep, its own colour, never a mirror
+    expect(possibleOutcomes(kites[0]!, field, field).map((o) => o.kind)).toEqual(['keep', 'recolour']);
+  });
+
+  it('mirroring a lone object twice the same way gives the grid back (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 4 }),
+        fc.integer({ min: 1, max: 4 }),
+        fc.array(fc.boolean(), { minLength: 16, maxLength: 16 }),
+        fc.integer({ min: 1, max: 9 }),
+        fc.boolean(),
+        (h, w, filled, colour, leftRight) => {
+          const rows = Array.from({ length: h + 2 }, (_, r) => Array.from({ length: w + 2 }, (_, c) => (r > 0 && c > 0 && r <= h && c <= w && filled[(r - 1) * 4 + c - 1] ? colour : 0)));
+          const g = G(rows);
+          const objects = objectsOf(g, 'multicolour_diagonal');
+          fc.pre(objects.length === 1);
+          const across = leftRight ? 'left_right' : 'top_bottom';
+          const once = paintOutcomes(g, objects, [{ kind: 'mirror', across }]);
+          const twice = paintOutcomes(once, objectsOf(once, 'multicolour_diagonal'), [{ kind: 'mirror', across }]);
+          expect(twice.equals(g)).toBe(true);
+        },
+      ),
+    );
   });
 });

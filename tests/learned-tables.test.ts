@@ -292,8 +292,11 @@ describe('the bits of a table', () => {
     // dusk: 2 + 1 (one property) + 5 (25 properties: ⌈log₂ 25⌉); size 1: γ(2) + 2 = 5; size 2:
     // γ(3) + 2 + c (one colour, c = 1) = 6; size 3: γ(4) + 2 = 7: 8 + 18 = 26
     expect(bitsOf(duskRule)).toBe(26);
-    // a move: zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 1 + 5 + (1 + 2 + 3 + 1) = 15
-    expect(bitsOf('object_rule[by_colour, touches_edge]{yes -> move (-1, 0)}')).toBe(2 + 1 + 5 + 1 + 2 + 3 + 1);
+    // a move: zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 1 + 5 + (1 + 3 + 3 + 1) = 16
+    expect(bitsOf('object_rule[by_colour, touches_edge]{yes -> move (-1, 0)}')).toBe(2 + 1 + 5 + 1 + 3 + 3 + 1);
+    // a mirror: 4 for the kind and 1 for the way; a fill: 4 and c for its colour (the only one
+    // written, k = 1, so c = 1): 8 + (1 + 4 + 1) + (1 + 4 + 1) = 20
+    expect(bitsOf('object_rule[by_colour, hollow]{no -> mirror left_right, yes -> fill #2}')).toBe(2 + 1 + 5 + (1 + 4 + 1) + (1 + 4 + 1));
     // two properties: 2 + 1 + 5 + 5; keys yes 1 and γ(3) = 3, then no 1 and γ(2) = 3; outcomes
     // #4 (2 + c, one colour: c = 1) and keep 2: 13 + (1 + 3 + 3) + (1 + 3 + 2) = 26
     expect(bitsOf('object_rule[by_colour, topmost, size]{no 1 -> keep, yes 2 -> #4}')).toBe(26);

@@ -118,6 +118,17 @@ export function fillEnclosed(g: Grid, colour: number): Grid {
   return new Grid(g.height, g.width, out);
 }
 
+/**
+ * The object's holes as marks over its box (1 = a cell of no object that cannot reach the box's
+ * edge by edge steps through such cells) with how many there are. The marks lie in a work array
+ * that the next call to this module reuses: read them before.
+ */
+export function holeMarks(o: GridObject): { readonly marks: Uint8Array; readonly count: number } {
+  const marks = markWork.take(o.cells.length);
+  const count = markEnclosed(o.height, o.width, o.cells, EMPTY, marks);
+  return { marks, count };
+}
+
 /** How many separate gaps the object closes in: regions of its box, not its cells, that cannot reach the box's edge. */
 export function holeCount(o: GridObject): number {
   return regionsEnclosed(o.height, o.width, o.cells, EMPTY);

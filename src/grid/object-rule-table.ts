@@ -1,6 +1,7 @@
 /**
  * Object rules: a table that says what happens to each object of a grid (it keeps its place,
- * is removed, takes one colour, or moves by an offset) from one property of the object: what it
+ * is removed, takes one colour, moves by an offset, is mirrored in its own box, or has its holes
+ * filled with one colour) from one property of the object: what it
  * is (size, colour, height, width, holes, shape, whether it is hollow, wider than high or higher
  * than wide), where it is (touching the edge, inside another object) and how it compares with the
  * others (size rank, whether it is the largest or the smallest, whether its shape or colour is
@@ -8,12 +9,13 @@
  *
  * Applying a rule cuts the grid into objects (one of four ways), looks each object's property
  * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed and
- * moved objects are lifted first, then recoloured ones are painted, then moved ones put down.
+ * moved objects are lifted first, then recoloured ones are painted, then moved ones put down,
+ * then mirrored ones turned over in place and holes filled.
  */
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid } from './grid.ts';
-import { enclosedCells, holeCount } from './holes.ts';
+import { enclosedCells, holeCount, holeMarks } from './holes.ts';
 import { touchesEdge } from './object-properties.ts';
 import { paintObjectInto } from './paint-object.ts';
 import { tableKeyCode, textHash } from './text-hash.ts';
@@ -77,7 +79,14 @@ export type ObjectOutcome =
   | { readonly kind: 'keep' }
   | { readonly kind: 'remove' }
   | { readonly kind: 'recolour'; readonly colour: number }
-  | { readonly kind: 'move'; readonly rows: number; readonly columns: number };
+  | { readonly kind: 'move'; readonly rows: number; readonly columns: number }
+  /** Its holes (see {@link holeMarks}), where the grid shows the background, take the colour. */
+  | { readonly kind: 'fill'; readonly colour: number }
+  /** Turned over in its own box: columns reversed (`left_right`) or rows (`top_bottom`). */
+  | { readonly kind: 'mirror'; readonly across: MirrorAxis };
+
+export type MirrorAxis = 'left_right' | 'top_bottom';
+export const MIRROR_AXES: readonly MirrorAxis[] = ['left_right', 'top_bottom'];
 
 export interface ObjectRuleEntry {
   readonly key: ObjectKey;
@@ -138,6 +147,10 @@ export function outcomeCode(o: ObjectOutcome): string {
       return `c${o.colour}`;
     case 'move':
       return `m${o.rows},${o.columns}`;
+    case 'fill':
+      return `f${o.colour}`;
+    case 'mirror':
+      return o.across === 'left_right' ? 'x' : 'y';
   }
 }
 
@@ -369,7 +382,7 @@ export function applyObjectRule(g: Grid, rule: ObjectRule): Grid | null {
   return paintOutcomes(g, objects, outcomes);
 }
 
-/** Lifts removed and moved objects, paints recoloured ones, then puts moved ones down. */
+/** Lifts removed and moved objects, paints recoloured ones, puts moved ones down, then mirrors and fills in place. */
 export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes: readonly ObjectOutcome[]): Grid {
   const { height, width } = g;
   const background = backgroundColour(g);
@@ -386,13 +399,20 @@ export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes:
     const o = outcomes[i]!;
     if (o.kind === 'move') paintObjectInto(out, height, width, objects[i]!, undefined, o.rows, o.columns);
   }
+  for (let i = 0; i < objects.length; i++) {
+    const o = outcomes[i]!;
+    if (o.kind === 'mirror') paintMirrored(out, width, objects[i]!, o.across === 'left_right', background);
+    else if (o.kind === 'fill') paintHoles(out, width, objects[i]!, o.colour, background);
+  }
   return new Grid(height, width, out);
 }
 
 /**
  * The outcomes that would turn the object of `input` into what `output` (the same size) shows,
- * in order of preference: keep, remove, recolour (by colour), then moves by distance (the shifted
- * object must lie inside the grid and match the output cell for cell). Whether the rest of the
+ * in order of preference: fill (where it has holes and the output fills them: keeping or
+ * recolouring it to its own colour would leave them unexplained), keep, remove, recolour (by
+ * colour), mirror (left to right, then top to bottom, where that changes the object), then moves
+ * by distance (the shifted object must lie inside the grid and match the output cell for cell). Whether the rest of the
  * output agrees is for the caller to check by applying the whole rule.
  */
 export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): ObjectOutcome[] {
@@ -422,6 +442,9 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
       if (matchesAt(o, output, o.top + dr, o.left + dc)) moves.push([dr, dc]);
     }
   }
+  mirrors(o, input, output, background, found);
+  const fill = holesFill(o, input, output, background);
+  if (fill) found.unshift(fill);
   moves.sort((a, b) => Math.abs(a[0]) + Math.abs(a[1]) - Math.abs(b[0]) - Math.abs(b[1]) || a[0] - b[0] || a[1] - b[1]);
   for (const [rows, columns] of moves) found.push({ kind: 'move', rows, columns });
   return found;
@@ -435,4 +458,87 @@ function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
     }
   }
   return true;
+}
+
+/** The cell of the object's box at (r, c) once the object is mirrored left to right or top to bottom. */
+function mirroredCell(o: GridObject, r: number, c: number, leftRight: boolean): number {
+  return leftRight ? o.cells[r * o.width + (o.width - 1 - c)]! : o.cells[(o.height - 1 - r) * o.width + c]!;
+}
+
+/** The object mirrored in its own box: where it leaves a cell, the background; where it comes, its colours. */
+function paintMirrored(out: Uint8Array, width: number, o: GridObject, leftRight: boolean, background: number): void {
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      const v = mirroredCell(o, r, c, leftRight);
+      const i = (o.top + r) * width + o.left + c;
+      if (v !== EMPTY) out[i] = v;
+      else if (o.cells[r * o.width + c] !== EMPTY) out[i] = background;
+    }
+  }
+}
+
+/** The object's holes, where the grid shows the background, painted one colour. */
+function paintHoles(out: Uint8Array, width: number, o: GridObject, colour: number, background: number): void {
+  const { marks, count } = holeMarks(o);
+  if (count === 0) return;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      const i = (o.top + r) * width + o.left + c;
+      if (marks[r * o.width + c] === 1 && out[i] === background) out[i] = colour;
+    }
+  }
+}
+
+/** Adds the object mirrored either way in its own box, where that changes it and gives what the output shows there. */
+function mirrors(o: GridObject, input: Grid, output: Grid, background: number, found: ObjectOutcome[]): void {
+  const { width } = input;
+  const outputCells = output.cells;
+  for (const across of MIRROR_AXES) {
+    const leftRight = across === 'left_right';
+    let changes = false;
+    let fits = true;
+    for (let r = 0; r < o.height && fits; r++) {
+      for (let c = 0; c < o.width; c++) {
+        const own = o.cells[r * o.width + c]!;
+        const v = mirroredCell(o, r, c, leftRight);
+        if (v === EMPTY && own === EMPTY) continue;
+        const wanted = v === EMPTY ? background : v;
+        if (outputCells[(o.top + r) * width + o.left + c] !== wanted) {
+          fits = false;
+          break;
+        }
+        if (wanted !== own) changes = true;
+      }
+    }
+    if (fits && changes) found.push({ kind: 'mirror', across });
+  }
+}
+
+/**
+ * The object's holes filled with one colour other than the background, where that gives what the
+ * output shows: it has holes, its own cells stay, and every hole cell showing the background in
+ * the input shows that colour in the output. Undefined otherwise.
+ */
+function holesFill(o: GridObject, input: Grid, output: Grid, background: number): ObjectOutcome | undefined {
+  const { marks, count } = holeMarks(o);
+  if (count === 0) return undefined;
+  const { width } = input;
+  const inputCells = input.cells;
+  const outputCells = output.cells;
+  let colour = -1;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      const i = (o.top + r) * width + o.left + c;
+      const own = o.cells[r * o.width + c]!;
+      if (own !== EMPTY) {
+        if (outputCells[i] !== own) return undefined;
+        continue;
+      }
+      if (marks[r * o.width + c] !== 1 || inputCells[i] !== background) continue;
+      const v = outputCells[i]!;
+      if (colour === -1) colour = v;
+      else if (colour !== v) return undefined;
+    }
+  }
+  return colour >= 0 && colour !== background ? { kind: 'fill', colour } : undefined;
 }

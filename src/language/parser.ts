@@ -23,6 +23,7 @@ import {
   OBJECT_PROPERTIES,
   propertyValues,
   type ObjectKey,
+  MIRROR_AXES,
   type ObjectOutcome,
   type ObjectProperty,
   type ObjectRuleEntry,
@@ -257,8 +258,13 @@ function parseShape(r: LineReader): string {
 
 function parseOutcome(r: LineReader): ObjectOutcome {
   if (r.peek() === '#') return { kind: 'recolour', colour: r.colour() };
-  const word = oneOf(r, ['keep', 'remove', 'move'], "'keep', 'remove', a colour such as '#3', or 'move (rows, columns)'");
-  if (word !== 'move') return { kind: word };
+  const word = oneOf(r, ['keep', 'remove', 'move', 'mirror', 'fill'], "'keep', 'remove', a colour such as '#3', 'move (rows, columns)', 'mirror left_right', 'mirror top_bottom' or 'fill #c'");
+  if (word === 'keep' || word === 'remove') return { kind: word };
+  if (word === 'fill') {
+    r.skipSpaces();
+    return { kind: 'fill', colour: r.colour() };
+  }
+  if (word === 'mirror') return { kind: 'mirror', across: oneOf(r, MIRROR_AXES, "'left_right' or 'top_bottom' after mirror") };
   r.expect('(', "'(' after move");
   const rows = r.integer('a row offset');
   r.expect(',', "',' between rows and columns");

@@ -81,6 +81,10 @@ function printOutcome(o: ObjectOutcome): string {
       return `#${o.colour}`;
     case 'move':
       return `move (${o.rows}, ${o.columns})`;
+    case 'fill':
+      return `fill #${o.colour}`;
+    case 'mirror':
+      return `mirror ${o.across}`;
   }
 }
 

@@ -56,8 +56,14 @@ export const PROPERTY_BITS = Math.ceil(Math.log2(OBJECT_PROPERTIES.length));
 /** Bits for a grid rule's property (8), and for saying whether all its grids share one size. */
 export const GRID_PROPERTY_BITS = 3;
 export const SHARED_SIZE_BITS = 1;
-/** Bits for the kind of an object's outcome (keep, remove, recolour, move). */
-export const OUTCOME_KIND_BITS = 2;
+/**
+ * Bits for the kind of an object's outcome, a prefix code over the six kinds (its lengths meet
+ * Kraft's sum exactly: 3 × 1/4 + 1/8 + 2 × 1/16 = 1): the three that keep the object where it is
+ * (keep, remove, recolour) 2 bits each, a move 3, a mirror or a fill 4.
+ */
+export const OUTCOME_KIND_BITS: { readonly [K in ObjectOutcome['kind']]: number } = { keep: 2, remove: 2, recolour: 2, move: 3, mirror: 4, fill: 4 };
+/** Bits for the way an object is mirrored (left to right or top to bottom). */
+export const MIRROR_AXIS_BITS = 1;
 
 function featureValueBits(values: CellFeatureValues, c: number, k: number): number {
   switch (values) {
@@ -110,11 +116,14 @@ function outcomeBits(o: ObjectOutcome, c: number): number {
   switch (o.kind) {
     case 'keep':
     case 'remove':
-      return OUTCOME_KIND_BITS;
+      return OUTCOME_KIND_BITS[o.kind];
     case 'recolour':
-      return OUTCOME_KIND_BITS + c;
+    case 'fill':
+      return OUTCOME_KIND_BITS[o.kind] + c;
     case 'move':
-      return OUTCOME_KIND_BITS + signedBits(o.rows) + signedBits(o.columns);
+      return OUTCOME_KIND_BITS.move + signedBits(o.rows) + signedBits(o.columns);
+    case 'mirror':
+      return OUTCOME_KIND_BITS.mirror + MIRROR_AXIS_BITS;
   }
 }
 
@@ -191,7 +200,7 @@ export function tableBits(l: LiteralValue): number | undefined {
       for (const e of l.entries) {
         if (propertyValues(l.property) === 'colour') colours.add(e.key as number);
         if (second !== undefined && propertyValues(second) === 'colour') colours.add(e.secondKey as number);
-        if (e.outcome.kind === 'recolour') colours.add(e.outcome.colour);
+        if (e.outcome.kind === 'recolour' || e.outcome.kind === 'fill') colours.add(e.outcome.colour);
       }
       const c = colourBits(colours.size);
       let bits = GROUPING_BITS + PROPERTY_COUNT_BITS + PROPERTY_BITS * (second === undefined ? 1 : 2);

@@ -33,7 +33,7 @@ import {
   type CellFeatureValues,
   type CellRuleEntry,
 } from '../grid/cell-rule-table.ts';
-import { OBJECT_GROUPINGS, OBJECT_PROPERTIES, objectRuleEntry, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
+import { MIRROR_AXES, OBJECT_GROUPINGS, OBJECT_PROPERTIES, objectRuleEntry, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
@@ -232,14 +232,22 @@ function outcomeTokens(outcome: ObjectOutcome): string[] {
       return [colourToken(outcome.colour)];
     case 'move':
       return ['move', intToken(outcome.rows), intToken(outcome.columns)];
+    case 'fill':
+      return ['fill', colourToken(outcome.colour)];
+    case 'mirror':
+      return ['mirror', `across:${outcome.across}`];
   }
 }
 
 function readOutcome(reader: TokenReader): ObjectOutcome {
   const t = reader.peek();
   if (t !== undefined && COLOUR_PATTERN.test(t)) return { kind: 'recolour', colour: readColour(reader) };
-  const kind = word(reader, ['keep', 'remove', 'move'], "'keep', 'remove', 'move' or a colour token");
-  if (kind !== 'move') return { kind };
+  const kind = word(reader, ['keep', 'remove', 'move', 'mirror', 'fill'], "'keep', 'remove', 'move', 'mirror', 'fill' or a colour token");
+  if (kind === 'keep' || kind === 'remove') return { kind };
+  if (kind === 'fill') return { kind: 'fill', colour: readColour(reader) };
+  if (kind === 'mirror') {
+    return { kind: 'mirror', across: prefixed(reader, 'across:', MIRROR_AXES, "'across:left_right' or 'across:top_bottom'") };
+  }
   const rows = readInt(reader);
   return { kind: 'move', rows, columns: readInt(reader) };
 }
@@ -353,6 +361,9 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       { token: 'keep', meaning: 'the object stays as it is' },
       { token: 'remove', meaning: 'the object is erased' },
       { token: 'move', meaning: 'the object moves: rows and columns follow as number tokens' },
+      { token: 'mirror', meaning: 'the object is mirrored in its own box: the way follows' },
+      ...MIRROR_AXES.map((a) => ({ token: `across:${a}`, meaning: `mirrored ${a === 'left_right' ? 'left to right' : 'top to bottom'}` })),
+      { token: 'fill', meaning: "the object's holes take a colour: the colour token follows" },
     ],
     starts: (t) => t === '<object_rule>',
     encode: (l) => [

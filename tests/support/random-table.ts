@@ -124,13 +124,17 @@ export function randomGridRule(choose: Chooser): LiteralValue {
 }
 
 function randomOutcome(choose: Chooser): ObjectOutcome {
-  switch (choose(4)) {
+  switch (choose(6)) {
     case 0:
       return { kind: 'keep' };
     case 1:
       return { kind: 'remove' };
     case 2:
       return { kind: 'recolour', colour: choose(10) };
+    case 3:
+      return { kind: 'fill', colour: choose(10) };
+    case 4:
+      return { kind: 'mirror', across: choose(2) === 0 ? 'left_right' : 'top_bottom' };
     default:
       return { kind: 'move', rows: choose(7) - 3, columns: choose(7) - 3 };
   }
