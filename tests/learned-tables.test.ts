@@ -166,6 +166,32 @@ describe('an object rule read off the demonstrations', () => {
     expect((run(programApplying('apply_object_rule', rule), quay.testInputs[0]!) as Grid).toRows()).toEqual([[0, 4, 4, 0], [6, 6, 6, 6], [0, 0, 1, 0]]);
   });
 
+  it('mirrors every weather vane, the ones their mirror leaves alike included', () => {
+    // Invented: on a roof, every vane (6) turns over left to right; chimneys (4) stay. The second
+    // roof's straight vane is its own mirror image: it shares the rule all the same.
+    const roofs: Puzzle = {
+      name: 'roofs',
+      train: [
+        {
+          input: G([[6, 6, 0, 0], [6, 0, 0, 4], [6, 0, 0, 4]]),
+          output: G([[6, 6, 0, 0], [0, 6, 0, 4], [0, 6, 0, 4]]),
+        },
+        {
+          input: G([[0, 6, 0, 0, 0], [0, 6, 0, 6, 6], [0, 6, 0, 0, 6], [4, 0, 0, 0, 0]]),
+          output: G([[0, 6, 0, 0, 0], [0, 6, 0, 6, 6], [0, 6, 0, 6, 0], [4, 0, 0, 0, 0]]),
+        },
+      ],
+      testInputs: [G([[0, 0, 0, 4], [6, 6, 6, 0], [0, 0, 6, 0]])],
+    };
+    // Every object touches the roof's edge, and the chimneys and the straight vane are their own
+    // mirror images: one entry mirroring them all is the cheapest rule (an object its mirror leaves
+    // alike is offered the mirror after keep, so it can share an entry with the vanes that turn).
+    const rule = printLiteral(learnObjectRules(roofs)[0]!.literal);
+    expect(rule).toBe('object_rule[by_colour, touches_edge]{yes -> mirror left_right}');
+    // By hand: the vane's box is rows 1–2, columns 0–2; turned over, its lone cell goes left.
+    expect((run(programApplying('apply_object_rule', rule), roofs.testInputs[0]!) as Grid).toRows()).toEqual([[0, 0, 0, 4], [6, 6, 6, 0], [6, 0, 0, 0]]);
+  });
+
   it('keys on two properties when no one property tells the boats apart', () => {
     // Invented: the two-cell boat moored nearest the top of the harbour is lit (4). Single cells
     // lie as high, and other two-cell boats lower, so neither the height nor the size alone (nor

@@ -411,7 +411,7 @@ export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes:
  * The outcomes that would turn the object of `input` into what `output` (the same size) shows,
  * in order of preference: fill (where it has holes and the output fills them: keeping or
  * recolouring it to its own colour would leave them unexplained), keep, remove, recolour (by
- * colour), mirror (left to right, then top to bottom, where that changes the object), then moves
+ * colour), mirror (left to right, then top to bottom), then moves
  * by distance (the shifted object must lie inside the grid and match the output cell for cell). Whether the rest of the
  * output agrees is for the caller to check by applying the whole rule.
  */
@@ -489,13 +489,17 @@ function paintHoles(out: Uint8Array, width: number, o: GridObject, colour: numbe
   }
 }
 
-/** Adds the object mirrored either way in its own box, where that changes it and gives what the output shows there. */
+/**
+ * Adds the object mirrored either way in its own box, where that gives what the output shows
+ * there; also for an object its mirror leaves alike and the output keeps (then the same as keeping
+ * it, offered after keep so that objects under one key, some lopsided and some not, can share
+ * `mirror`, as an unchanged object is offered its own colour).
+ */
 function mirrors(o: GridObject, input: Grid, output: Grid, background: number, found: ObjectOutcome[]): void {
   const { width } = input;
   const outputCells = output.cells;
   for (const across of MIRROR_AXES) {
     const leftRight = across === 'left_right';
-    let changes = false;
     let fits = true;
     for (let r = 0; r < o.height && fits; r++) {
       for (let c = 0; c < o.width; c++) {
@@ -507,10 +511,9 @@ function mirrors(o: GridObject, input: Grid, output: Grid, background: number, f
           fits = false;
           break;
         }
-        if (wanted !== own) changes = true;
       }
     }
-    if (fits && changes) found.push({ kind: 'mirror', across });
+    if (fits) found.push({ kind: 'mirror', across });
   }
 }
 
