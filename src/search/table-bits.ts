@@ -58,8 +58,8 @@ export const GRID_PROPERTY_BITS = 3;
 export const SHARED_SIZE_BITS = 1;
 /**
  * Bits for the kind of an object's outcome, a prefix code over the six kinds (its lengths meet
- * Kraft's sum exactly: 3 × 1/4 + 1/8 + 2 × 1/16 = 1): the three that keep the object where it is
- * (keep, remove, recolour) 2 bits each, a move 3, a mirror or a fill 4.
+ * Kraft's sum exactly: 3 × 1/4 + 1/8 + 2 × 1/16 = 1): keep, remove and recolour 2 bits each, as
+ * before mirror and fill came, a move 3, a mirror or a fill 4.
  */
 export const OUTCOME_KIND_BITS: { readonly [K in ObjectOutcome['kind']]: number } = { keep: 2, remove: 2, recolour: 2, move: 3, mirror: 4, fill: 4 };
 /** Bits for the way an object is mirrored (left to right or top to bottom). */
