@@ -411,9 +411,9 @@ export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes:
  * The outcomes that would turn the object of `input` into what `output` (the same size) shows,
  * in order of preference: fill (where it has holes and the output fills them: keeping or
  * recolouring it to its own colour would leave them unexplained), keep, remove, recolour (by
- * colour), mirror (left to right, then top to bottom), then moves
- * by distance (the shifted object must lie inside the grid and match the output cell for cell). Whether the rest of the
- * output agrees is for the caller to check by applying the whole rule.
+ * colour), mirror (left to right, then top to bottom), then moves by distance (the shifted object
+ * must lie inside the grid and match the output cell for cell). Whether the rest of the output
+ * agrees is for the caller to check by applying the whole rule.
  */
 export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): ObjectOutcome[] {
   const found: ObjectOutcome[] = [];
@@ -460,19 +460,22 @@ function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
   return true;
 }
 
-/** The cell of the object's box at (r, c) once the object is mirrored left to right or top to bottom. */
-function mirroredCell(o: GridObject, r: number, c: number, leftRight: boolean): number {
-  return leftRight ? o.cells[r * o.width + (o.width - 1 - c)]! : o.cells[(o.height - 1 - r) * o.width + c]!;
+/**
+ * What the object mirrored in its own box puts at (r, c) of the box: its colour where a mirrored
+ * cell comes, the background where the object leaves a cell, -1 where neither (the grid's own cell).
+ */
+function mirroredColour(o: GridObject, r: number, c: number, leftRight: boolean, background: number): number {
+  const v = leftRight ? o.cells[r * o.width + (o.width - 1 - c)]! : o.cells[(o.height - 1 - r) * o.width + c]!;
+  if (v !== EMPTY) return v;
+  return o.cells[r * o.width + c] !== EMPTY ? background : -1;
 }
 
-/** The object mirrored in its own box: where it leaves a cell, the background; where it comes, its colours. */
+/** The object mirrored in its own box. */
 function paintMirrored(out: Uint8Array, width: number, o: GridObject, leftRight: boolean, background: number): void {
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
-      const v = mirroredCell(o, r, c, leftRight);
-      const i = (o.top + r) * width + o.left + c;
-      if (v !== EMPTY) out[i] = v;
-      else if (o.cells[r * o.width + c] !== EMPTY) out[i] = background;
+      const v = mirroredColour(o, r, c, leftRight, background);
+      if (v >= 0) out[(o.top + r) * width + o.left + c] = v;
     }
   }
 }
@@ -502,15 +505,9 @@ function mirrors(o: GridObject, input: Grid, output: Grid, background: number, f
     const leftRight = across === 'left_right';
     let fits = true;
     for (let r = 0; r < o.height && fits; r++) {
-      for (let c = 0; c < o.width; c++) {
-        const own = o.cells[r * o.width + c]!;
-        const v = mirroredCell(o, r, c, leftRight);
-        if (v === EMPTY && own === EMPTY) continue;
-        const wanted = v === EMPTY ? background : v;
-        if (outputCells[(o.top + r) * width + o.left + c] !== wanted) {
-          fits = false;
-          break;
-        }
+      for (let c = 0; c < o.width && fits; c++) {
+        const wanted = mirroredColour(o, r, c, leftRight, background);
+        if (wanted >= 0 && outputCells[(o.top + r) * width + o.left + c] !== wanted) fits = false;
       }
     }
     if (fits) found.push({ kind: 'mirror', across });

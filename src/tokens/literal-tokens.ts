@@ -245,9 +245,7 @@ function readOutcome(reader: TokenReader): ObjectOutcome {
   const kind = word(reader, ['keep', 'remove', 'move', 'mirror', 'fill'], "'keep', 'remove', 'move', 'mirror', 'fill' or a colour token");
   if (kind === 'keep' || kind === 'remove') return { kind };
   if (kind === 'fill') return { kind: 'fill', colour: readColour(reader) };
-  if (kind === 'mirror') {
-    return { kind: 'mirror', across: prefixed(reader, 'across:', MIRROR_AXES, "'across:left_right' or 'across:top_bottom'") };
-  }
+  if (kind === 'mirror') return { kind: 'mirror', across: prefixed(reader, 'across:', MIRROR_AXES, "'across:left_right' or 'across:top_bottom'") };
   const rows = readInt(reader);
   return { kind: 'move', rows, columns: readInt(reader) };
 }
