@@ -1,7 +1,8 @@
 /**
  * How fitting programs become attempts: a program that breaks the output size the
  * demonstrations settle is charged SIZE_BREAK_BITS, not thrown out. The grids below are made up
- * for the check; the last block measures the charge on the public training set.
+ * for the check; the last block measures the charge on the public training set. The last
+ * attempt is the cheapest of the other way (table or composition) when all before it are of one.
  */
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
@@ -14,7 +15,7 @@ import { rankAttempts, rankingBits, type Rankable } from '../src/search/rank-att
 import { readTaskFile, taskFiles } from '../src/tasks/read-task.ts';
 
 const grid = (colour: number): Grid => Grid.fromRows([[colour, colour]]);
-const program = (bits: number, breaksSize: boolean, colour: number): Rankable & { name: string } => ({ bits, breaksSize, testOutputs: [grid(colour)], name: `${bits}${breaksSize ? '!' : ''}` });
+const program = (bits: number, breaksSize: boolean, colour: number, fromTable = false): Rankable & { name: string } => ({ bits, breaksSize, testOutputs: [grid(colour)], fromTable, name: `${bits}${breaksSize ? '!' : ''}${fromTable ? 't' : ''}` });
 
 describe('ranking attempts', () => {
   it('puts a size breaker first only when it is cheaper by more than the charge', () => {
@@ -35,20 +36,54 @@ describe('ranking attempts', () => {
     expect(rankAttempts([a, b, c], 2)).toEqual([a, c]);
   });
 
-  it('orders by ranking bits, never by anything else', () => {
-    const arbitrary = fc.array(fc.record({ bits: fc.integer({ min: 1, max: 60 }), breaksSize: fc.boolean(), colour: fc.integer({ min: 0, max: 9 }) }), { maxLength: 12 });
+  it('orders by ranking bits, the last attempt only ever taken from the other way', () => {
+    const arbitrary = fc.array(fc.record({ bits: fc.integer({ min: 1, max: 60 }), breaksSize: fc.boolean(), colour: fc.integer({ min: 0, max: 9 }), fromTable: fc.boolean() }), { maxLength: 12 });
     fc.assert(
       fc.property(arbitrary, fc.integer({ min: 1, max: 4 }), (items, attempts) => {
-        const found = items.map((x) => program(x.bits, x.breaksSize, x.colour));
+        const found = items.map((x) => program(x.bits, x.breaksSize, x.colour, x.fromTable));
         const taken = rankAttempts(found, attempts);
         const distinctColours = new Set(items.map((x) => x.colour)).size;
         expect(taken.length).toBe(Math.min(attempts, distinctColours));
-        for (let k = 1; k < taken.length; k++) expect(rankingBits(taken[k - 1]!)).toBeLessThanOrEqual(rankingBits(taken[k]!));
-        // Nothing left out is strictly better than the last taken and of an output not yet taken.
-        const last = taken[taken.length - 1];
-        if (last) for (const s of found) if (!taken.includes(s) && !taken.some((t) => t.testOutputs[0]!.equals(s.testOutputs[0]!))) expect(rankingBits(s)).toBeGreaterThanOrEqual(rankingBits(last));
+        const outputsDiffer = (s: Rankable, among: readonly Rankable[]): boolean => !among.some((t) => t.testOutputs[0]!.equals(s.testOutputs[0]!));
+        for (let k = 0; k < taken.length; k++) {
+          const before = taken.slice(0, k);
+          expect(outputsDiffer(taken[k]!, before)).toBe(true);
+          // All but the last: nothing left out is strictly better and of an output not yet taken.
+          // The last as well, unless every attempt before it is of one way and it is of the other:
+          // then nothing of its own way is strictly better.
+          const hedged = k === attempts - 1 && k > 0 && before.every((t) => t.fromTable !== taken[k]!.fromTable);
+          for (const s of found) {
+            if (taken.includes(s) || !outputsDiffer(s, before)) continue;
+            if (!hedged || s.fromTable === taken[k]!.fromTable) expect(rankingBits(s)).toBeGreaterThanOrEqual(rankingBits(taken[k]!));
+          }
+        }
+        // The hedge: when some program of each way fits, with outputs that can stand beside the
+        // cheapest, the attempts hold both ways.
+        if (attempts >= 2 && taken.length === attempts) {
+          const first = taken[0]!;
+          const otherWay = found.some((s) => s.fromTable !== first.fromTable && outputsDiffer(s, taken.slice(0, attempts - 1)));
+          if (otherWay) expect(taken.some((s) => s.fromTable !== first.fromTable)).toBe(true);
+        }
       }),
     );
+  });
+
+  it('gives the second attempt to the cheapest table when the two cheapest are compositions, and the other way round', () => {
+    const composed = program(20, false, 1);
+    const nearCopy = program(21, false, 2);
+    const table = program(50, false, 3, true);
+    const dearerTable = program(60, false, 4, true);
+    expect(rankAttempts([nearCopy, table, composed, dearerTable], 2)).toEqual([composed, table]);
+    // A table with the first attempt's outputs adds nothing: the next distinct one is taken.
+    const sameAsFirst = program(40, false, 1, true);
+    expect(rankAttempts([composed, nearCopy, sameAsFirst, table], 2)).toEqual([composed, table]);
+    // Tables first: the second attempt is the cheapest composition.
+    const cheapTable = program(12, false, 5, true);
+    expect(rankAttempts([cheapTable, dearerTable, nearCopy], 2)).toEqual([cheapTable, nearCopy]);
+    // One way only: plain order.
+    expect(rankAttempts([nearCopy, composed], 2)).toEqual([composed, nearCopy]);
+    // One attempt: always the shortest program.
+    expect(rankAttempts([table, composed], 1)).toEqual([composed]);
   });
 });
 

@@ -34,7 +34,7 @@ export function solveFile(file: string, options: SolveOptions): TaskReport {
     task: puzzle.name,
     file,
     status: result.solutions.length > 0 ? 'found' : 'not found',
-    solutions: result.solutions.map((s) => ({ program: s.text, bits: s.bits, ...(s.throughGoal ? { throughGoal: true } : {}), ...(s.throughIntermediateTable ? { throughIntermediateTable: true } : {}), ...(s.throughCaseSplit ? { throughCaseSplit: true } : {}), ...(s.breaksSize ? { breaksSize: true } : {}) })),
+    solutions: result.solutions.map((s) => ({ program: s.text, bits: s.bits, ...(s.throughGoal ? { throughGoal: true } : {}), ...(s.throughIntermediateTable ? { throughIntermediateTable: true } : {}), ...(s.throughCaseSplit ? { throughCaseSplit: true } : {}), ...(s.breaksSize ? { breaksSize: true } : {}), ...(s.fromTable ? { fromTable: true } : {}) })),
     attempts: puzzle.testInputs.map((_, i) => result.solutions.map((s) => s.testOutputs[i]!.toRows())),
     reason: result.reason,
     seconds: result.seconds,

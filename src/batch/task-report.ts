@@ -23,6 +23,8 @@ export interface ReportedSolution {
   readonly throughCaseSplit?: boolean;
   /** True when its output on some test input breaks the size the demonstrations settle (ranked as SIZE_BREAK_BITS dearer, src/search/output-size.ts). */
   readonly breaksSize?: boolean;
+  /** True when it applies a table read off the demonstrations straight to the input (not a program the search composed). */
+  readonly fromTable?: boolean;
 }
 
 export interface TaskReport {

@@ -1,6 +1,7 @@
 /**
  * Solving one puzzle: the shortest program (in bits) consistent with every demonstration,
- * and up to N attempts per test input from the N cheapest solutions with distinct test outputs.
+ * and up to N attempts per test input from the N cheapest solutions with distinct test outputs
+ * (the last of the other way, table or composition, when all before it are of one: rank-attempts.ts).
  */
 import type { Grid } from '../grid/grid.ts';
 import type { Program } from '../language/ast.ts';
@@ -60,6 +61,8 @@ export interface Solution {
   readonly throughCaseSplit: boolean;
   /** True when its output on some test input breaks the size the demonstrations settle (ranked as SIZE_BREAK_BITS dearer, src/search/output-size.ts). */
   readonly breaksSize: boolean;
+  /** True when it applies a table read off the demonstrations straight to the input (src/search/table-programs.ts) rather than being composed by the search. */
+  readonly fromTable: boolean;
 }
 
 export interface SolveResult {
@@ -112,10 +115,10 @@ export function solvePuzzle(puzzle: Puzzle, options: SolveOptions = {}): SolveRe
   }, INPUT_NAME);
   const found: Solution[] = outcome.solutions.map((c) => {
     const program = programFromCandidate(c, INPUT_NAME);
-    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c), throughCaseSplit: outcome.throughCaseSplits.has(c), breaksSize: outcome.sizeFallbacks.has(c) };
+    return { program, text: printProgram(program), bits: c.cost, testOutputs: c.values.slice(trainCount) as Grid[], throughGoal: outcome.throughGoals.has(c), throughIntermediateTable: outcome.throughIntermediateTables.has(c), throughCaseSplit: outcome.throughCaseSplits.has(c), breaksSize: outcome.sizeFallbacks.has(c), fromTable: false };
   });
   for (const t of tables) {
-    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false, throughCaseSplit: false, breaksSize: false });
+    found.push({ program: t.program, text: printProgram(t.program), bits: t.bits, testOutputs: t.values.slice(trainCount), throughGoal: false, throughIntermediateTable: false, throughCaseSplit: false, breaksSize: false, fromTable: true });
   }
   const solutions = rankAttempts(found, attempts);
   const reason = solutions.length > 0 ? 'solved' : outcome.reason;
