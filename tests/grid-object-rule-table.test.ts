@@ -2,7 +2,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Grid } from '../src/grid/grid.ts';
-import { applyObjectRule, objectKeys, objectsOf, ObjectRule, paintOutcomes, possibleOutcomes, shapePattern } from '../src/grid/object-rule-table.ts';
+import { applyObjectRule, objectKeys, objectsOf, ObjectRule, paintOutcomes, possibleOutcomes, shapePattern, slideOffset } from '../src/grid/object-rule-table.ts';
 
 const G = Grid.fromRows;
 //   1 1 0 2
@@ -155,7 +155,12 @@ describe('possibleOutcomes', () => {
   it('reads what became of each object from the output', () => {
     const after = G([[5, 5, 0, 0], [0, 0, 0, 2], [0, 0, 0, 2], [0, 0, 0, 2]]);
     expect(possibleOutcomes(boats[0]!, harbour, after)).toEqual([{ kind: 'recolour', colour: 5 }]);
-    expect(possibleOutcomes(boats[1]!, harbour, after)).toEqual([{ kind: 'move', rows: 1, columns: 0 }]);
+    // The 2 went down one row, as far as it can go (a slide down, offered before the move); a slide
+    // toward the nearest thing in line would take it left, against the 1, so it is not offered.
+    expect(possibleOutcomes(boats[1]!, harbour, after)).toEqual([
+      { kind: 'slide', way: 'down' },
+      { kind: 'move', rows: 1, columns: 0 },
+    ]);
     expect(possibleOutcomes(boats[2]!, harbour, after)).toEqual([{ kind: 'remove' }]);
   });
 
@@ -227,11 +232,106 @@ describe('mirror and fill outcomes', () => {
           const objects = objectsOf(g, 'multicolour_diagonal');
           fc.pre(objects.length === 1);
           const across = leftRight ? 'left_right' : 'top_bottom';
-          const once = paintOutcomes(g, objects, [{ kind: 'mirror', across }]);
-          const twice = paintOutcomes(once, objectsOf(once, 'multicolour_diagonal'), [{ kind: 'mirror', across }]);
+          const once = paintOutcomes(g, objects, [{ kind: 'mirror', across }])!;
+          const twice = paintOutcomes(once, objectsOf(once, 'multicolour_diagonal'), [{ kind: 'mirror', across }])!;
           expect(twice.equals(g)).toBe(true);
         },
       ),
+    );
+  });
+});
+
+// Crates in a yard (invented): a crate slides one way until the yard's wall (the grid's border) or
+// another crate stops it.
+//   0 0 0 0 0
+//   0 0 0 0 0
+//   3 0 0 8 8
+//   0 0 0 8 8
+//   0 0 0 0 0
+const yard = G([[0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [3, 0, 0, 8, 8], [0, 0, 0, 8, 8], [0, 0, 0, 0, 0]]);
+const crates = objectsOf(yard, 'by_colour');
+
+describe('slide outcomes', () => {
+  it('slides each way as far as the yard lets it, worked out by hand', () => {
+    // the 3 (row 2, column 0): up 2 rows and down 2 to the wall, left not at all, right 2 columns
+    // to the 8; the 8 block (rows 2–3, columns 3–4): up 2, down 1, right 0, left 2 to the 3
+    expect(crates.map((o) => o.mainColour)).toEqual([3, 8]);
+    expect(slideOffset(crates[0]!, yard, 'up', 0)).toEqual([-2, 0]);
+    expect(slideOffset(crates[0]!, yard, 'down', 0)).toEqual([2, 0]);
+    expect(slideOffset(crates[0]!, yard, 'left', 0)).toEqual([0, 0]);
+    expect(slideOffset(crates[0]!, yard, 'right', 0)).toEqual([0, 2]);
+    expect(slideOffset(crates[1]!, yard, 'down', 0)).toEqual([1, 0]);
+    expect(slideOffset(crates[1]!, yard, 'left', 0)).toEqual([0, -2]);
+    // toward: the only way each is stopped by the other rather than the wall
+    expect(slideOffset(crates[0]!, yard, 'toward', 0)).toEqual([0, 2]);
+    expect(slideOffset(crates[1]!, yard, 'toward', 0)).toEqual([0, -2]);
+  });
+
+  it('applies slides measured on the grid before anything moved', () => {
+    const rule = new ObjectRule('by_colour', 'colour', [
+      { key: 3, outcome: { kind: 'slide', way: 'toward' } },
+      { key: 8, outcome: { kind: 'slide', way: 'up' } },
+    ]);
+    expect(applyObjectRule(yard, rule)!.toRows()).toEqual([
+      [0, 0, 0, 8, 8],
+      [0, 0, 0, 8, 8],
+      [0, 0, 3, 0, 0],
+      [0, 0, 0, 0, 0],
+      [0, 0, 0, 0, 0],
+    ]);
+  });
+
+  it('fails rather than guess when two ways are equally near', () => {
+    //   5 0 1 0 5: the 1 is one step from a 5 either way
+    const between = G([[5, 0, 1, 0, 5]]);
+    const rule = new ObjectRule('by_colour', 'colour', [
+      { key: 1, outcome: { kind: 'slide', way: 'toward' } },
+      { key: 5, outcome: { kind: 'keep' } },
+    ]);
+    expect(slideOffset(objectsOf(between, 'by_colour')[1]!, between, 'toward', 0)).toBeUndefined();
+    expect(applyObjectRule(between, rule)).toBeNull();
+  });
+
+  it('reads a slide off the output, toward first, before the move it also is and before removing', () => {
+    const after = G([[0, 0, 0, 0, 0], [0, 0, 0, 0, 0], [0, 0, 3, 8, 8], [0, 0, 0, 8, 8], [0, 0, 0, 0, 0]]);
+    // Where the 3 was, the output shows the background: removing it is one reading too, but the
+    // 3 now stands where the input had the background, which only its going there explains.
+    expect(possibleOutcomes(crates[0]!, yard, after)).toEqual([
+      { kind: 'slide', way: 'toward' },
+      { kind: 'slide', way: 'right' },
+      { kind: 'move', rows: 0, columns: 2 },
+      { kind: 'remove' },
+    ]);
+    // Where another 3 already stood in the input, going there explains nothing: remove first.
+    const twoCrates = G([[3, 0, 3]]);
+    const gone = G([[0, 0, 3]]);
+    expect(possibleOutcomes(objectsOf(twoCrates, 'by_colour')[0]!, twoCrates, gone)).toEqual([
+      { kind: 'remove' },
+      { kind: 'move', rows: 0, columns: 2 },
+    ]);
+  });
+
+  it('never overlaps what it slides against nor leaves the grid (a law)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.array(fc.constantFrom(0, 0, 0, 2, 7), { minLength: 5, maxLength: 5 }), { minLength: 1, maxLength: 5 }), fc.constantFrom('toward', 'up', 'down', 'left', 'right' as const), (rows, way) => {
+        const g = G(rows);
+        for (const o of objectsOf(g, 'by_colour')) {
+          const offset = slideOffset(o, g, way, 0);
+          if (!offset) continue;
+          for (let r = 0; r < o.height; r++) {
+            for (let c = 0; c < o.width; c++) {
+              if (o.cells[r * o.width + c] === 255) continue;
+              const row = o.top + r + offset[0];
+              const column = o.left + c + offset[1];
+              expect(row >= 0 && row < g.height && column >= 0 && column < g.width).toBe(true);
+              // where it lands was the background or its own cell
+              const inBox = row - o.top >= 0 && row - o.top < o.height && column - o.left >= 0 && column - o.left < o.width;
+              const own = inBox && o.cells[(row - o.top) * o.width + column - o.left] !== 255;
+              expect(own || g.cells[row * g.width + column] === 0).toBe(true);
+            }
+          }
+        }
+      }),
     );
   });
 });

@@ -320,8 +320,10 @@ describe('the bits of a table', () => {
     // dusk: 2 + 1 (one property) + 5 (25 properties: ⌈log₂ 25⌉); size 1: γ(2) + 2 = 5; size 2:
     // γ(3) + 2 + c (one colour, c = 1) = 6; size 3: γ(4) + 2 = 7: 8 + 18 = 26
     expect(bitsOf(duskRule)).toBe(26);
-    // a move: zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 1 + 5 + (1 + 3 + 3 + 1) = 16
-    expect(bitsOf('object_rule[by_colour, touches_edge]{yes -> move (-1, 0)}')).toBe(2 + 1 + 5 + 1 + 3 + 3 + 1);
+    // a move: 4 for the kind; zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 1 + 5 + (1 + 4 + 3 + 1) = 17
+    expect(bitsOf('object_rule[by_colour, touches_edge]{yes -> move (-1, 0)}')).toBe(2 + 1 + 5 + 1 + 4 + 3 + 1);
+    // slides: 4 for the kind, then toward 1 bit, a way of the four 3: 8 + (1 + 4 + 1) + (1 + 4 + 3) = 22
+    expect(bitsOf('object_rule[by_colour, touches_edge]{no -> slide up, yes -> slide toward}')).toBe(2 + 1 + 5 + (1 + 4 + 1) + (1 + 4 + 3));
     // a mirror: 4 for the kind and 1 for the way; a fill: 4 and c for its colour (the only one
     // written, k = 1, so c = 1): 8 + (1 + 4 + 1) + (1 + 4 + 1) = 20
     expect(bitsOf('object_rule[by_colour, hollow]{no -> mirror left_right, yes -> fill #2}')).toBe(2 + 1 + 5 + (1 + 4 + 1) + (1 + 4 + 1));

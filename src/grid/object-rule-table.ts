@@ -1,16 +1,17 @@
 /**
  * Object rules: a table that says what happens to each object of a grid (it keeps its place,
- * is removed, takes one colour, moves by an offset, is mirrored in its own box, or has its holes
- * filled with one colour) from one property of the object: what it
+ * is removed, takes one colour, moves by an offset, slides one way as far as it goes, is mirrored
+ * in its own box, or has its holes filled with one colour) from one property of the object: what it
  * is (size, colour, height, width, holes, shape, whether it is hollow, wider than high or higher
  * than wide), where it is (touching the edge, inside another object) and how it compares with the
  * others (size rank, whether it is the largest or the smallest, whether its shape or colour is
  * the only one of its kind).
  *
  * Applying a rule cuts the grid into objects (one of four ways), looks each object's property
- * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed and
- * moved objects are lifted first, then recoloured ones are painted, then moved ones put down,
- * then mirrored ones turned over in place and holes filled.
+ * up, and fails (null) when some object's value has no entry: a rule never guesses. Removed,
+ * moved and slid objects are lifted first, then recoloured ones are painted, then moved and slid
+ * ones put down, then mirrored ones turned over in place and holes filled. How far an object
+ * slides is worked out on the grid as it was, before anything moved.
  */
 import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
@@ -83,10 +84,21 @@ export type ObjectOutcome =
   /** Its holes (see {@link holeMarks}), where the grid shows the background, take the colour. */
   | { readonly kind: 'fill'; readonly colour: number }
   /** Turned over in its own box: columns reversed (`left_right`) or rows (`top_bottom`). */
-  | { readonly kind: 'mirror'; readonly across: MirrorAxis };
+  | { readonly kind: 'mirror'; readonly across: MirrorAxis }
+  /** Moved whole steps one way while it stays in the grid and lands on nothing but the background or itself (see {@link slideOffset}). */
+  | { readonly kind: 'slide'; readonly way: SlideWay };
 
 export type MirrorAxis = 'left_right' | 'top_bottom';
 export const MIRROR_AXES: readonly MirrorAxis[] = ['left_right', 'top_bottom'];
+
+/**
+ * Which way a slide goes: one of the four, or `toward` the nearest thing in line, the way in
+ * which the object, slid as far as it goes, stops against a cell of another object rather than
+ * the grid's border, the shortest such slide (no slide when two ways tie or none stops so).
+ */
+export type SlideWay = 'up' | 'down' | 'left' | 'right' | 'toward';
+/** In the order the learner prefers them: `toward` first (the cheapest, see table-bits.ts). */
+export const SLIDE_WAYS: readonly SlideWay[] = ['toward', 'up', 'down', 'left', 'right'];
 
 export interface ObjectRuleEntry {
   readonly key: ObjectKey;
@@ -151,6 +163,8 @@ export function outcomeCode(o: ObjectOutcome): string {
       return `f${o.colour}`;
     case 'mirror':
       return o.across === 'left_right' ? 'x' : 'y';
+    case 'slide':
+      return `s${o.way}`;
   }
 }
 
@@ -382,14 +396,27 @@ export function applyObjectRule(g: Grid, rule: ObjectRule): Grid | null {
   return paintOutcomes(g, objects, outcomes);
 }
 
-/** Lifts removed and moved objects, paints recoloured ones, puts moved ones down, then mirrors and fills in place. */
-export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes: readonly ObjectOutcome[]): Grid {
+/**
+ * Lifts removed, moved and slid objects, paints recoloured ones, puts moved and slid ones down,
+ * then mirrors and fills in place. Null when an object should slide `toward` something and no one
+ * way is the nearest.
+ */
+export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes: readonly ObjectOutcome[]): Grid | null {
   const { height, width } = g;
   const background = backgroundColour(g);
+  // Slides are measured on the grid before anything is lifted or painted.
+  let slides: ([number, number] | undefined)[] | undefined;
+  for (let i = 0; i < objects.length; i++) {
+    const o = outcomes[i]!;
+    if (o.kind !== 'slide') continue;
+    const offset = slideOffset(objects[i]!, g, o.way, background);
+    if (!offset) return null;
+    (slides ??= [])[i] = offset;
+  }
   const out = g.cells.slice();
   for (let i = 0; i < objects.length; i++) {
     const kind = outcomes[i]!.kind;
-    if (kind === 'remove' || kind === 'move') paintObjectInto(out, height, width, objects[i]!, background);
+    if (kind === 'remove' || kind === 'move' || kind === 'slide') paintObjectInto(out, height, width, objects[i]!, background);
   }
   for (let i = 0; i < objects.length; i++) {
     const o = outcomes[i]!;
@@ -398,6 +425,7 @@ export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes:
   for (let i = 0; i < objects.length; i++) {
     const o = outcomes[i]!;
     if (o.kind === 'move') paintObjectInto(out, height, width, objects[i]!, undefined, o.rows, o.columns);
+    else if (o.kind === 'slide') paintObjectInto(out, height, width, objects[i]!, undefined, slides![i]![0], slides![i]![1]);
   }
   for (let i = 0; i < objects.length; i++) {
     const o = outcomes[i]!;
@@ -411,9 +439,12 @@ export function paintOutcomes(g: Grid, objects: readonly GridObject[], outcomes:
  * The outcomes that would turn the object of `input` into what `output` (the same size) shows,
  * in order of preference: fill (where it has holes and the output fills them: keeping or
  * recolouring it to its own colour would leave them unexplained), keep, remove, recolour (by
- * colour), mirror (left to right, then top to bottom), then moves by distance (the shifted object
- * must lie inside the grid and match the output cell for cell). Whether the rest of the output
- * agrees is for the caller to check by applying the whole rule.
+ * colour), mirror (left to right, then top to bottom), slides (toward, up, down, left, right;
+ * each where it moves the object and the output shows it there), then moves by distance (the
+ * shifted object must lie inside the grid and match the output cell for cell). Slides and moves
+ * come straight after keep instead when one of them puts the object where the input showed
+ * something else: the output changed there, and the object going there explains it. Whether the
+ * rest of the output agrees is for the caller to check by applying the whole rule.
  */
 export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): ObjectOutcome[] {
   const found: ObjectOutcome[] = [];
@@ -432,22 +463,101 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
       else if (single !== after) single = -2;
     }
   }
-  if (kept) found.push({ kind: 'keep' });
-  if (single === background) found.push({ kind: 'remove' });
-  else if (single >= 0) found.push({ kind: 'recolour', colour: single });
+  // Slides, then moves by distance, that put the object where the output shows it. When one of
+  // them puts it on a cell the input did not already show so, the output's change there is
+  // explained by the object going there: such outcomes come before removing (its old cells then
+  // show the background too) and recolouring.
+  const displaced: ObjectOutcome[] = [];
+  let explainsChange = false;
+  const consider = (outcome: ObjectOutcome, rows: number, columns: number): void => {
+    if (!matchesAt(o, output, o.top + rows, o.left + columns)) return;
+    displaced.push(outcome);
+    if (!matchesAt(o, input, o.top + rows, o.left + columns)) explainsChange = true;
+  };
+  for (const way of SLIDE_WAYS) {
+    const offset = slideOffset(o, input, way, background);
+    if (offset && (offset[0] !== 0 || offset[1] !== 0)) consider({ kind: 'slide', way }, offset[0], offset[1]);
+  }
   const moves: [number, number][] = [];
-  for (let dr = -o.top; dr + o.top + o.height <= input.height; dr++) {
-    for (let dc = -o.left; dc + o.left + o.width <= input.width; dc++) {
+  for (let dr = 0 - o.top; dr + o.top + o.height <= input.height; dr++) {
+    for (let dc = 0 - o.left; dc + o.left + o.width <= input.width; dc++) {
       if (dr === 0 && dc === 0) continue;
       if (matchesAt(o, output, o.top + dr, o.left + dc)) moves.push([dr, dc]);
     }
   }
+  moves.sort((a, b) => Math.abs(a[0]) + Math.abs(a[1]) - Math.abs(b[0]) - Math.abs(b[1]) || a[0] - b[0] || a[1] - b[1]);
+  for (const [rows, columns] of moves) consider({ kind: 'move', rows, columns }, rows, columns);
+  if (kept) found.push({ kind: 'keep' });
+  if (explainsChange) found.push(...displaced);
+  if (single === background) found.push({ kind: 'remove' });
+  else if (single >= 0) found.push({ kind: 'recolour', colour: single });
   mirrors(o, input, output, background, found);
+  if (!explainsChange) found.push(...displaced);
   const fill = holesFill(o, input, output, background);
   if (fill) found.unshift(fill);
-  moves.sort((a, b) => Math.abs(a[0]) + Math.abs(a[1]) - Math.abs(b[0]) - Math.abs(b[1]) || a[0] - b[0] || a[1] - b[1]);
-  for (const [rows, columns] of moves) found.push({ kind: 'move', rows, columns });
   return found;
+}
+
+/** The four ways as steps of rows and columns: up, down, left, right. */
+const SLIDE_STEPS: readonly (readonly [number, number])[] = [
+  [-1, 0],
+  [1, 0],
+  [0, -1],
+  [0, 1],
+];
+
+/**
+ * Where a slide takes the object, as an offset of rows and columns: whole steps one way while
+ * every cell of the moved object stays in the grid and lands on the background or on a cell of
+ * the object itself (what it would meet is read from `g` as it is). For `toward`, the shortest
+ * of the four slides that stops against another object's cell rather than the border; undefined
+ * when two ways tie for it or none stops so.
+ */
+export function slideOffset(o: GridObject, g: Grid, way: SlideWay, background: number): [number, number] | undefined {
+  if (way !== 'toward') {
+    const [dr, dc] = SLIDE_STEPS[SLIDE_WAYS.indexOf(way) - 1]!;
+    const steps = slideSteps(o, g, dr, dc, background);
+    return steps === 0 ? [0, 0] : [steps * dr, steps * dc];
+  }
+  let best: [number, number] | undefined;
+  let bestSteps = Infinity;
+  let tied = false;
+  for (const [dr, dc] of SLIDE_STEPS) {
+    const steps = slideSteps(o, g, dr, dc, background);
+    if (!landsInside(o, g, (steps + 1) * dr, (steps + 1) * dc)) continue;
+    if (steps < bestSteps) {
+      bestSteps = steps;
+      best = [steps * dr, steps * dc];
+      tied = false;
+    } else if (steps === bestSteps) tied = true;
+  }
+  return tied ? undefined : best;
+}
+
+/** How many whole steps (dr, dc) the object can take: each cell moved lies in the grid on the background or on the object's own cells. */
+function slideSteps(o: GridObject, g: Grid, dr: number, dc: number, background: number): number {
+  let steps = 0;
+  for (;;) {
+    const r0 = (steps + 1) * dr;
+    const c0 = (steps + 1) * dc;
+    if (!landsInside(o, g, r0, c0)) return steps;
+    for (let r = 0; r < o.height; r++) {
+      for (let c = 0; c < o.width; c++) {
+        if (o.cells[r * o.width + c] === EMPTY) continue;
+        const rr = r + r0;
+        const cc = c + c0;
+        // A cell of the object itself is left by the move: not in the way.
+        if (rr >= 0 && rr < o.height && cc >= 0 && cc < o.width && o.cells[rr * o.width + cc] !== EMPTY) continue;
+        if (g.cells[(o.top + rr) * g.width + o.left + cc] !== background) return steps;
+      }
+    }
+    steps++;
+  }
+}
+
+/** True when the object's box moved by (rows, columns) lies wholly in the grid. */
+function landsInside(o: GridObject, g: Grid, rows: number, columns: number): boolean {
+  return o.top + rows >= 0 && o.left + columns >= 0 && o.top + rows + o.height <= g.height && o.left + columns + o.width <= g.width;
 }
 
 function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {

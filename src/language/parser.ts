@@ -24,6 +24,7 @@ import {
   propertyValues,
   type ObjectKey,
   MIRROR_AXES,
+  SLIDE_WAYS,
   type ObjectOutcome,
   type ObjectProperty,
   type ObjectRuleEntry,
@@ -258,13 +259,14 @@ function parseShape(r: LineReader): string {
 
 function parseOutcome(r: LineReader): ObjectOutcome {
   if (r.peek() === '#') return { kind: 'recolour', colour: r.colour() };
-  const word = oneOf(r, ['keep', 'remove', 'move', 'mirror', 'fill'], "'keep', 'remove', a colour such as '#3', 'move (rows, columns)', 'mirror left_right', 'mirror top_bottom' or 'fill #c'");
+  const word = oneOf(r, ['keep', 'remove', 'move', 'mirror', 'fill', 'slide'], "'keep', 'remove', a colour such as '#3', 'move (rows, columns)', 'slide up' (down, left, right, toward), 'mirror left_right', 'mirror top_bottom' or 'fill #c'");
   if (word === 'keep' || word === 'remove') return { kind: word };
   if (word === 'fill') {
     r.skipSpaces();
     return { kind: 'fill', colour: r.colour() };
   }
   if (word === 'mirror') return { kind: 'mirror', across: oneOf(r, MIRROR_AXES, "'left_right' or 'top_bottom' after mirror") };
+  if (word === 'slide') return { kind: 'slide', way: oneOf(r, SLIDE_WAYS, "'up', 'down', 'left', 'right' or 'toward' after slide") };
   r.expect('(', "'(' after move");
   const rows = r.integer('a row offset');
   r.expect(',', "',' between rows and columns");

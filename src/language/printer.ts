@@ -85,6 +85,8 @@ function printOutcome(o: ObjectOutcome): string {
       return `fill #${o.colour}`;
     case 'mirror':
       return `mirror ${o.across}`;
+    case 'slide':
+      return `slide ${o.way}`;
   }
 }
 

@@ -335,7 +335,7 @@ function learnObjectRuleFrom(
   for (let p = 0; p < pairs.length; p++) {
     const pair = pairs[p]!;
     const painted = paintOutcomes(pair.input, pair.objects, namesOfPairs[p]!.map((name) => chosen.get(name)!));
-    if (!painted.equals(pair.output)) return undefined;
+    if (!painted || !painted.equals(pair.output)) return undefined;
   }
   for (const g of puzzle.testInputs) {
     const objects = objectsOf(g, grouping);

@@ -22,7 +22,7 @@
  */
 import { featureValues, isOrderedRule, ANY, EDGE, KEEP, type CellFeature, type CellFeatureValues } from '../grid/cell-rule-table.ts';
 import { gridPropertyValues, type GridKey, type GridProperty } from '../grid/grid-rule-table.ts';
-import { OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty } from '../grid/object-rule-table.ts';
+import { OBJECT_PROPERTIES, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type SlideWay } from '../grid/object-rule-table.ts';
 import type { Grid } from '../grid/grid.ts';
 import type { LiteralValue } from '../language/ast.ts';
 
@@ -57,13 +57,18 @@ export const PROPERTY_BITS = Math.ceil(Math.log2(OBJECT_PROPERTIES.length));
 export const GRID_PROPERTY_BITS = 3;
 export const SHARED_SIZE_BITS = 1;
 /**
- * Bits for the kind of an object's outcome, a prefix code over the six kinds (its lengths meet
- * Kraft's sum exactly: 3 × 1/4 + 1/8 + 2 × 1/16 = 1): keep, remove and recolour 2 bits each, as
- * before mirror and fill came, a move 3, a mirror or a fill 4.
+ * Bits for the kind of an object's outcome, a prefix code over the seven kinds (its lengths meet
+ * Kraft's sum exactly: 3 × 1/4 + 4 × 1/16 = 1): keep, remove and recolour 2 bits each, as
+ * before the rarer kinds came; a move, a slide, a mirror or a fill 4.
  */
-export const OUTCOME_KIND_BITS: { readonly [K in ObjectOutcome['kind']]: number } = { keep: 2, remove: 2, recolour: 2, move: 3, mirror: 4, fill: 4 };
+export const OUTCOME_KIND_BITS: { readonly [K in ObjectOutcome['kind']]: number } = { keep: 2, remove: 2, recolour: 2, move: 4, slide: 4, mirror: 4, fill: 4 };
 /** Bits for the way an object is mirrored (left to right or top to bottom). */
 export const MIRROR_AXIS_BITS = 1;
+/**
+ * Bits for the way of a slide, a prefix code meeting Kraft's sum exactly (1/2 + 4 × 1/8 = 1):
+ * `toward` 1 bit (it needs no way of its own), each of the four ways 3.
+ */
+export const SLIDE_WAY_BITS: { readonly [W in SlideWay]: number } = { toward: 1, up: 3, down: 3, left: 3, right: 3 };
 
 function featureValueBits(values: CellFeatureValues, c: number, k: number): number {
   switch (values) {
@@ -124,6 +129,8 @@ function outcomeBits(o: ObjectOutcome, c: number): number {
       return OUTCOME_KIND_BITS.move + signedBits(o.rows) + signedBits(o.columns);
     case 'mirror':
       return OUTCOME_KIND_BITS.mirror + MIRROR_AXIS_BITS;
+    case 'slide':
+      return OUTCOME_KIND_BITS.slide + SLIDE_WAY_BITS[o.way];
   }
 }
 

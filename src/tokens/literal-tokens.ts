@@ -33,7 +33,7 @@ import {
   type CellFeatureValues,
   type CellRuleEntry,
 } from '../grid/cell-rule-table.ts';
-import { MIRROR_AXES, OBJECT_GROUPINGS, OBJECT_PROPERTIES, objectRuleEntry, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
+import { MIRROR_AXES, SLIDE_WAYS, OBJECT_GROUPINGS, OBJECT_PROPERTIES, objectRuleEntry, propertyValues, type ObjectKey, type ObjectOutcome, type ObjectProperty, type ObjectRuleEntry } from '../grid/object-rule-table.ts';
 import { GRID_PROPERTIES, gridPropertyValues, type GridKey, type GridProperty, type GridRuleEntry } from '../grid/grid-rule-table.ts';
 import { objectRuleLiteral, type LiteralValue } from '../language/ast.ts';
 import { Grid } from '../grid/grid.ts';
@@ -236,16 +236,19 @@ function outcomeTokens(outcome: ObjectOutcome): string[] {
       return ['fill', colourToken(outcome.colour)];
     case 'mirror':
       return ['mirror', `across:${outcome.across}`];
+    case 'slide':
+      return ['slide', `way:${outcome.way}`];
   }
 }
 
 function readOutcome(reader: TokenReader): ObjectOutcome {
   const t = reader.peek();
   if (t !== undefined && COLOUR_PATTERN.test(t)) return { kind: 'recolour', colour: readColour(reader) };
-  const kind = word(reader, ['keep', 'remove', 'move', 'mirror', 'fill'], "'keep', 'remove', 'move', 'mirror', 'fill' or a colour token");
+  const kind = word(reader, ['keep', 'remove', 'move', 'mirror', 'fill', 'slide'], "'keep', 'remove', 'move', 'slide', 'mirror', 'fill' or a colour token");
   if (kind === 'keep' || kind === 'remove') return { kind };
   if (kind === 'fill') return { kind: 'fill', colour: readColour(reader) };
   if (kind === 'mirror') return { kind: 'mirror', across: prefixed(reader, 'across:', MIRROR_AXES, "'across:left_right' or 'across:top_bottom'") };
+  if (kind === 'slide') return { kind: 'slide', way: prefixed(reader, 'way:', SLIDE_WAYS, "'way:up', 'way:down', 'way:left', 'way:right' or 'way:toward'") };
   const rows = readInt(reader);
   return { kind: 'move', rows, columns: readInt(reader) };
 }
@@ -359,6 +362,8 @@ export const LITERAL_KINDS: { readonly [T in LiteralValue['type']]: LiteralToken
       { token: 'keep', meaning: 'the object stays as it is' },
       { token: 'remove', meaning: 'the object is erased' },
       { token: 'move', meaning: 'the object moves: rows and columns follow as number tokens' },
+      { token: 'slide', meaning: 'the object slides one way as far as it goes: the way follows' },
+      ...SLIDE_WAYS.map((w) => ({ token: `way:${w}`, meaning: w === 'toward' ? 'slid toward the nearest object in line' : `slid ${w}` })),
       { token: 'mirror', meaning: 'the object is mirrored in its own box: the way follows' },
       ...MIRROR_AXES.map((a) => ({ token: `across:${a}`, meaning: `mirrored ${a === 'left_right' ? 'left to right' : 'top to bottom'}` })),
       { token: 'fill', meaning: "the object's holes take a colour: the colour token follows" },

@@ -21,6 +21,7 @@ import {
   OBJECT_GROUPINGS,
   OBJECT_PROPERTIES,
   propertyValues,
+  SLIDE_WAYS,
   type ObjectKey,
   type ObjectOutcome,
   type ObjectRuleEntry,
@@ -124,7 +125,7 @@ export function randomGridRule(choose: Chooser): LiteralValue {
 }
 
 function randomOutcome(choose: Chooser): ObjectOutcome {
-  switch (choose(6)) {
+  switch (choose(7)) {
     case 0:
       return { kind: 'keep' };
     case 1:
@@ -135,6 +136,8 @@ function randomOutcome(choose: Chooser): ObjectOutcome {
       return { kind: 'fill', colour: choose(10) };
     case 4:
       return { kind: 'mirror', across: choose(2) === 0 ? 'left_right' : 'top_bottom' };
+    case 5:
+      return { kind: 'slide', way: SLIDE_WAYS[choose(SLIDE_WAYS.length)]! };
     default:
       return { kind: 'move', rows: choose(7) - 3, columns: choose(7) - 3 };
   }
