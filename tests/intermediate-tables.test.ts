@@ -49,9 +49,9 @@ describe('tables learned from a grid the search made', () => {
   it('finds crop-then-recolour as a cell rule applied to the crop, and the right test output', () => {
     const puzzle: Puzzle = { name: 'wake', train, testInputs: [testInput] };
     const result = solvePuzzle(puzzle, options);
-    const through = result.solutions.filter((s) => s.throughIntermediateTable);
+    // (An object rule on a made grid may come first: the search's own choice, not this test's.)
+    const through = result.solutions.filter((s) => s.throughIntermediateTable && s.text.includes('apply_cell_rule('));
     expect(through.length).toBeGreaterThan(0);
-    expect(through[0]!.text).toContain('apply_cell_rule(');
     expect(through[0]!.text).toContain('crop_to_content(');
     expect(result.solutions.some((s) => s.testOutputs[0]!.equals(expected))).toBe(true);
     expect(result.statistics.intermediateSolutions).toBeGreaterThan(0);
@@ -60,7 +60,7 @@ describe('tables learned from a grid the search made', () => {
 
   it('gives no such program when a test input holds a key the table lacks', () => {
     const seen = solvePuzzle({ name: 'wake', train, testInputs: [testInput] }, options);
-    const program = seen.solutions.find((s) => s.throughIntermediateTable)!.text;
+    const program = seen.solutions.find((s) => s.throughIntermediateTable && s.text.includes('apply_cell_rule('))!.text;
     const unseen = solvePuzzle({ name: 'wake-unseen', train, testInputs: [unseenKeyInput] }, options);
     // The same table would meet a mooring on the test input's crop: that program is not offered.
     expect(unseen.solutions.map((s) => s.text)).not.toContain(program);

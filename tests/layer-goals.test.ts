@@ -175,7 +175,10 @@ describe('layer goals', () => {
     expect(found.solutions[0]!.throughGoal).toBe(true);
     expect(found.solutions[0]!.text).toContain('overlay(input,');
     expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
-    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+    // Without goals nothing gives the right test output (an object rule on a made grid may fit
+    // these three small demonstrations by coincidence, and answers otherwise).
+    const withoutGoals = solvePuzzle(task, { ...options, goalBits: 0 }).solutions;
+    expect(withoutGoals.some((s) => s.testOutputs[0]!.equals(Grid.fromRows(rule(testInput))))).toBe(false);
   });
 
   it('lays a made grid over a cheap made grid when the input cannot be a layer (a cell is erased)', () => {
@@ -192,7 +195,10 @@ describe('layer goals', () => {
     expect(found.solutions[0]!.throughGoal).toBe(true);
     expect(found.solutions[0]!.text).toMatch(/answer overlay\((?!input,)/);
     expect(found.solutions[0]!.testOutputs[0]!.toRows()).toEqual(rule(testInput));
-    expect(solvePuzzle(task, { ...options, goalBits: 0 }).solutions).toEqual([]);
+    // Without goals nothing gives the right test output (an object rule on a made grid may fit
+    // these three small demonstrations by coincidence, and answers otherwise).
+    const withoutGoals = solvePuzzle(task, { ...options, goalBits: 0 }).solutions;
+    expect(withoutGoals.some((s) => s.testOutputs[0]!.equals(Grid.fromRows(rule(testInput))))).toBe(false);
   });
 
   it('lays two made grids in turn when each draws part of the change (a partial layer)', () => {
