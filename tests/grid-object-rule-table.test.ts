@@ -113,6 +113,28 @@ describe('objectKeys', () => {
     expect(objectKeys(quay, objects, 'rightmost')).toEqual([0, 0, 1, 0, 0, 1]);
   });
 
+  it('reads form and contact, worked out by hand on a workshop shelf', () => {
+    //   1 1 0 0 0 0
+    //   1 1 0 4 0 0
+    //   0 0 0 4 0 6
+    //   2 2 2 4 0 6
+    //   0 0 0 0 6 6
+    const shelf = G([[1, 1, 0, 0, 0, 0], [1, 1, 0, 4, 0, 0], [0, 0, 0, 4, 0, 6], [2, 2, 2, 4, 0, 6], [0, 0, 0, 0, 6, 6]]);
+    const parts = objectsOf(shelf, 'by_colour');
+    // in reading order of their first cells: the 1 block (0, 0), the 4 (1, 3), the 6 (2, 5), the 2 (3, 0)
+    expect(parts.map((o) => o.mainColour)).toEqual([1, 4, 6, 2]);
+    // the 6 fills 4 of its 3 × 2 box
+    expect(objectKeys(shelf, parts, 'solid')).toEqual([1, 1, 0, 1]);
+    expect(objectKeys(shelf, parts, 'square')).toEqual([1, 0, 0, 0]);
+    expect(objectKeys(shelf, parts, 'line')).toEqual([0, 1, 0, 1]);
+    // the 4 and the 2 meet at row 3, columns 2 and 3; the 1 block and the 6 touch nothing
+    expect(objectKeys(shelf, parts, 'touches_other')).toEqual([0, 1, 0, 1]);
+    // cut with many colours, the 4 and the 2 are one object of two colours
+    const joined = objectsOf(shelf, 'multicolour');
+    expect(objectKeys(shelf, joined, 'colours')).toEqual([1, 2, 1]);
+    expect(objectKeys(shelf, joined, 'touches_other')).toEqual([0, 0, 0]);
+  });
+
   it('gives equal sizes one rank', () => {
     const g = G([[1, 0, 2], [0, 0, 0], [3, 3, 0]]);
     expect(objectKeys(g, objectsOf(g, 'by_colour'), 'size_rank')).toEqual([2, 2, 1]);

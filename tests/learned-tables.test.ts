@@ -317,7 +317,7 @@ describe('the bits of a table', () => {
     // neighbour values ⌈log₂ 2⌉ = 1; keys yes #2 (1 + 1), yes edge (1 + 1), no edge (1 + 1);
     // outputs #2 (1 + 1), keep 1, keep 1: 9 + 6 + 4 = 19
     expect(bitsOf('cell_rule[background, sees_left]{yes #2 -> #2, yes edge -> keep, no edge -> keep}')).toBe(19);
-    // dusk: 2 + 1 (one property) + 5 (25 properties: ⌈log₂ 25⌉); size 1: γ(2) + 2 = 5; size 2:
+    // dusk: 2 + 1 (one property) + 5 (30 properties: ⌈log₂ 30⌉); size 1: γ(2) + 2 = 5; size 2:
     // γ(3) + 2 + c (one colour, c = 1) = 6; size 3: γ(4) + 2 = 7: 8 + 18 = 26
     expect(bitsOf(duskRule)).toBe(26);
     // a move: 4 for the kind; zigzag(-1) = 1, γ(2) = 3; zigzag(0) = 0, γ(1) = 1: 2 + 1 + 5 + (1 + 4 + 3 + 1) = 17

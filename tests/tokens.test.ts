@@ -174,11 +174,11 @@ describe('the vocabulary', () => {
     expect(new Set(vocabulary.tokens.map((t) => t.token)).size).toBe(vocabulary.size);
     // 1 padding + 6 structure + 32 references + 10 colours + 61 numbers + 2 truth values
     // + 1 point + 2 palette + 3 grid tokens = 118; the cell rule's 3 markers, 24 feature names
-    // and 6 value words (edge, yes, no, even, odd, any) = 33; the object rule's 2 markers, 4 groupings, 25 properties, 2 shape
+    // and 6 value words (edge, yes, no, even, odd, any) = 33; the object rule's 2 markers, 4 groupings, 30 properties, 2 shape
     // markers, 2 shape cells, 6 outcome words (keep, remove, move, slide, mirror, fill), 5 slide
-    // ways and 2 mirror ways = 48; the grid rule's 2 markers, 8 properties and
+    // ways and 2 mirror ways = 53; the grid rule's 2 markers, 8 properties and
     // 2 colour-set markers = 12; then the primitives.
-    expect(vocabulary.size).toBe(118 + 33 + 48 + 12 + defaultLibrary.primitives.length);
+    expect(vocabulary.size).toBe(118 + 33 + 53 + 12 + defaultLibrary.primitives.length);
   });
 
   it('ids of the tokens before the primitives do not depend on the library; the fingerprint does', () => {

@@ -51,6 +51,11 @@ export const OBJECT_PROPERTIES = [
   'bottommost',
   'leftmost',
   'rightmost',
+  'solid',
+  'square',
+  'line',
+  'touches_other',
+  'colours',
 ] as const;
 export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
 
@@ -70,7 +75,10 @@ export type ObjectProperty = (typeof OBJECT_PROPERTIES)[number];
  * whole row of the grid in one colour other than the background, wholly beyond the object's box),
  * `left_of_line` / `right_of_line` (the same with a whole column on its right / left), `topmost` /
  * `bottommost` / `leftmost` / `rightmost` (no object's box reaches higher / lower / further left /
- * further right; ties all count). Unlike a rank, a yes/no key takes the same two values whatever the
+ * further right; ties all count), `solid` (its cells fill its box), `square` (its box is as high
+ * as wide), `line` (its box is one row high or one column wide), `touches_other` (a cell of it
+ * has an edge neighbour that is neither the background nor the object's own); `colours` is the
+ * number of colours among its cells. Unlike a rank, a yes/no key takes the same two values whatever the
  * number of objects, so a test input with more objects than any demonstration still finds its
  * keys in the table.
  */
@@ -142,6 +150,10 @@ export function propertyValues(property: ObjectProperty): 'number' | 'colour' | 
     case 'bottommost':
     case 'leftmost':
     case 'rightmost':
+    case 'solid':
+    case 'square':
+    case 'line':
+    case 'touches_other':
       return 'yes or no';
     default:
       return 'number';
@@ -241,7 +253,45 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
       return extremeFlags(objects.map((o) => -o.left));
     case 'rightmost':
       return extremeFlags(objects.map((o) => o.left + o.width));
+    case 'solid':
+      return objects.map((o) => (o.size === o.height * o.width ? 1 : 0));
+    case 'square':
+      return objects.map((o) => (o.height === o.width ? 1 : 0));
+    case 'line':
+      return objects.map((o) => (o.height === 1 || o.width === 1 ? 1 : 0));
+    case 'touches_other':
+      return objects.map((o) => (touchesOther(g, o) ? 1 : 0));
+    case 'colours':
+      return objects.map(colourCount);
   }
+}
+
+/** True when a cell of the object has an edge neighbour in the grid that is neither the background nor a cell of the object. */
+function touchesOther(g: Grid, o: GridObject): boolean {
+  const background = backgroundColour(g);
+  const { height, width, cells } = g;
+  const own = (r: number, c: number): boolean => r >= 0 && r < o.height && c >= 0 && c < o.width && o.cells[r * o.width + c] !== EMPTY;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      if (o.cells[r * o.width + c] === EMPTY) continue;
+      for (const [dr, dc] of SLIDE_STEPS) {
+        const row = o.top + r + dr;
+        const column = o.left + c + dc;
+        if (row < 0 || row >= height || column < 0 || column >= width || own(r + dr, c + dc)) continue;
+        if (cells[row * width + column] !== background) return true;
+      }
+    }
+  }
+  return false;
+}
+
+/** How many colours the object's cells hold. */
+function colourCount(o: GridObject): number {
+  let seen = 0;
+  for (const v of o.cells) if (v !== EMPTY) seen |= 1 << v;
+  let count = 0;
+  for (; seen !== 0; seen &= seen - 1) count++;
+  return count;
 }
 
 /** 1 for each value equal to the largest, else 0. */
