@@ -274,7 +274,7 @@ function touchesOther(g: Grid, o: GridObject): boolean {
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
       if (o.cells[r * o.width + c] === EMPTY) continue;
-      for (const [dr, dc] of SLIDE_STEPS) {
+      for (const [dr, dc] of EDGE_STEPS) {
         const row = o.top + r + dr;
         const column = o.left + c + dc;
         if (row < 0 || row >= height || column < 0 || column >= width || own(r + dr, c + dc)) continue;
@@ -519,14 +519,14 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   // show the background too) and recolouring.
   const displaced: ObjectOutcome[] = [];
   let explainsChange = false;
-  const consider = (outcome: ObjectOutcome, rows: number, columns: number): void => {
-    if (!matchesAt(o, output, o.top + rows, o.left + columns)) return;
+  // An outcome that puts the object where the output shows it, at this offset.
+  const take = (outcome: ObjectOutcome, rows: number, columns: number): void => {
     displaced.push(outcome);
     if (!matchesAt(o, input, o.top + rows, o.left + columns)) explainsChange = true;
   };
   for (const way of SLIDE_WAYS) {
     const offset = slideOffset(o, input, way, background);
-    if (offset && (offset[0] !== 0 || offset[1] !== 0)) consider({ kind: 'slide', way }, offset[0], offset[1]);
+    if (offset && (offset[0] !== 0 || offset[1] !== 0) && matchesAt(o, output, o.top + offset[0], o.left + offset[1])) take({ kind: 'slide', way }, offset[0], offset[1]);
   }
   const moves: [number, number][] = [];
   for (let dr = 0 - o.top; dr + o.top + o.height <= input.height; dr++) {
@@ -536,7 +536,7 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
     }
   }
   moves.sort((a, b) => Math.abs(a[0]) + Math.abs(a[1]) - Math.abs(b[0]) - Math.abs(b[1]) || a[0] - b[0] || a[1] - b[1]);
-  for (const [rows, columns] of moves) consider({ kind: 'move', rows, columns }, rows, columns);
+  for (const [rows, columns] of moves) take({ kind: 'move', rows, columns }, rows, columns);
   if (kept) found.push({ kind: 'keep' });
   if (explainsChange) found.push(...displaced);
   if (single === background) found.push({ kind: 'remove' });
@@ -548,8 +548,8 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   return found;
 }
 
-/** The four ways as steps of rows and columns: up, down, left, right. */
-const SLIDE_STEPS: readonly (readonly [number, number])[] = [
+/** Steps of rows and columns to the four edge neighbours: up, down, left, right (the slide ways after `toward`, in order). */
+const EDGE_STEPS: readonly (readonly [number, number])[] = [
   [-1, 0],
   [1, 0],
   [0, -1],
@@ -565,23 +565,27 @@ const SLIDE_STEPS: readonly (readonly [number, number])[] = [
  */
 export function slideOffset(o: GridObject, g: Grid, way: SlideWay, background: number): [number, number] | undefined {
   if (way !== 'toward') {
-    const [dr, dc] = SLIDE_STEPS[SLIDE_WAYS.indexOf(way) - 1]!;
-    const steps = slideSteps(o, g, dr, dc, background);
-    return steps === 0 ? [0, 0] : [steps * dr, steps * dc];
+    const [dr, dc] = EDGE_STEPS[SLIDE_WAYS.indexOf(way) - 1]!;
+    return stepsOffset(slideSteps(o, g, dr, dc, background), dr, dc);
   }
   let best: [number, number] | undefined;
   let bestSteps = Infinity;
   let tied = false;
-  for (const [dr, dc] of SLIDE_STEPS) {
+  for (const [dr, dc] of EDGE_STEPS) {
     const steps = slideSteps(o, g, dr, dc, background);
     if (!landsInside(o, g, (steps + 1) * dr, (steps + 1) * dc)) continue;
     if (steps < bestSteps) {
       bestSteps = steps;
-      best = [steps * dr, steps * dc];
+      best = stepsOffset(steps, dr, dc);
       tied = false;
     } else if (steps === bestSteps) tied = true;
   }
   return tied ? undefined : best;
+}
+
+/** `steps` steps of (dr, dc) as an offset of rows and columns (no negative zero). */
+function stepsOffset(steps: number, dr: number, dc: number): [number, number] {
+  return steps === 0 ? [0, 0] : [steps * dr, steps * dc];
 }
 
 /** How many whole steps (dr, dc) the object can take: each cell moved lies in the grid on the background or on the object's own cells. */
