@@ -40,10 +40,20 @@ export function reportLines(report: TaskReport): string[] {
   const first = report.solutions[0]!;
   const lines = [`${report.task}: ${first.bits} bits${sizeBreak(first)} (${figures})`];
   report.solutions.forEach((solution, i) => {
-    if (i > 0) lines.push(`  attempt ${i + 1}, ${solution.bits} bits${sizeBreak(solution)}:`);
+    if (i > 0) lines.push(`  attempt ${i + 1}, ${solution.bits} bits${sizeBreak(solution)}${otherWay(first, solution)}:`);
     lines.push(...solution.program.trimEnd().split('\n').map((l) => `    ${l}`));
   });
   return lines;
+}
+
+/**
+ * Says that a later attempt is of the other way than the first (a table read off the
+ * demonstrations, or a composed program): the hedge of src/search/rank-attempts.ts, which may put
+ * it before cheaper programs of the first one's way.
+ */
+function otherWay(first: ReportedSolution, solution: ReportedSolution): string {
+  if (Boolean(first.fromTable) === Boolean(solution.fromTable)) return '';
+  return solution.fromTable ? ', the cheapest table read off the demonstrations' : ', the cheapest composed program';
 }
 
 /** Says that a program breaks the output size the demonstrations settle, and the bits it was ranked by. */
