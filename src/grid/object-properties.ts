@@ -1,9 +1,14 @@
 /**
  * Properties of one object, the tests and keys that choose objects: its colours, its shape,
- * whether it touches the grid's edge or a colour.
+ * whether it touches the grid's edge, a colour or another object.
  */
 import type { GridObject } from './grid-object.ts';
 import { EMPTY, type Grid } from './grid.ts';
+
+/** Whether (r, c) of the object's box is one of its cells; false outside the box. */
+export function holdsCell(o: GridObject, r: number, c: number): boolean {
+  return r >= 0 && r < o.height && c >= 0 && c < o.width && o.cells[r * o.width + c] !== EMPTY;
+}
 
 /** Whether any cell of the object has the colour. */
 export function hasColour(o: GridObject, colour: number): boolean {
@@ -79,6 +84,23 @@ export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
           if (!inside) return true;
         }
       }
+    }
+  }
+  return false;
+}
+
+/** Whether a cell of the object has an edge neighbour on the grid that is neither the background nor a cell of the object. */
+export function touchesOther(o: GridObject, g: Grid, background: number): boolean {
+  const { height, width, cells } = g;
+  for (let r = 0; r < o.height; r++) {
+    for (let c = 0; c < o.width; c++) {
+      if (o.cells[r * o.width + c] === EMPTY) continue;
+      const row = o.top + r;
+      const column = o.left + c;
+      if (row > 0 && !holdsCell(o, r - 1, c) && cells[(row - 1) * width + column] !== background) return true;
+      if (row < height - 1 && !holdsCell(o, r + 1, c) && cells[(row + 1) * width + column] !== background) return true;
+      if (column > 0 && !holdsCell(o, r, c - 1) && cells[row * width + column - 1] !== background) return true;
+      if (column < width - 1 && !holdsCell(o, r, c + 1) && cells[row * width + column + 1] !== background) return true;
     }
   }
   return false;

@@ -17,7 +17,7 @@ import { backgroundColour, components } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { EMPTY, Grid } from './grid.ts';
 import { enclosedCells, holeCount, holeMarks } from './holes.ts';
-import { touchesEdge } from './object-properties.ts';
+import { colourCount, holdsCell, isSolidRectangle, touchesEdge, touchesOther } from './object-properties.ts';
 import { paintObjectInto } from './paint-object.ts';
 import { tableKeyCode, textHash } from './text-hash.ts';
 
@@ -254,44 +254,16 @@ export function objectKeys(g: Grid, objects: readonly GridObject[], property: Ob
     case 'rightmost':
       return extremeFlags(objects.map((o) => o.left + o.width));
     case 'solid':
-      return objects.map((o) => (o.size === o.height * o.width ? 1 : 0));
+      return objects.map((o) => (isSolidRectangle(o) ? 1 : 0));
     case 'square':
       return objects.map((o) => (o.height === o.width ? 1 : 0));
     case 'line':
       return objects.map((o) => (o.height === 1 || o.width === 1 ? 1 : 0));
     case 'touches_other':
-      return objects.map((o) => (touchesOther(g, o) ? 1 : 0));
+      return objects.map((o) => (touchesOther(o, g, backgroundColour(g)) ? 1 : 0));
     case 'colours':
       return objects.map(colourCount);
   }
-}
-
-/** True when a cell of the object has an edge neighbour in the grid that is neither the background nor a cell of the object. */
-function touchesOther(g: Grid, o: GridObject): boolean {
-  const background = backgroundColour(g);
-  const { height, width, cells } = g;
-  const own = (r: number, c: number): boolean => r >= 0 && r < o.height && c >= 0 && c < o.width && o.cells[r * o.width + c] !== EMPTY;
-  for (let r = 0; r < o.height; r++) {
-    for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] === EMPTY) continue;
-      for (const [dr, dc] of EDGE_STEPS) {
-        const row = o.top + r + dr;
-        const column = o.left + c + dc;
-        if (row < 0 || row >= height || column < 0 || column >= width || own(r + dr, c + dc)) continue;
-        if (cells[row * width + column] !== background) return true;
-      }
-    }
-  }
-  return false;
-}
-
-/** How many colours the object's cells hold. */
-function colourCount(o: GridObject): number {
-  let seen = 0;
-  for (const v of o.cells) if (v !== EMPTY) seen |= 1 << v;
-  let count = 0;
-  for (; seen !== 0; seen &= seen - 1) count++;
-  return count;
 }
 
 /** 1 for each value equal to the largest, else 0. */
@@ -548,8 +520,8 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   return found;
 }
 
-/** Steps of rows and columns to the four edge neighbours: up, down, left, right (the slide ways after `toward`, in order). */
-const EDGE_STEPS: readonly (readonly [number, number])[] = [
+/** Steps of rows and columns one way: up, down, left, right (the slide ways after `toward`, in order). */
+const SLIDE_STEPS: readonly (readonly [number, number])[] = [
   [-1, 0],
   [1, 0],
   [0, -1],
@@ -565,13 +537,13 @@ const EDGE_STEPS: readonly (readonly [number, number])[] = [
  */
 export function slideOffset(o: GridObject, g: Grid, way: SlideWay, background: number): [number, number] | undefined {
   if (way !== 'toward') {
-    const [dr, dc] = EDGE_STEPS[SLIDE_WAYS.indexOf(way) - 1]!;
+    const [dr, dc] = SLIDE_STEPS[SLIDE_WAYS.indexOf(way) - 1]!;
     return stepsOffset(slideSteps(o, g, dr, dc, background), dr, dc);
   }
   let best: [number, number] | undefined;
   let bestSteps = Infinity;
   let tied = false;
-  for (const [dr, dc] of EDGE_STEPS) {
+  for (const [dr, dc] of SLIDE_STEPS) {
     const steps = slideSteps(o, g, dr, dc, background);
     if (!landsInside(o, g, (steps + 1) * dr, (steps + 1) * dc)) continue;
     if (steps < bestSteps) {
@@ -601,7 +573,7 @@ function slideSteps(o: GridObject, g: Grid, dr: number, dc: number, background: 
         const rr = r + r0;
         const cc = c + c0;
         // A cell of the object itself is left by the move: not in the way.
-        if (rr >= 0 && rr < o.height && cc >= 0 && cc < o.width && o.cells[rr * o.width + cc] !== EMPTY) continue;
+        if (holdsCell(o, rr, cc)) continue;
         if (g.cells[(o.top + rr) * g.width + o.left + cc] !== background) return steps;
       }
     }
