@@ -103,3 +103,35 @@ describe('components', () => {
     );
   });
 });
+
+describe('a cut the same as a simpler one', () => {
+  const background = 0;
+  const edges = { diagonal: false, multicolour: false, background };
+  it('is the simpler cut itself when corners or mixed colours change nothing', () => {
+    // two one-colour shapes apart, a corner step bridged through an edge
+    const g = Grid.fromRows([
+      [1, 1, 0, 0],
+      [0, 1, 1, 0],
+      [0, 0, 0, 2],
+    ]);
+    const simple = components(g, edges);
+    expect(components(g, { ...edges, diagonal: true })).toBe(simple);
+    expect(components(g, { ...edges, multicolour: true })).toBe(simple);
+  });
+
+  it('is cut afresh when two cells touch only at a corner, or two colours meet', () => {
+    const corner = Grid.fromRows([
+      [1, 0],
+      [0, 1],
+    ]);
+    const simple = components(corner, edges);
+    const diagonal = components(corner, { ...edges, diagonal: true });
+    expect(diagonal).not.toBe(simple);
+    expect([simple.length, diagonal.length]).toEqual([2, 1]);
+    const meeting = Grid.fromRows([[1, 2, 0]]);
+    const single = components(meeting, edges);
+    const mixed = components(meeting, { ...edges, multicolour: true });
+    expect(mixed).not.toBe(single);
+    expect([single.length, mixed.length]).toEqual([2, 1]);
+  });
+});

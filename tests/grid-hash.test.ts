@@ -69,3 +69,34 @@ describe('sameCells', () => {
     );
   });
 });
+
+describe('a grid held as a slab and an offset', () => {
+  it('reads, hashes and compares the same whether its cells lie in a slab, in an array of their own or at an offset', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 30, maxWidth: 30 }), fc.integer({ min: 0, max: 7 }), fc.nat(), (g, offset, at) => {
+        const rows = g.toRows();
+        const inSlab = new Grid(g.height, g.width, copyCells(g.cells));
+        const own = new Grid(g.height, g.width, Uint8Array.from(g.cells));
+        const placed = new Grid(g.height, g.width, placedAt(g.cells, offset));
+        for (const x of [inSlab, own, placed]) {
+          expect(x.toRows()).toEqual(rows);
+          expect(Array.from(x.cells)).toEqual(rows.flat());
+          expect(x.hash).toBe(g.hash);
+          expect(x.equals(g) && g.equals(x)).toBe(true);
+          const i = at % (g.height * g.width);
+          expect(x.get(Math.floor(i / g.width), i % g.width)).toBe(rows[Math.floor(i / g.width)]![i % g.width]);
+        }
+        // one changed cell is noticed, whichever way the cells are held
+        const changed = copyCells(g.cells);
+        const i = at % changed.length;
+        changed[i] = (changed[i]! + 1) % 10;
+        const other = new Grid(g.height, g.width, changed);
+        expect(other.equals(inSlab) || other.equals(own) || other.equals(placed)).toBe(false);
+        // and so does toEqual (tests/support/value-equality.ts), not field by field
+        expect(inSlab).toEqual(own);
+        expect(placed).toEqual(inSlab);
+        expect(other).not.toEqual(inSlab);
+      }),
+    );
+  });
+});

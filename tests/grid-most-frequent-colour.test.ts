@@ -1,7 +1,10 @@
 /** The most frequent colour of a count table, and the background rule on one. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { backgroundColour, colourCounts } from '../src/grid/components.ts';
+import { Grid } from '../src/grid/grid.ts';
 import { backgroundOfCounts, mostFrequentColour } from '../src/grid/most-frequent-colour.ts';
+import { arbitraryGrid } from './support/arbitrary-grid.ts';
 
 const counts = fc.array(fc.nat({ max: 20 }), { minLength: 10, maxLength: 10 });
 
@@ -39,5 +42,21 @@ describe('backgroundOfCounts', () => {
   it('without colour 0, is the most frequent colour (the lowest on ties)', () => {
     expect(backgroundOfCounts([0, 2, 5, 5, 0, 0, 0, 0, 0, 0])).toBe(2);
     expect(backgroundOfCounts([0, 0, 0, 0, 0, 0, 3, 0, 3, 0])).toBe(6);
+  });
+});
+
+describe('backgroundColour of a grid', () => {
+  it('is the background rule on the grid counted cell by cell, whether its colour counts were asked for first or not', () => {
+    fc.assert(
+      fc.property(arbitraryGrid({ maxHeight: 12, maxWidth: 12 }), fc.boolean(), (g, countsFirst) => {
+        const fresh = new Grid(g.height, g.width, Uint8Array.from(g.cells));
+        if (countsFirst) colourCounts(fresh);
+        const table = new Array<number>(10).fill(0);
+        for (const v of g.cells) table[v]!++;
+        expect(backgroundColour(fresh)).toBe(backgroundOfCounts(table));
+        // asked again, from the memo
+        expect(backgroundColour(fresh)).toBe(backgroundOfCounts(table));
+      }),
+    );
   });
 });

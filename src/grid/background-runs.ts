@@ -1,23 +1,28 @@
 /**
  * The runs of background cells along the rows or the columns of a grid, each with the colours
- * that bound it: the one walk behind rays (a run takes the colour behind it) and connections
- * (a run between two cells of one colour takes a colour).
+ * that bound it, painted: the one walk behind rays (a run takes the colour behind or ahead of
+ * it) and connections (a run between two cells of one colour takes a colour).
  */
 import type { Grid } from './grid.ts';
 
-/**
- * Called for one run of background cells: its cells are `first + k * step` (indices into the
- * grid's cells) for k from 0 to `length - 1`; `before` and `after` are the colours of the cells
- * just before and just after it along the line, -1 at the grid's edge.
- */
-export type BackgroundRunVisitor = (first: number, step: number, length: number, before: number, after: number) => void;
+/** Which runs take a colour, and which: the colour behind a run, the colour ahead of it, or (between) a run bounded on both sides by one colour. */
+export type RunPaint = 'behind' | 'ahead' | 'between';
 
-/** Walks every row (`alongRows`) or every column, left to right or top to bottom, and visits each run of background cells. */
-export function forEachBackgroundRun(g: Grid, background: number, alongRows: boolean, visit: BackgroundRunVisitor): void {
+/**
+ * Walks every row (`alongRows`) or every column, left to right or top to bottom, and paints in
+ * `out` (the grid's cells or a copy of them) the runs of background cells that `way` chooses:
+ * with `colour`, or with the bounding colour when `colour` is -1. A cell already changed in
+ * `out` (no longer background) is left as it is. Returns how many cells were painted.
+ *
+ * No callback per run: under tsx every closure made in a call costs a name helper, and the
+ * search calls these millions of times.
+ */
+export function paintBackgroundRuns(g: Grid, background: number, alongRows: boolean, way: RunPaint, colour: number, out: Uint8Array): number {
   const { height, width, cells } = g;
   const lines = alongRows ? height : width;
   const length = alongRows ? width : height;
   const step = alongRows ? 1 : width;
+  let painted = 0;
   for (let line = 0; line < lines; line++) {
     const start = alongRows ? line * width : line;
     let before = -1;
@@ -25,9 +30,20 @@ export function forEachBackgroundRun(g: Grid, background: number, alongRows: boo
     for (let k = 0; k <= length; k++) {
       const v = k < length ? cells[start + k * step]! : -1;
       if (v === background) continue;
-      if (k > runStart) visit(start + runStart * step, step, k - runStart, before, v);
+      if (k > runStart) {
+        const bound = way === 'behind' ? before : way === 'ahead' ? v : before === v ? v : -1;
+        if (bound >= 0) {
+          const paint = colour >= 0 ? colour : bound;
+          for (let i = start + runStart * step, end = start + k * step; i < end; i += step) {
+            if (out[i] !== background) continue;
+            out[i] = paint;
+            painted++;
+          }
+        }
+      }
       before = v;
       runStart = k + 1;
     }
   }
+  return painted;
 }

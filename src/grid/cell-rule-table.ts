@@ -383,11 +383,11 @@ export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
   if (rule.features.length === 0 || !isFirstFeature(rule.features[0]!.name)) return null;
   if (rule.ordered) {
     const columns = rule.features.map((f) => featureOfCells(g, f));
-    const out = newCells(g.cells.length);
+    const out = newCells(g.height * g.width);
     for (let i = 0; i < out.length; i++) {
       const colour = rule.firstMatch(columns, i);
       if (colour === undefined) return null;
-      out[i] = colour === KEEP ? g.cells[i]! : colour;
+      out[i] = colour === KEEP ? g.data[g.offset + i]! : colour;
     }
     return new Grid(g.height, g.width, out);
   }
@@ -396,7 +396,7 @@ export function applyCellRule(g: Grid, rule: CellRule): Grid | null {
   for (let i = 0; i < keys.length; i++) {
     const colour = rule.colourFor(keys[i]!);
     if (colour === undefined) return null;
-    out[i] = colour === KEEP ? g.cells[i]! : colour;
+    out[i] = colour === KEEP ? g.data[g.offset + i]! : colour;
   }
   return new Grid(g.height, g.width, out);
 }

@@ -1,6 +1,6 @@
 /** All the cells of one colour gathered into a single object, wherever they lie. */
 import { backgroundColour } from './components.ts';
-import { EMPTY, Grid, newCells } from './grid.ts';
+import { EMPTY, Grid, newCells, fillCells } from './grid.ts';
 import { GridObject } from './grid-object.ts';
 import { cellBounds } from './crop.ts';
 
@@ -10,7 +10,7 @@ export function cellsOfColour(grid: Grid, colour: number): GridObject | null {
   if (!bounds) return null;
   const h = bounds.bottom - bounds.top + 1;
   const w = bounds.right - bounds.left + 1;
-  const shape = newCells(h * w).fill(EMPTY);
+  const shape = fillCells(newCells(h * w), EMPTY);
   const cells = grid.cells;
   for (let r = 0; r < h; r++) {
     const from = (bounds.top + r) * grid.width + bounds.left;

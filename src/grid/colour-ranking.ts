@@ -44,7 +44,11 @@ function coloursByCount(counts: Uint32Array, skip: number): number[] {
 /** A one-column grid of the colours other than the background, most cells first (lower colour first on ties); null when there is none. */
 export function coloursByFrequency(g: Grid): Grid | null {
   const colours = coloursByCount(colourCounts(g), backgroundColour(g));
-  return colours.length === 0 ? null : new Grid(colours.length, 1, Uint8Array.from(colours));
+  if (colours.length === 0) return null;
+  // In a slab, like every grid's cells: a typed array of its own gets a buffer of its own once hashed.
+  const cells = newCells(colours.length);
+  for (let i = 0; i < colours.length; i++) cells[i] = colours[i]!;
+  return new Grid(colours.length, 1, cells);
 }
 
 /**

@@ -3,7 +3,7 @@
  * (4 = edges only, 8 = edges and corners), either of one colour or of any non-background
  * colour.
  */
-import { EMPTY, Grid, newCells, pinCells } from './grid.ts';
+import { EMPTY, Grid, newCells, pinCells, fillCells } from './grid.ts';
 import { GridObject } from './grid-object.ts';
 import { backgroundOfCounts } from './most-frequent-colour.ts';
 
@@ -27,20 +27,111 @@ export function analysisBytesSoFar(): number {
 
 /** Objects in reading order of their first cell (top row first, then left). Callers must not change the list. */
 export function components(grid: Grid, options: ComponentOptions): readonly GridObject[] {
-  const key = (options.diagonal ? 1 : 0) | (options.multicolour ? 2 : 0) | ((options.background + 2) << 2);
+  const key = optionKey(options.diagonal, options.multicolour, options.background);
   // Kept with the grid: the search asks for the same grid's objects many times (each
   // extractor, and primitives that work object by object).
-  let forGrid = grid.componentsMemo;
-  if (forGrid) for (let i = 0; i < forGrid.length; i += 2) if (forGrid[i] === key) return forGrid[i + 1] as readonly GridObject[];
-  const found = computeComponents(grid, options);
-  // The objects' cells stay with the grid (see cellsRewind).
-  pinCells();
-  analysisBytes += 96 + 8 * found.length;
-  for (const o of found) analysisBytes += 200 + o.cells.length;
+  const forGrid = grid.componentsMemo;
+  const kept = memoised(forGrid, key);
+  if (kept) return kept;
+  let found = sameAsSimplerCut(grid, options);
+  if (found) {
+    analysisBytes += 32;
+  } else {
+    found = computeComponents(grid, options);
+    // The objects' cells stay with the grid (see cellsRewind).
+    pinCells();
+    analysisBytes += 96 + 8 * found.length;
+    for (const o of found) analysisBytes += 200 + o.height * o.width;
+  }
   // A literal of two holds exactly two (an empty list's first push would make room for 17).
   if (!forGrid) grid.componentsMemo = [key, found];
   else forGrid.push(key, found);
   return found;
+}
+
+function optionKey(diagonal: boolean, multicolour: boolean, background: number): number {
+  return (diagonal ? 1 : 0) | (multicolour ? 2 : 0) | ((background + 2) << 2);
+}
+
+function memoised(forGrid: unknown[] | undefined, key: number): readonly GridObject[] | undefined {
+  if (forGrid) for (let i = 0; i < forGrid.length; i += 2) if (forGrid[i] === key) return forGrid[i + 1] as readonly GridObject[];
+  return undefined;
+}
+
+/**
+ * The very list of a simpler cut of the grid already made, when a scan of the cells shows that
+ * this cut gives the same objects: joining through corners changes nothing when every two cells
+ * that touch only at a corner and would join also share an edge neighbour that joins them
+ * ({@link cornersAddNothing}); letting an object hold several colours changes nothing when no two
+ * neighbouring drawn cells differ in colour ({@link coloursNeverMeet}). Objects keep their reading
+ * order either way. Most grids are cut several ways and are cut alike; the scan costs far less
+ * than a flood, and the search then finds the two lists equal at once.
+ */
+function sameAsSimplerCut(grid: Grid, options: ComponentOptions): readonly GridObject[] | undefined {
+  const { diagonal, multicolour, background } = options;
+  const forGrid = grid.componentsMemo;
+  if (!forGrid) return undefined;
+  if (diagonal) {
+    const simpler = memoised(forGrid, optionKey(false, multicolour, background));
+    if (simpler && cornersAddNothing(grid, background, multicolour)) return simpler;
+  }
+  if (multicolour) {
+    const simpler = memoised(forGrid, optionKey(diagonal, false, background));
+    if (simpler && coloursNeverMeet(grid, background, diagonal)) return simpler;
+  }
+  return undefined;
+}
+
+/**
+ * True when, in every 2×2 window, two cells on a diagonal that would join (neither the background;
+ * of one colour unless `multicolour`) have a third cell of the window joining both through edges:
+ * then any path through corners has one through edges, and the cuts with and without corners agree.
+ */
+function cornersAddNothing(grid: Grid, background: number, multicolour: boolean): boolean {
+  const { height, width, data, offset } = grid;
+  for (let r = 0; r + 1 < height; r++) {
+    let i = offset + r * width;
+    for (let c = 0; c + 1 < width; c++, i++) {
+      const a = data[i]!;
+      const b = data[i + 1]!;
+      const below = data[i + width]!;
+      const d = data[i + width + 1]!;
+      if (a !== background && d !== background && (multicolour || a === d)) {
+        const bridged = multicolour ? b !== background || below !== background : b === a || below === a;
+        if (!bridged) return false;
+      }
+      if (b !== background && below !== background && (multicolour || b === below)) {
+        const bridged = multicolour ? a !== background || d !== background : a === b || d === b;
+        if (!bridged) return false;
+      }
+    }
+  }
+  return true;
+}
+
+/** True when no two neighbouring cells (through edges, and corners when `diagonal`) are both drawn and of different colours. */
+function coloursNeverMeet(grid: Grid, background: number, diagonal: boolean): boolean {
+  const { height, width, data, offset } = grid;
+  for (let r = 0; r < height; r++) {
+    const last = r + 1 === height;
+    let i = offset + r * width;
+    for (let c = 0; c < width; c++, i++) {
+      const v = data[i]!;
+      if (v === background) continue;
+      if (c + 1 < width && differs(v, data[i + 1]!, background)) return false;
+      if (last) continue;
+      if (differs(v, data[i + width]!, background)) return false;
+      if (!diagonal) continue;
+      if (c > 0 && differs(v, data[i + width - 1]!, background)) return false;
+      if (c + 1 < width && differs(v, data[i + width + 1]!, background)) return false;
+    }
+  }
+  return true;
+}
+
+/** A drawn cell `v` beside `w`: true when `w` is drawn too, in another colour. */
+function differs(v: number, w: number, background: number): boolean {
+  return w !== background && w !== v;
 }
 
 /**
@@ -66,7 +157,7 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
   const queue = queueBuffer;
   const rows = rowBuffer;
   const columns = columnBuffer;
-  seen.fill(0, 0, cells.length);
+  fillCells(seen, 0, 0, cells.length);
   // Objects are gathered in a list kept for every call and copied out at their exact count: the
   // list is kept with the grid, and one grown by pushing holds room for 17 however few there are.
   const objects = objectBuffer;
@@ -112,7 +203,7 @@ function computeComponents(grid: Grid, options: ComponentOptions): GridObject[] 
     }
     const h = bottom - top + 1;
     const w = right - left + 1;
-    const shape = newCells(h * w).fill(EMPTY);
+    const shape = fillCells(newCells(h * w), EMPTY);
     for (let i = 0; i < tail; i++) shape[(rows[i]! - top) * w + (columns[i]! - left)] = cells[queue[i]!]!;
     objects[count++] = new GridObject(top, left, h, w, shape, tail);
   }
@@ -157,5 +248,12 @@ export function colourCounts(grid: Grid): Uint32Array {
  */
 export function backgroundColour(grid: Grid): number {
   if (grid.backgroundMemo >= 0) return grid.backgroundMemo;
+  if (!grid.colourCountsMemo) {
+    // A grid with a cell of colour 0 has background 0 whatever its other counts: found by a scan
+    // that mostly stops early, with no count table made and kept for the grid.
+    const { data, offset } = grid;
+    const end = offset + grid.height * grid.width;
+    for (let i = offset; i < end; i++) if (data[i] === 0) return (grid.backgroundMemo = 0);
+  }
   return (grid.backgroundMemo = backgroundOfCounts(colourCounts(grid)));
 }

@@ -2,7 +2,7 @@
  * Connecting cells of one colour: along rows, columns or both, the run of background cells
  * between two neighbouring drawn cells of the same colour takes a colour.
  */
-import { forEachBackgroundRun, type BackgroundRunVisitor } from './background-runs.ts';
+import { paintBackgroundRuns } from './background-runs.ts';
 import { backgroundColour } from './components.ts';
 import { Grid, copyCells } from './grid.ts';
 
@@ -15,17 +15,8 @@ import { Grid, copyCells } from './grid.ts';
 export function connectSameColour(g: Grid, paint: number | null, rows: boolean, columns: boolean): Grid {
   const background = backgroundColour(g);
   const out = copyCells(g.cells);
-  let changed = false;
-  const connect: BackgroundRunVisitor = (first, step, length, before, after) => {
-    if (before < 0 || before !== after) return;
-    for (let k = 0; k < length; k++) {
-      const i = first + k * step;
-      if (out[i] !== background) continue;
-      out[i] = paint ?? before;
-      changed = true;
-    }
-  };
-  if (rows) forEachBackgroundRun(g, background, true, connect);
-  if (columns) forEachBackgroundRun(g, background, false, connect);
-  return changed ? new Grid(g.height, g.width, out) : g;
+  let changed = 0;
+  if (rows) changed += paintBackgroundRuns(g, background, true, 'between', paint ?? -1, out);
+  if (columns) changed += paintBackgroundRuns(g, background, false, 'between', paint ?? -1, out);
+  return changed > 0 ? new Grid(g.height, g.width, out) : g;
 }

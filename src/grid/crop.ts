@@ -6,7 +6,7 @@
  */
 import { backgroundColour } from './components.ts';
 import type { GridObject } from './grid-object.ts';
-import { EMPTY, Grid, shapeAllowed, newCells, copyRun } from './grid.ts';
+import { EMPTY, Grid, shapeAllowed, newCells, copyRun, fillCells } from './grid.ts';
 
 /** An inclusive rectangle of cells: rows top..bottom, columns left..right. */
 export interface Bounds {
@@ -52,9 +52,9 @@ function columnHas(cells: Uint8Array, column: number, width: number, top: number
 export function cropGrid(grid: Grid, top: number, left: number, height: number, width: number): Grid {
   if (top === 0 && left === 0 && height === grid.height && width === grid.width) return grid;
   const cells = newCells(height * width);
-  const source = grid.cells;
+  const source = grid.data;
   for (let r = 0; r < height; r++) {
-    const from = (top + r) * grid.width + left;
+    const from = grid.offset + (top + r) * grid.width + left;
     copyRun(source, from, cells, r * width, width);
   }
   return new Grid(height, width, cells);
@@ -130,7 +130,7 @@ export function keepMiddleLine(g: Grid, column: boolean): Grid | null {
   const length = column ? width : height;
   if (length % 2 === 0) return null;
   const middle = (length - 1) / 2;
-  const out = newCells(cells.length).fill(backgroundColour(g));
+  const out = fillCells(newCells(cells.length), backgroundColour(g));
   if (column) for (let r = 0; r < height; r++) out[r * width + middle] = cells[r * width + middle]!;
   else copyRun(cells, middle * width, out, middle * width, width);
   return new Grid(height, width, out);

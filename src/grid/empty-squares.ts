@@ -1,10 +1,12 @@
 /** Squares of background cells of a given size, found and filled. */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells, copyCells } from './grid.ts';
+import { Grid, copyCells, fillCells } from './grid.ts';
 import { WorkArray } from './work-array.ts';
 
 /** Work array for the prefix counts below. */
 const prefixCounts = new WorkArray(Uint16Array);
+/** Work array: the cells squares already took. */
+const takenCells = new WorkArray(Uint8Array);
 
 /**
  * Squares of k×k background cells take the colour; they are found by their top-left corner in
@@ -24,7 +26,7 @@ export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | nul
       filled[(r + 1) * stride + c + 1] = own + filled[r * stride + c + 1]! + filled[(r + 1) * stride + c]! - filled[r * stride + c]!;
     }
   }
-  const taken = newCells(height * width);
+  const taken = fillCells(takenCells.take(height * width), 0, 0, height * width);
   let out: Uint8Array | undefined;
   for (let r = 0; r + k <= height; r++) {
     for (let c = 0; c + k <= width; c++) {
@@ -36,8 +38,8 @@ export function fillEmptySquares(g: Grid, k: number, colour: number): Grid | nul
       out ??= copyCells(cells);
       for (let dr = 0; dr < k; dr++) {
         const base = (r + dr) * width + c;
-        taken.fill(1, base, base + k);
-        out.fill(colour, base, base + k);
+        fillCells(taken, 1, base, base + k);
+        fillCells(out, colour, base, base + k);
       }
     }
   }

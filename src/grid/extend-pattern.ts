@@ -34,7 +34,7 @@ export function extendPatternToSize(g: Grid, height: number, width: number): Gri
     const sr = r < g.height ? r : (r - g.height) % rowPeriod + g.height - rowPeriod;
     for (let c = 0; c < width; c++) {
       const sc = c < g.width ? c : (c - g.width) % columnPeriod + g.width - columnPeriod;
-      out[r * width + c] = g.cells[sr * g.width + sc]!;
+      out[r * width + c] = g.data[g.offset + sr * g.width + sc]!;
     }
   }
   return new Grid(height, width, out);

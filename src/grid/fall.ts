@@ -1,6 +1,6 @@
 /** Gravity on single cells: the drawn cells of every row or column slide to one end, in their order. */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, fillCells } from './grid.ts';
 
 /**
  * Gravity on single cells: along every column (or row) the non-background cells slide to
@@ -9,7 +9,7 @@ import { Grid, newCells } from './grid.ts';
 export function fall(g: Grid, alongColumns: boolean, towardsEnd: boolean): Grid {
   const { height, width, cells } = g;
   const background = backgroundColour(g);
-  const out = newCells(height * width).fill(background);
+  const out = fillCells(newCells(height * width), background);
   const lines = alongColumns ? width : height;
   const length = alongColumns ? height : width;
   const step = alongColumns ? width : 1;

@@ -6,7 +6,7 @@
  * cuts every grid it keeps into objects several ways, and most of those objects are only counted,
  * compared or painted, which the cells serve without a Grid of their own.
  */
-import { EMPTY, Grid, HASH_MASK, hashCells, sameCells } from './grid.ts';
+import { EMPTY, Grid, HASH_MASK, cellsData, cellsOffset, cellsView, hashCellsAt, sameCellsAt } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 
 /** Work buffer for {@link GridObject.mainColour} (asked of most objects the search makes). */
@@ -18,8 +18,13 @@ export class GridObject {
   /** The bounding box's height and width. */
   readonly height: number;
   readonly width: number;
-  /** The bounding box's cells, row-major, EMPTY where a cell is not part of the object; never changed. */
-  readonly cells: Uint8Array;
+  /**
+   * The bytes that hold the bounding box's cells, row-major from {@link offset}, EMPTY where a
+   * cell is not part of the object (a slab shared with other cells, or an array of their own; no
+   * view is kept, as for a grid's cells). Never changed.
+   */
+  readonly data: Uint8Array;
+  readonly offset: number;
   /** Number of cells that belong to the object. */
   readonly size: number;
   /** The hash, made on first use (-1 until then): most objects are painted or counted, never compared. */
@@ -39,39 +44,46 @@ export class GridObject {
     this.left = left;
     this.height = shape ? shape.height : (shapeOrHeight as number);
     this.width = shape ? shape.width : width!;
-    this.cells = shape ? shape.cells : cells!;
+    this.data = shape ? shape.data : cellsData(cells!);
+    this.offset = shape ? shape.offset : cellsOffset(cells!);
     this.shapeMemo = shape;
-    this.size = size ?? countFilled(this.cells);
+    this.size = size ?? countFilled(this.data, this.offset, this.height * this.width);
+  }
+
+  /** The bounding box's cells as a view made on each call (read it once per call, not per cell). */
+  get cells(): Uint8Array {
+    return cellsView(this.data, this.offset, this.height * this.width);
   }
 
   get hash(): number {
-    if (this.hashMemo < 0) this.hashMemo = objectHash(this.shapeMemo ? this.shapeMemo.hash : hashCells(this.height, this.width, this.cells), this.top, this.left);
+    if (this.hashMemo < 0) this.hashMemo = objectHash(this.shapeMemo ? this.shapeMemo.hash : hashCellsAt(this.height, this.width, this.data, this.offset), this.top, this.left);
     return this.hashMemo;
   }
 
   /** The bounding box as a grid (made on first use). */
   get shape(): Grid {
-    return (this.shapeMemo ??= new Grid(this.height, this.width, this.cells));
+    return (this.shapeMemo ??= new Grid(this.height, this.width, this.data, this.offset));
   }
 
   equals(other: GridObject): boolean {
     if (this === other) return true;
     if (this.top !== other.top || this.left !== other.left || this.height !== other.height || this.width !== other.width || this.hash !== other.hash) return false;
-    return sameCells(this.cells, other.cells);
+    return sameCellsAt(this.data, this.offset, other.data, other.offset, this.height * this.width);
   }
 
   /** The colour of the object's most frequent cell (lowest colour on ties). */
   get mainColour(): number {
     const counts = mainColourCounts.fill(0);
-    const cells = this.cells;
-    for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) counts[cells[i]!]!++;
+    const { data, offset } = this;
+    const end = offset + this.height * this.width;
+    for (let i = offset; i < end; i++) if (data[i] !== EMPTY) counts[data[i]!]!++;
     return mostFrequentColour(counts);
   }
 }
 
-function countFilled(cells: Uint8Array): number {
+function countFilled(data: Uint8Array, offset: number, length: number): number {
   let size = 0;
-  for (let i = 0; i < cells.length; i++) if (cells[i] !== EMPTY) size++;
+  for (let i = offset; i < offset + length; i++) if (data[i] !== EMPTY) size++;
   return size;
 }
 

@@ -30,8 +30,15 @@ export const EMPTY = 255;
 export class Grid {
   readonly height: number;
   readonly width: number;
-  /** Row-major cells; callers must not mutate a grid after construction. */
-  readonly cells: Uint8Array;
+  /**
+   * The bytes that hold the cells, row-major from {@link offset}: the whole slab the cells were
+   * made in (shared with the other grids made there), or an array of the grid's own. A grid
+   * keeps no view of its own cells: a typed-array view is the largest object a kept grid would
+   * hold, and the collector copies every kept grid. Callers must not change a grid's cells.
+   */
+  readonly data: Uint8Array;
+  /** Where the cells start in {@link data}. */
+  readonly offset: number;
   readonly hash: number;
   /**
    * Analyses computed once and kept with the grid (grids never change): colour counts, the
@@ -44,16 +51,33 @@ export class Grid {
   /** Components by option key, as key, list, key, list, ... (a grid is cut a few ways at most; a Map per grid costs far more). */
   componentsMemo: unknown[] | undefined = undefined;
 
-  /** Takes ownership of `cells` (length height × width). */
-  constructor(height: number, width: number, cells: Uint8Array) {
+  /**
+   * Takes ownership of `cells` (length height × width). With `offset`, `cells` is the bytes that
+   * hold them (as a grid's or an object's {@link data}) and they start there.
+   */
+  constructor(height: number, width: number, cells: Uint8Array, offset = -1) {
     this.height = height;
     this.width = width;
-    this.cells = cells;
-    this.hash = hashCells(height, width, cells);
+    if (offset >= 0) {
+      this.data = cells;
+      this.offset = offset;
+    } else {
+      this.data = cellsData(cells);
+      this.offset = cellsOffset(cells);
+    }
+    this.hash = hashCellsAt(height, width, this.data, this.offset);
+  }
+
+  /**
+   * The cells, row-major, as a view made on each call (read it once per call, not per cell; the
+   * hottest code reads {@link data} at {@link offset} instead). Callers must not change them.
+   */
+  get cells(): Uint8Array {
+    return cellsView(this.data, this.offset, this.height * this.width);
   }
 
   static filled(height: number, width: number, colour: number): Grid {
-    return new Grid(height, width, newCells(height * width).fill(colour));
+    return new Grid(height, width, fillCells(newCells(height * width), colour));
   }
 
   /** Builds a grid from a list of rows; rows must be equally long. */
@@ -70,19 +94,24 @@ export class Grid {
   }
 
   get(row: number, column: number): number {
-    return this.cells[row * this.width + column]!;
+    return this.data[this.offset + row * this.width + column]!;
   }
 
   toRows(): number[][] {
     const rows: number[][] = [];
-    for (let r = 0; r < this.height; r++) rows.push(Array.from(this.cells.subarray(r * this.width, (r + 1) * this.width)));
+    const { data, offset, width } = this;
+    for (let r = 0; r < this.height; r++) {
+      const row: number[] = [];
+      for (let c = 0; c < width; c++) row.push(data[offset + r * width + c]!);
+      rows.push(row);
+    }
     return rows;
   }
 
   equals(other: Grid): boolean {
     if (this === other) return true;
     if (this.hash !== other.hash || this.height !== other.height || this.width !== other.width) return false;
-    return sameCells(this.cells, other.cells);
+    return sameCellsAt(this.data, this.offset, other.data, other.offset, this.height * this.width);
   }
 
   toString(): string {
@@ -110,6 +139,9 @@ let slabBytes = new Uint8Array(slab);
 /** Counts the slabs made, so that a checkpoint knows whether the slab changed since. */
 let slabSerial = 0;
 let slabOffset = 0;
+/** The last cells {@link newCells} handed out of a slab, and where they start in it. */
+let lastSlabView: Uint8Array | undefined;
+let lastSlabOffset = 0;
 let cellBytes = 0;
 /** Counts {@link pinCells} calls. */
 let pins = 0;
@@ -117,6 +149,26 @@ let pins = 0;
 let checkpointSerial = -1;
 let checkpointOffset = 0;
 let checkpointPins = 0;
+
+/**
+ * The bytes that hold cells just made (the slab, for the last cells {@link newCells} handed out,
+ * found without asking the view for its buffer, which is a call into the engine's runtime), or
+ * the cells themselves. With {@link cellsOffset}, what a grid or an object keeps instead of a view.
+ */
+export function cellsData(cells: Uint8Array): Uint8Array {
+  return cells === lastSlabView ? slabBytes : cells;
+}
+
+/** Where the cells start in {@link cellsData}'s bytes. */
+export function cellsOffset(cells: Uint8Array): number {
+  return cells === lastSlabView ? lastSlabOffset : 0;
+}
+
+/** A view of `length` cells of `data` from `offset` (`data` itself when that is all of it). */
+export function cellsView(data: Uint8Array, offset: number, length: number): Uint8Array {
+  if (offset === 0 && data.length === length) return data;
+  return new Uint8Array(data === slabBytes ? slab : data.buffer, data.byteOffset + offset, length);
+}
 
 /** A zeroed cell array of this length, for building a new grid. */
 export function newCells(length: number): Uint8Array {
@@ -133,6 +185,8 @@ export function newCells(length: number): Uint8Array {
     cellBytes += SLAB_BYTES;
   }
   const view = new Uint8Array(slab, slabOffset, length);
+  lastSlabView = view;
+  lastSlabOffset = slabOffset;
   slabOffset += (length + 7) & ~7;
   return view;
 }
@@ -164,6 +218,16 @@ export function cellsRewind(): void {
 /** Says that cells made since the last checkpoint are kept beyond the call (a rewind then does nothing). */
 export function pinCells(): void {
   pins++;
+}
+
+/** From this many cells on, the native fill is faster than a loop (it is a call into the engine's runtime, dear for the short runs most grids have). */
+const NATIVE_FILL_FROM = 128;
+
+/** Sets cells from..to-1 to the value, and returns the array. */
+export function fillCells(cells: Uint8Array, value: number, from = 0, to = cells.length): Uint8Array {
+  if (to - from >= NATIVE_FILL_FROM) return cells.fill(value, from, to);
+  for (let i = from; i < to; i++) cells[i] = value;
+  return cells;
 }
 
 /** A copy of a cell array, for building a changed grid from an old one. */
@@ -202,32 +266,50 @@ export function sameCells(a: Uint8Array, b: Uint8Array): boolean {
   return true;
 }
 
+/**
+ * True when `length` cells of `a` from `aFrom` equal those of `b` from `bFrom`; long runs are
+ * compared natively, with no view made for either.
+ */
+export function sameCellsAt(a: Uint8Array, aFrom: number, b: Uint8Array, bFrom: number, length: number): boolean {
+  if (length >= NATIVE_COMPARE_FROM) return compareRanges.call(a, b, bFrom, bFrom + length, aFrom, aFrom + length) === 0;
+  for (let i = 0; i < length; i++) if (a[aFrom + i] !== b[bFrom + i]) return false;
+  return true;
+}
+
+/** Node's comparison of two byte ranges; it takes any Uint8Array as `this`, not only a Buffer. */
+const compareRanges = Buffer.prototype.compare as (this: Uint8Array, target: Uint8Array, targetStart: number, targetEnd: number, sourceStart: number, sourceEnd: number) => number;
+
 /** Whether this machine stores the low byte of a word first, as an Int32Array view then reads four cells at once. */
 const LITTLE_ENDIAN = new Uint8Array(new Uint32Array([1]).buffer)[0] === 1;
 
 /**
  * Hash of the shape and the cells, four cells at a time (a murmur-style step per 32-bit word, the
  * cells read little end first, then the cells left over one by one), finished with a murmur-style
- * mix. Every grid is hashed when made, so this is on the search's hot path: cells in a slab are
- * read through the current slab's word view; cells anywhere else (an older slab, a buffer of their
+ * mix. Every grid is hashed when made, so this is on the search's hot path: cells in the current
+ * slab are read through its word view; cells anywhere else (an older slab, a buffer of their
  * own) give the same words, built from bytes, so where the cells lie never changes the hash.
  */
 export function hashCells(height: number, width: number, cells: Uint8Array): number {
+  return cells === lastSlabView ? hashCellsAt(height, width, slabBytes, lastSlabOffset) : hashCellsAt(height, width, cells, 0);
+}
+
+/** {@link hashCells} of the height × width cells of `data` from `from`. */
+export function hashCellsAt(height: number, width: number, data: Uint8Array, from: number): number {
   let h = 0x811c9dc5 ^ (height * 31 + width);
-  const length = cells.length;
+  const length = height * width;
   const count = length >> 2;
-  if (LITTLE_ENDIAN && cells.buffer === slab && (cells.byteOffset & 3) === 0) {
+  if (LITTLE_ENDIAN && data === slabBytes && (from & 3) === 0) {
     const words = slabWords;
-    const from = cells.byteOffset >> 2;
-    for (let k = 0; k < count; k++) h = mixWord(h, words[from + k]!);
+    const first = from >> 2;
+    for (let k = 0; k < count; k++) h = mixWord(h, words[first + k]!);
   } else {
     for (let k = 0; k < count; k++) {
-      const i = k << 2;
-      h = mixWord(h, cells[i]! | (cells[i + 1]! << 8) | (cells[i + 2]! << 16) | (cells[i + 3]! << 24));
+      const i = from + (k << 2);
+      h = mixWord(h, data[i]! | (data[i + 1]! << 8) | (data[i + 2]! << 16) | (data[i + 3]! << 24));
     }
   }
   for (let i = count << 2; i < length; i++) {
-    h ^= cells[i]!;
+    h ^= data[from + i]!;
     h = Math.imul(h, 0x01000193);
   }
   h ^= length;

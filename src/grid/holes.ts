@@ -124,7 +124,7 @@ export function fillEnclosed(g: Grid, colour: number): Grid {
  * that the next call to this module reuses: read them before.
  */
 export function holeMarks(o: GridObject): { readonly marks: Uint8Array; readonly count: number } {
-  const marks = markWork.take(o.cells.length);
+  const marks = markWork.take(o.height * o.width);
   const count = markEnclosed(o.height, o.width, o.cells, EMPTY, marks);
   return { marks, count };
 }

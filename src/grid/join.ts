@@ -7,8 +7,8 @@ export function joinRight(a: Grid, b: Grid): Grid | null {
   const width = a.width + b.width;
   const out = newCells(a.height * width);
   for (let r = 0; r < a.height; r++) {
-    copyRun(a.cells, r * a.width, out, r * width, a.width);
-    copyRun(b.cells, r * b.width, out, r * width + a.width, b.width);
+    copyRun(a.data, a.offset + r * a.width, out, r * width, a.width);
+    copyRun(b.data, b.offset + r * b.width, out, r * width + a.width, b.width);
   }
   return new Grid(a.height, width, out);
 }

@@ -3,7 +3,8 @@
  * row and column, and through every cell of a colour.
  */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells, copyCells } from './grid.ts';
+import { Grid, copyCells, fillCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
 import { isInside, type Position } from './position.ts';
 
 /**
@@ -47,7 +48,7 @@ export function fillEmptyLines(g: Grid, colour: number): Grid {
   for (let r = 0; r < height; r++) {
     let empty = true;
     for (let c = 0; c < width && empty; c++) if (cells[r * width + c] !== background) empty = false;
-    if (empty) out.fill(colour, r * width, (r + 1) * width);
+    if (empty) fillCells(out, colour, r * width, (r + 1) * width);
   }
   for (let c = 0; c < width; c++) {
     let empty = true;
@@ -57,11 +58,15 @@ export function fillEmptyLines(g: Grid, colour: number): Grid {
   return new Grid(height, width, out);
 }
 
+/** Work arrays for {@link linesThroughColour}: which rows and columns hold the colour. */
+const rowHits = new WorkArray(Uint8Array);
+const columnHits = new WorkArray(Uint8Array);
+
 /** Each cell of the colour paints its whole row (when `rows`), its whole column (when `columns`), or both, in the colour, over whatever was there. */
 export function linesThroughColour(g: Grid, colour: number, rows: boolean, columns: boolean): Grid {
   const { height, width, cells } = g;
-  const rowHit = newCells(height);
-  const columnHit = newCells(width);
+  const rowHit = fillCells(rowHits.take(height), 0, 0, height);
+  const columnHit = fillCells(columnHits.take(width), 0, 0, width);
   let any = false;
   for (let r = 0; r < height; r++) {
     for (let c = 0; c < width; c++) {

@@ -15,12 +15,14 @@ export const MASK_RULES = {
 /** The colour where the rule holds and 0 elsewhere; null unless the sizes match. */
 export function mask(a: Grid, b: Grid, colour: number, rule: number): Grid | null {
   if (a.height !== b.height || a.width !== b.width) return null;
-  const out = newCells(a.cells.length);
-  const x = a.cells;
-  const y = b.cells;
+  const out = newCells(a.height * a.width);
+  const x = a.data;
+  const y = b.data;
+  const xFrom = a.offset;
+  const yFrom = b.offset;
   for (let i = 0; i < out.length; i++) {
-    const first = x[i] !== 0;
-    const second = y[i] !== 0;
+    const first = x[xFrom + i] !== 0;
+    const second = y[yFrom + i] !== 0;
     const bit = first ? (second ? 0b1000 : 0b0100) : second ? 0b0010 : 0b0001;
     if (rule & bit) out[i] = colour;
   }

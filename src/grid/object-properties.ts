@@ -7,7 +7,7 @@ import { EMPTY, type Grid } from './grid.ts';
 
 /** Whether (r, c) of the object's box is one of its cells; false outside the box. */
 export function holdsCell(o: GridObject, r: number, c: number): boolean {
-  return r >= 0 && r < o.height && c >= 0 && c < o.width && o.cells[r * o.width + c] !== EMPTY;
+  return r >= 0 && r < o.height && c >= 0 && c < o.width && o.data[o.offset + r * o.width + c] !== EMPTY;
 }
 
 /** Whether any cell of the object has the colour. */
@@ -71,16 +71,16 @@ export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
   const { height, width } = g;
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] === EMPTY) continue;
+      if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
       const row = o.top + r;
       const column = o.left + c;
       for (let nr = row - 1; nr <= row + 1; nr++) {
         if (nr < 0 || nr >= height) continue;
         for (let nc = column - 1; nc <= column + 1; nc++) {
-          if (nc < 0 || nc >= width || g.cells[nr * width + nc] !== colour) continue;
+          if (nc < 0 || nc >= width || g.data[g.offset + nr * width + nc] !== colour) continue;
           const sr = nr - o.top;
           const sc = nc - o.left;
-          const inside = sr >= 0 && sr < o.height && sc >= 0 && sc < o.width && o.cells[sr * o.width + sc] !== EMPTY;
+          const inside = sr >= 0 && sr < o.height && sc >= 0 && sc < o.width && o.data[o.offset + sr * o.width + sc] !== EMPTY;
           if (!inside) return true;
         }
       }
@@ -94,7 +94,7 @@ export function touchesOther(o: GridObject, g: Grid, background: number): boolea
   const { height, width, cells } = g;
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] === EMPTY) continue;
+      if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
       const row = o.top + r;
       const column = o.left + c;
       if (row > 0 && !holdsCell(o, r - 1, c) && cells[(row - 1) * width + column] !== background) return true;

@@ -345,7 +345,7 @@ function insideFlags(g: Grid, objects: readonly GridObject[]): number[] {
     if (touchesEdge(o, g)) return 0;
     for (let r = 0; r < o.height; r++) {
       for (let c = 0; c < o.width; c++) {
-        if (o.cells[r * o.width + c] === EMPTY) continue;
+        if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
         const row = o.top + r;
         const column = o.left + c;
         if (open(row - 1, column) || open(row + 1, column) || open(row, column - 1) || open(row, column + 1)) return 0;
@@ -477,10 +477,10 @@ export function possibleOutcomes(o: GridObject, input: Grid, output: Grid): Obje
   let single = -1;
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
-      if (o.cells[r * o.width + c] === EMPTY) continue;
+      if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
       const i = (o.top + r) * width + o.left + c;
-      const after = output.cells[i]!;
-      if (after !== input.cells[i]) kept = false;
+      const after = output.data[output.offset + i]!;
+      if (after !== input.data[input.offset + i]) kept = false;
       if (single === -1) single = after;
       else if (single !== after) single = -2;
     }
@@ -569,12 +569,12 @@ function slideSteps(o: GridObject, g: Grid, dr: number, dc: number, background: 
     if (!landsInside(o, g, r0, c0)) return steps;
     for (let r = 0; r < o.height; r++) {
       for (let c = 0; c < o.width; c++) {
-        if (o.cells[r * o.width + c] === EMPTY) continue;
+        if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
         const rr = r + r0;
         const cc = c + c0;
         // A cell of the object itself is left by the move: not in the way.
         if (holdsCell(o, rr, cc)) continue;
-        if (g.cells[(o.top + rr) * g.width + o.left + cc] !== background) return steps;
+        if (g.data[g.offset + (o.top + rr) * g.width + o.left + cc] !== background) return steps;
       }
     }
     steps++;
@@ -589,8 +589,8 @@ function landsInside(o: GridObject, g: Grid, rows: number, columns: number): boo
 function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
-      const v = o.cells[r * o.width + c]!;
-      if (v !== EMPTY && g.cells[(top + r) * g.width + left + c] !== v) return false;
+      const v = o.data[o.offset + r * o.width + c]!;
+      if (v !== EMPTY && g.data[g.offset + (top + r) * g.width + left + c] !== v) return false;
     }
   }
   return true;
@@ -601,9 +601,9 @@ function matchesAt(o: GridObject, g: Grid, top: number, left: number): boolean {
  * cell comes, the background where the object leaves a cell, -1 where neither (the grid's own cell).
  */
 function mirroredColour(o: GridObject, r: number, c: number, leftRight: boolean, background: number): number {
-  const v = leftRight ? o.cells[r * o.width + (o.width - 1 - c)]! : o.cells[(o.height - 1 - r) * o.width + c]!;
+  const v = leftRight ? o.data[o.offset + r * o.width + (o.width - 1 - c)]! : o.data[o.offset + (o.height - 1 - r) * o.width + c]!;
   if (v !== EMPTY) return v;
-  return o.cells[r * o.width + c] !== EMPTY ? background : -1;
+  return o.data[o.offset + r * o.width + c] !== EMPTY ? background : -1;
 }
 
 /** The object mirrored in its own box. */
@@ -665,7 +665,7 @@ function holesFill(o: GridObject, input: Grid, output: Grid, background: number)
   for (let r = 0; r < o.height; r++) {
     for (let c = 0; c < o.width; c++) {
       const i = (o.top + r) * width + o.left + c;
-      const own = o.cells[r * o.width + c]!;
+      const own = o.data[o.offset + r * o.width + c]!;
       if (own !== EMPTY) {
         if (outputCells[i] !== own) return undefined;
         continue;

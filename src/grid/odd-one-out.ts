@@ -5,6 +5,11 @@
 import { backgroundColour } from './components.ts';
 import type { GridObject } from './grid-object.ts';
 import { Grid, newCells } from './grid.ts';
+import { WorkArray } from './work-array.ts';
+
+/** Work arrays for {@link uniqueColourObject}: counts per colour, each object's main colour. */
+const colourTally = new Uint32Array(10);
+const mainColours = new WorkArray(Uint8Array);
 
 /** For each item, how many items (itself included) are the same as it. */
 function tally<T>(items: readonly T[], same: (a: T, b: T) => boolean): number[] {
@@ -38,8 +43,8 @@ export function oddOneOut(objects: readonly GridObject[]): GridObject | null {
 export function uniqueColourObject(objects: readonly GridObject[]): GridObject | null {
   const n = objects.length;
   if (n < 2) return null;
-  const counts = new Uint32Array(10);
-  const colours = newCells(n);
+  const counts = colourTally.fill(0);
+  const colours = mainColours.take(n);
   for (let i = 0; i < n; i++) {
     colours[i] = objects[i]!.mainColour;
     counts[colours[i]!]!++;
@@ -56,8 +61,8 @@ export function uniqueColourObject(objects: readonly GridObject[]): GridObject |
 /** The part's filled pattern: 1 where a cell is not the part's background, 0 elsewhere. */
 function filledPattern(g: Grid): Grid {
   const background = backgroundColour(g);
-  const out = newCells(g.cells.length);
-  for (let i = 0; i < out.length; i++) out[i] = g.cells[i] === background ? 0 : 1;
+  const out = newCells(g.height * g.width);
+  for (let i = 0; i < out.length; i++) out[i] = g.data[g.offset + i] === background ? 0 : 1;
   return new Grid(g.height, g.width, out);
 }
 

@@ -22,7 +22,8 @@ export function overlayAll(grids: readonly Grid[]): Grid | null {
   const counts = new Uint32Array(10);
   for (const g of grids) {
     if (g.height !== height || g.width !== width) return null;
-    for (let i = 0; i < g.cells.length; i++) counts[g.cells[i]!]!++;
+    const cells = g.cells;
+    for (let i = 0; i < cells.length; i++) counts[cells[i]!]!++;
   }
   const background = backgroundOfCounts(counts);
   const out = copyCells(grids[0]!.cells);

@@ -5,7 +5,7 @@
  */
 import { backgroundColour } from './components.ts';
 import { GridObject } from './grid-object.ts';
-import { EMPTY, Grid, newCells, copyCells } from './grid.ts';
+import { EMPTY, Grid, newCells, copyCells, fillCells } from './grid.ts';
 
 /**
  * Writes the object's cells into `cells` (a height × width buffer), shifted by
@@ -31,7 +31,7 @@ export function paintObjectInto(
     const source = r * object.width;
     const target = (top + r) * width + left;
     for (let c = columnFrom; c < columnTo; c++) {
-      const v = object.cells[source + c]!;
+      const v = object.data[object.offset + source + c]!;
       if (v !== EMPTY) cells[target + c] = colour ?? v;
     }
   }
@@ -73,7 +73,7 @@ export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
 
 /** The grid with every cell outside the object turned to the background colour. */
 export function keepOnlyObject(g: Grid, object: GridObject): Grid {
-  const out = newCells(g.cells.length).fill(backgroundColour(g));
+  const out = fillCells(newCells(g.cells.length), backgroundColour(g));
   paintObjectInto(out, g.height, g.width, object);
   return new Grid(g.height, g.width, out);
 }

@@ -16,5 +16,5 @@ export function isInside(g: Grid, p: Position): boolean {
 
 /** The colour of the cell at the position; null outside the grid. */
 export function colourAt(g: Grid, p: Position): number | null {
-  return isInside(g, p) ? g.cells[p.row * g.width + p.column]! : null;
+  return isInside(g, p) ? g.data[g.offset + p.row * g.width + p.column]! : null;
 }

@@ -2,7 +2,7 @@
  * Rays: drawn cells paint the background cells along a direction, up to the next drawn cell or
  * the edge, or toward a cell of a target colour.
  */
-import { forEachBackgroundRun } from './background-runs.ts';
+import { paintBackgroundRuns } from './background-runs.ts';
 import { backgroundColour } from './components.ts';
 import { Grid, copyCells } from './grid.ts';
 
@@ -12,10 +12,7 @@ import { Grid, copyCells } from './grid.ts';
  */
 export function shootRays(g: Grid, alongColumns: boolean, forwards: boolean): Grid {
   const out = copyCells(g.cells);
-  forEachBackgroundRun(g, backgroundColour(g), !alongColumns, (first, step, length, before, after) => {
-    const paint = forwards ? before : after;
-    if (paint >= 0) for (let k = 0; k < length; k++) out[first + k * step] = paint;
-  });
+  paintBackgroundRuns(g, backgroundColour(g), !alongColumns, forwards ? 'behind' : 'ahead', -1, out);
   return new Grid(g.height, g.width, out);
 }
 

@@ -1,5 +1,5 @@
 /** Scaling a grid by a whole factor: each cell a block, or each block a cell. */
-import { Grid, shapeAllowed, newCells } from './grid.ts';
+import { Grid, shapeAllowed, newCells, fillCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
 
@@ -11,7 +11,7 @@ export function scaleUp(g: Grid, k: number): Grid | null {
   const out = newCells(height * k * outWidth);
   for (let r = 0; r < height; r++) {
     const rowStart = r * k * outWidth;
-    for (let c = 0; c < width; c++) out.fill(cells[r * width + c]!, rowStart + c * k, rowStart + c * k + k);
+    for (let c = 0; c < width; c++) fillCells(out, cells[r * width + c]!, rowStart + c * k, rowStart + c * k + k);
     for (let i = 1; i < k; i++) out.copyWithin(rowStart + i * outWidth, rowStart, rowStart + outWidth);
   }
   return new Grid(height * k, outWidth, out);

@@ -3,7 +3,7 @@
  * touches the border or another object, keeping their shapes.
  */
 import { backgroundColour, components } from './components.ts';
-import { EMPTY, Grid, newCells } from './grid.ts';
+import { EMPTY, Grid, newCells, fillCells } from './grid.ts';
 import { paintObjectInto } from './paint-object.ts';
 import { WorkArray } from './work-array.ts';
 
@@ -52,7 +52,7 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
     starts[index] = at;
     const o = objects[index]!;
     for (let r = 0; r < o.height; r++) {
-      for (let c = 0; c < o.width; c++) if (o.cells[r * o.width + c] !== EMPTY) offsets[at++] = (o.top + r) * width + o.left + c;
+      for (let c = 0; c < o.width; c++) if (o.data[o.offset + r * o.width + c] !== EMPTY) offsets[at++] = (o.top + r) * width + o.left + c;
     }
   }
   starts[count] = at;
@@ -90,7 +90,7 @@ export function settleObjects(grid: Grid, rowStep: number, columnStep: number): 
       moved = true;
     }
   }
-  const out = newCells(height * width).fill(background);
+  const out = fillCells(newCells(height * width), background);
   for (let index = 0; index < count; index++) paintObjectInto(out, height, width, objects[index]!, undefined, rowStep * shift[index]!, columnStep * shift[index]!);
   return new Grid(height, width, out);
 }

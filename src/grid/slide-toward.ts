@@ -50,7 +50,7 @@ export function slideTowardColour(g: Grid, colour: number, maxSteps = Infinity):
         }
         for (let r = 0; r < o.height && !stopped; r++) {
           for (let c = 0; c < o.width; c++) {
-            if (o.cells[r * o.width + c] === EMPTY) continue;
+            if (o.data[o.offset + r * o.width + c] === EMPTY) continue;
             const nr = o.top + r + k * dr;
             const nc = o.left + c + k * dc;
             if (nr < 0 || nr >= height || nc < 0 || nc >= width) {

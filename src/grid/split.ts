@@ -22,7 +22,7 @@ export function splitAcross(g: Grid, n: number): Grid[] | null {
   for (let p = 0; p < n; p++) {
     const left = p * (w + gap);
     const out = newCells(g.height * w);
-    for (let r = 0; r < g.height; r++) copyRun(g.cells, r * g.width + left, out, r * w, w);
+    for (let r = 0; r < g.height; r++) copyRun(g.data, g.offset + r * g.width + left, out, r * w, w);
     parts.push(new Grid(g.height, w, out));
   }
   return parts;

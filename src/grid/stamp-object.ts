@@ -17,7 +17,7 @@ export function stampObjectOnColour(g: Grid, template: GridObject, colour: numbe
   for (const m of markers) {
     for (let r = 0; r < m.height; r++) {
       for (let c = 0; c < m.width; c++) {
-        if (m.cells[r * m.width + c] !== EMPTY) out[(m.top + r) * width + m.left + c] = background;
+        if (m.data[m.offset + r * m.width + c] !== EMPTY) out[(m.top + r) * width + m.left + c] = background;
       }
     }
   }
@@ -31,7 +31,7 @@ export function stampObjectOnColour(g: Grid, template: GridObject, colour: numbe
       for (let c = 0; c < template.width; c++) {
         const column = left + c;
         if (column < 0 || column >= width) continue;
-        const v = template.cells[r * template.width + c]!;
+        const v = template.data[template.offset + r * template.width + c]!;
         if (v !== EMPTY) out[row * width + column] = v;
       }
     }

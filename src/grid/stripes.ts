@@ -2,7 +2,7 @@
  * Stripes: every row (or every column) painted in its most frequent colour, and the choice of
  * the direction that agrees best with the grid.
  */
-import { Grid, newCells } from './grid.ts';
+import { Grid, newCells, fillCells } from './grid.ts';
 import { mostFrequentColour } from './most-frequent-colour.ts';
 import { WorkArray } from './work-array.ts';
 
@@ -29,7 +29,7 @@ function lineMajorities(g: Grid, alongRows: boolean, best: Uint8Array): void {
 function paintLines(g: Grid, alongRows: boolean, best: Uint8Array): Grid {
   const { height, width } = g;
   const out = newCells(height * width);
-  if (alongRows) for (let r = 0; r < height; r++) out.fill(best[r]!, r * width, (r + 1) * width);
+  if (alongRows) for (let r = 0; r < height; r++) fillCells(out, best[r]!, r * width, (r + 1) * width);
   else for (let r = 0; r < height; r++) for (let c = 0; c < width; c++) out[r * width + c] = best[c]!;
   return new Grid(height, width, out);
 }

@@ -3,7 +3,7 @@
  * (or of another grid) where its cells are drawn.
  */
 import { backgroundColour } from './components.ts';
-import { Grid, getSizeCap, shapeAllowed, newCells, copyRun } from './grid.ts';
+import { Grid, getSizeCap, shapeAllowed, newCells, copyRun, fillCells } from './grid.ts';
 import { isCount, MOST_COPIES } from './whole-numbers.ts';
 
 /** The grid repeated to fill `height` × `width`, starting at the top-left corner; null for a size outside 1 to the size cap. */
@@ -41,11 +41,11 @@ export function fractalTileWith(g: Grid, pattern: Grid): Grid | null {
   const outWidth = width * pattern.width;
   if (!shapeAllowed(outHeight, outWidth)) return null;
   const background = backgroundColour(g);
-  const out = newCells(outHeight * outWidth).fill(background);
+  const out = fillCells(newCells(outHeight * outWidth), background);
   for (let br = 0; br < height; br++) {
     for (let bc = 0; bc < width; bc++) {
       if (cells[br * width + bc] === background) continue;
-      for (let r = 0; r < pattern.height; r++) copyRun(pattern.cells, r * pattern.width, out, (br * pattern.height + r) * outWidth + bc * pattern.width, pattern.width);
+      for (let r = 0; r < pattern.height; r++) copyRun(pattern.data, pattern.offset + r * pattern.width, out, (br * pattern.height + r) * outWidth + bc * pattern.width, pattern.width);
     }
   }
   return new Grid(outHeight, outWidth, out);

@@ -1,6 +1,6 @@
 /** Shifting the whole picture of a grid inside its frame. */
 import { backgroundColour } from './components.ts';
-import { Grid, newCells, copyRun } from './grid.ts';
+import { Grid, newCells, copyRun, fillCells } from './grid.ts';
 import type { Position } from './position.ts';
 
 /** The picture shifted by the offset in rows and columns; cells shifted out are lost, vacated cells become the background. */
@@ -8,7 +8,7 @@ export function translate(g: Grid, offset: Position): Grid {
   const { height, width, cells } = g;
   const dr = offset.row;
   const dc = offset.column;
-  const out = newCells(height * width).fill(backgroundColour(g));
+  const out = fillCells(newCells(height * width), backgroundColour(g));
   if (Math.abs(dr) >= height || Math.abs(dc) >= width) return new Grid(height, width, out);
   const columnFrom = Math.max(0, -dc);
   const columnTo = Math.min(width, width - dc);

@@ -10,7 +10,7 @@ import { tile } from './tile.ts';
 
 function topLeft(g: Grid, height: number, width: number): Grid {
   const out = newCells(height * width);
-  for (let r = 0; r < height; r++) copyRun(g.cells, r * g.width, out, r * width, width);
+  for (let r = 0; r < height; r++) copyRun(g.data, g.offset + r * g.width, out, r * width, width);
   return new Grid(height, width, out);
 }
 

@@ -5,6 +5,11 @@
 export const FAILURE: unique symbol = Symbol('failure');
 export type Failure = typeof FAILURE;
 
+/**
+ * True for FAILURE. The search asks this of every value it makes, of every type: a bare `===`
+ * against a value of any type compiles to a call of the engine's generic comparison, while the
+ * `typeof` test is inline and leaves the comparison only symbols to see.
+ */
 export function isFailure(value: unknown): value is Failure {
-  return value === FAILURE;
+  return typeof value === 'symbol' && value === FAILURE;
 }

@@ -7,7 +7,7 @@
  * search, so a call means the same thing wherever it is made.
  */
 import { Grid, shapeAllowed } from '../grid/grid.ts';
-import { FAILURE } from './failure.ts';
+import { FAILURE, isFailure } from './failure.ts';
 import type { Type } from './types.ts';
 
 export interface Operation {
@@ -37,7 +37,7 @@ export interface OperationLookup {
 export function applyOperation(operation: Operation, args: readonly unknown[]): unknown {
   const run = operation.run as (...a: unknown[]) => unknown;
   const arity = args.length;
-  for (let i = 0; i < arity; i++) if (args[i] === FAILURE) return FAILURE;
+  for (let i = 0; i < arity; i++) if (isFailure(args[i])) return FAILURE;
   let result: unknown;
   try {
     if (arity === 1) result = run(args[0]);

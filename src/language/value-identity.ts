@@ -9,13 +9,13 @@ import { GridRule } from '../grid/grid-rule-table.ts';
 import { ObjectRule } from '../grid/object-rule-table.ts';
 import { Palette } from './palette.ts';
 import { Point } from './point.ts';
-import { FAILURE } from './failure.ts';
+import { isFailure } from './failure.ts';
 import type { BaseType } from './types.ts';
 
 const FAILURE_HASH = 0x7f4a7c15;
 
 export function hashValue(type: BaseType, value: unknown): number {
-  if (value === FAILURE) return FAILURE_HASH;
+  if (isFailure(value)) return FAILURE_HASH;
   switch (type) {
     case 'Grid':
       return (value as Grid).hash;
@@ -47,8 +47,9 @@ export function hashValue(type: BaseType, value: unknown): number {
 }
 
 export function valuesEqual(type: BaseType, a: unknown, b: unknown): boolean {
-  if (a === b) return true;
-  if (a === FAILURE || b === FAILURE) return false;
+  // Each type compares at a place of its own: a `===` that sees values of every type compiles to
+  // the engine's generic comparison, one that sees only grids (or only numbers) to a single check.
+  if (isFailure(a) || isFailure(b)) return a === b;
   switch (type) {
     case 'Grid':
       return (a as Grid).equals(b as Grid);
@@ -72,6 +73,7 @@ export function valuesEqual(type: BaseType, a: unknown, b: unknown): boolean {
     case 'Grids': {
       const x = a as readonly (Grid | GridObject)[];
       const y = b as readonly (Grid | GridObject)[];
+      if (x === y) return true;
       if (x.length !== y.length) return false;
       for (let i = 0; i < x.length; i++) {
         const p = x[i]!;

@@ -100,5 +100,21 @@ export function primitive<const P extends readonly Type[], const R extends Type>
   laysOver?: boolean;
   cropsAt?: (...rest: ValuesOf<Rest<P>>) => Rectangle | null;
 }): Primitive {
-  return record as unknown as Primitive;
+  // Every record gets the same fields in the same order, the optional ones undefined when not
+  // given: the search reads `run` from a different primitive on every call, and records of
+  // several shapes would make that read a generic lookup instead of one field load.
+  const uniform = {
+    name: record.name,
+    category: record.category,
+    parameters: record.parameters,
+    result: record.result,
+    bits: record.bits,
+    doc: record.doc,
+    example: record.example,
+    run: record.run,
+    inverse: record.inverse,
+    laysOver: record.laysOver,
+    cropsAt: record.cropsAt,
+  };
+  return uniform as unknown as Primitive;
 }

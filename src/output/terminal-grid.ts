@@ -116,7 +116,9 @@ export interface DrawOptions {
 export function countDifferingCells(a: Grid, b: Grid): number | undefined {
   if (a.height !== b.height || a.width !== b.width) return undefined;
   let n = 0;
-  for (let i = 0; i < a.cells.length; i++) if (a.cells[i] !== b.cells[i]) n++;
+  const x = a.cells;
+  const y = b.cells;
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) n++;
   return n;
 }
 

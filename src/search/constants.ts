@@ -36,9 +36,11 @@ export function demonstratedPalette(puzzle: Puzzle): [number, number][] | undefi
   for (const { input, output } of puzzle.train) {
     if (input.height !== output.height || input.width !== output.width) continue;
     sameShape++;
-    for (let i = 0; i < input.cells.length; i++) {
-      const from = input.cells[i]!;
-      const to = output.cells[i]!;
+    const inputCells = input.cells;
+    const outputCells = output.cells;
+    for (let i = 0; i < inputCells.length; i++) {
+      const from = inputCells[i]!;
+      const to = outputCells[i]!;
       if (target[from] === -1) target[from] = to;
       else if (target[from] !== to) return undefined;
     }

@@ -115,7 +115,7 @@ export class CropGoals {
     const row = this.outputProbes[2 * i]!;
     const column = this.outputProbes[2 * i + 1]!;
     const output = this.outputs[i]!;
-    return grid.cells[(top + row) * grid.width + left + column] === output.cells[row * output.width + column];
+    return grid.data[grid.offset + (top + row) * grid.width + left + column] === output.data[output.offset + row * output.width + column];
   }
 
   private holds(goal: CropGoal, i: number, grid: Grid): boolean {
@@ -124,9 +124,9 @@ export class CropGoals {
     const left = r[4 * i + 1]!;
     const output = this.outputs[i]!;
     const { height, width, cells } = output;
-    const source = grid.cells;
+    const source = grid.data;
     for (let row = 0; row < height; row++) {
-      const from = (top + row) * grid.width + left;
+      const from = grid.offset + (top + row) * grid.width + left;
       for (let c = 0; c < width; c++) if (source[from + c] !== cells[row * width + c]) return false;
     }
     return true;
@@ -137,6 +137,7 @@ export class CropGoals {
 function rarestCell(g: Grid): number {
   const counts = colourCounts(g);
   let best = 0;
-  for (let i = 1; i < g.cells.length; i++) if (counts[g.cells[i]!]! < counts[g.cells[best]!]!) best = i;
+  const cells = g.cells;
+  for (let i = 1; i < cells.length; i++) if (counts[cells[i]!]! < counts[cells[best]!]!) best = i;
   return best;
 }

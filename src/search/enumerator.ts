@@ -13,7 +13,7 @@ import { getHeapStatistics } from 'node:v8';
 import { analysisBytesSoFar, backgroundColour } from '../grid/components.ts';
 import { Grid, cellsCheckpoint, cellsRewind } from '../grid/grid.ts';
 import type { Expression } from '../language/ast.ts';
-import { FAILURE } from '../language/failure.ts';
+import { isFailure } from '../language/failure.ts';
 import { literalValue } from '../language/interpreter.ts';
 import { applyOperation, sectionOf } from '../language/operation.ts';
 import type { Type } from '../language/types.ts';
@@ -598,7 +598,7 @@ export class Enumerator {
       // is neither on the first demonstration is dropped before the other inputs are run.
       for (let j = 0; j < arity; j++) call[j] = args[j]!.values[0];
       const first = applyOperation(operation, call);
-      if (first === FAILURE) {
+      if (isFailure(first)) {
         stats.failed++;
         cellsRewind();
         return;
@@ -613,7 +613,7 @@ export class Enumerator {
     for (let i = from; i < this.examples; i++) {
       for (let j = 0; j < arity; j++) call[j] = args[j]!.values[i];
       const v = applyOperation(operation, call);
-      if (v === FAILURE) {
+      if (isFailure(v)) {
         stats.failed++;
         cellsRewind();
         return;
@@ -621,7 +621,7 @@ export class Enumerator {
       // A grid equal to the grid it was made from is that grid: kept values then hold fewer objects,
       // and comparing them with kept ones ends at the first check.
       const source = call[0];
-      values[i] = gridResult && source !== v && source instanceof Grid && source.equals(v as Grid) ? source : v;
+      values[i] = gridResult && source instanceof Grid && source !== v && source.equals(v as Grid) ? source : v;
     }
     // The first argument itself on every input (a turn of a symmetric grid, a fill with nothing to
     // fill): the store holds it already, as that argument.
@@ -790,7 +790,7 @@ export class Enumerator {
     for (let i = 0; i < this.examples; i++) {
       for (let j = 0; j < args.length; j++) call[j] = args[j]!.values[i];
       const v = applyOperation(production.primitive, call);
-      if (v === FAILURE) return undefined;
+      if (isFailure(v)) return undefined;
       values[i] = v;
     }
     return { type: 'Grid', typeId: this.gridType, cost, values, production, arguments: args, leaf: undefined, signature: undefined };

@@ -85,7 +85,7 @@ export class IntermediateTables {
     // Equal to every output: a solution by itself, no table needed.
     if (equal) return [];
     let cells = 0;
-    for (const v of values) cells += (v as Grid).cells.length;
+    for (const v of values) cells += (v as Grid).height * (v as Grid).width;
     if (cells > this.cellsLeft) return [];
     this.cellsLeft -= cells;
     this.tried++;

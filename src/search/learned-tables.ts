@@ -199,7 +199,8 @@ function learnCellRuleWithin(puzzle: Puzzle, features: readonly CellFeature[], c
   }
   for (const g of puzzle.testInputs) {
     const columns = features.map((f) => cache.of(g, f));
-    for (let i = 0; i < g.cells.length; i++) if (!table.has(packedKeyAt(columns, i))) return undefined;
+    const length = g.height * g.width;
+    for (let i = 0; i < length; i++) if (!table.has(packedKeyAt(columns, i))) return undefined;
   }
   let changes = false;
   for (const [packed, state] of table) {
@@ -505,26 +506,28 @@ export function learnCellList(puzzle: Puzzle, maxBits = Infinity): LearnedTable 
   const candidates: CellFeature[] = [...FIRST_FEATURES.map((name) => ({ name })), ...cellAtoms(taskColours(puzzle))].filter((f) => cache.varies(grids, f));
   // Cells of all demonstrations in one row: what each becomes, and whether it changes.
   let total = 0;
-  for (const g of inputs) total += g.cells.length;
+  for (const g of inputs) total += g.height * g.width;
   const target = new Uint8Array(total);
   const changes = new Uint8Array(total);
   /** Changed cells no condition has claimed yet. */
   let changesLeft = 0;
   let offset = 0;
   for (const { input, output } of puzzle.train) {
-    for (let i = 0; i < input.cells.length; i++) {
-      target[offset + i] = output.cells[i]!;
-      changes[offset + i] = output.cells[i] !== input.cells[i] ? 1 : 0;
+    const inputCells = input.cells;
+    const outputCells = output.cells;
+    for (let i = 0; i < inputCells.length; i++) {
+      target[offset + i] = outputCells[i]!;
+      changes[offset + i] = outputCells[i] !== inputCells[i] ? 1 : 0;
       changesLeft += changes[offset + i]!;
     }
-    offset += input.cells.length;
+    offset += inputCells.length;
   }
   const columns = candidates.map((f) => {
     const all = new Uint8Array(total);
     let at = 0;
     for (const g of inputs) {
       all.set(cache.of(g, f), at);
-      at += g.cells.length;
+      at += g.height * g.width;
     }
     return all;
   });

@@ -36,7 +36,7 @@ export interface Candidate {
 export function approximateBytes(value: unknown): number {
   if (value instanceof Grid) return gridBytes(value);
   // The object, and its box as a grid would hold it (counted whether or not its shape Grid is made yet).
-  if (value instanceof GridObject) return 64 + 120 + value.cells.length;
+  if (value instanceof GridObject) return 64 + 120 + value.height * value.width;
   if (Array.isArray(value)) {
     let sum = 48 + 8 * value.length;
     for (const v of value) sum += approximateBytes(v);
@@ -47,7 +47,7 @@ export function approximateBytes(value: unknown): number {
 }
 
 function gridBytes(g: Grid): number {
-  return 120 + g.cells.length;
+  return 120 + g.height * g.width;
 }
 
 const EMPTY_LIST: readonly Candidate[] = [];
