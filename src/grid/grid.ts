@@ -261,9 +261,7 @@ const NATIVE_COMPARE_FROM = 48;
 
 /** True when two cell arrays of the same length hold the same cells (long ones compared natively). */
 export function sameCells(a: Uint8Array, b: Uint8Array): boolean {
-  if (a.length >= NATIVE_COMPARE_FROM) return Buffer.compare(a, b) === 0;
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-  return true;
+  return sameCellsAt(a, 0, b, 0, a.length);
 }
 
 /**
