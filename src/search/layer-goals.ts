@@ -123,10 +123,11 @@ export function meetsLayerGoal(goal: LayerGoal, i: number, grid: Grid, input: Gr
   if (grid.height !== input.height || grid.width !== input.width) return false;
   const pattern = goal.patterns[i]!;
   const fixed = goal.fixed[i]!;
-  const cells = grid.cells;
+  // Read in the slab (a view per call would be made for every grid the search keeps).
+  const { data, offset } = grid;
   // Under, and the changed cells over: the grid must hold the pattern's colour (over, a changed
   // cell's colour is neither see-through nor the input's, so it shows only if the grid holds it).
-  for (let k = 0; k < fixed.length; k++) if (cells[fixed[k]!] !== pattern[fixed[k]!]) return false;
+  for (let k = 0; k < fixed.length; k++) if (data[offset + fixed[k]!] !== pattern[fixed[k]!]) return false;
   return freeCellsClear(goal, i, grid, input);
 }
 
@@ -149,15 +150,16 @@ export function fixedCellsLaid(goal: LayerGoal, i: number, grid: Grid, layer: Gr
   if (grid.height !== layer.height || grid.width !== layer.width) return -1;
   const pattern = goal.patterns[i]!;
   const fixed = goal.fixed[i]!;
-  const cells = grid.cells;
-  const under = layer.cells;
+  const { data, offset } = grid;
+  const under = layer.data;
+  const underOffset = layer.offset;
   const t = goal.transparent.values[0] as number;
   let covered = 0;
   for (let k = 0; k < fixed.length; k++) {
     const c = fixed[k]!;
-    const v = cells[c]!;
+    const v = data[offset + c]!;
     // Shows nothing here, or what the fixed layer has (left for a later layer to change).
-    if (v === t || v === under[c]) continue;
+    if (v === t || v === under[underOffset + c]) continue;
     if (v !== pattern[c]) return -1;
     covered++;
   }
@@ -171,14 +173,16 @@ export function fixedCellsLaid(goal: LayerGoal, i: number, grid: Grid, layer: Gr
 export function freeCellsClear(goal: LayerGoal, i: number, grid: Grid, layer: Grid): boolean {
   if (goal.side === 'under') return true;
   const pattern = goal.patterns[i]!;
-  const cells = grid.cells;
-  const under = layer.cells;
+  const { data, offset } = grid;
+  const under = layer.data;
+  const underOffset = layer.offset;
   const t = goal.transparent.values[0] as number;
-  for (let c = 0; c < cells.length; c++) {
+  const length = grid.height * grid.width;
+  for (let c = 0; c < length; c++) {
     if (pattern[c] !== FREE) continue;
     // What shows on this cell once laid over the layer: v, unless v is see-through or the same.
-    const v = cells[c]!;
-    if (v !== t && v !== under[c]) return false;
+    const v = data[offset + c]!;
+    if (v !== t && v !== under[underOffset + c]) return false;
   }
   return true;
 }
