@@ -44,7 +44,7 @@ export const countingPrimitives = [
     bits: 5,
     doc: 'How many cells are not the background colour.',
     example: { input: [[0, 2, 0], [5, 2, 0]], expression: 'count_cells(grid)', output: 3 },
-    run: (g) => g.cells.length - colourCounts(g)[backgroundColour(g)]!,
+    run: (g) => g.height * g.width - colourCounts(g)[backgroundColour(g)]!,
   }),
   primitive({
     name: 'add',

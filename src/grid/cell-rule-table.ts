@@ -279,7 +279,7 @@ export function featureOfCells(g: Grid, feature: CellFeature): Uint8Array {
 
 /** Every cell's packed key under the features, row-major. */
 export function cellKeys(g: Grid, features: readonly CellFeature[]): Float64Array {
-  const keys = new Float64Array(g.cells.length);
+  const keys = new Float64Array(g.height * g.width);
   for (let f = features.length - 1; f >= 0; f--) {
     const values = featureOfCells(g, features[f]!);
     for (let i = 0; i < keys.length; i++) keys[i] = keys[i]! * RADIX + values[i]!;

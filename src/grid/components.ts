@@ -33,7 +33,7 @@ export function components(grid: Grid, options: ComponentOptions): readonly Grid
   const forGrid = grid.componentsMemo;
   const kept = memoised(forGrid, key);
   if (kept) return kept;
-  let found = sameAsSimplerCut(grid, options);
+  let found = forGrid ? sameAsSimplerCut(grid, forGrid, options) : undefined;
   if (found) {
     analysisBytes += 32;
   } else {
@@ -53,7 +53,7 @@ function optionKey(diagonal: boolean, multicolour: boolean, background: number):
   return (diagonal ? 1 : 0) | (multicolour ? 2 : 0) | ((background + 2) << 2);
 }
 
-function memoised(forGrid: unknown[] | undefined, key: number): readonly GridObject[] | undefined {
+function memoised(forGrid: readonly unknown[] | undefined, key: number): readonly GridObject[] | undefined {
   if (forGrid) for (let i = 0; i < forGrid.length; i += 2) if (forGrid[i] === key) return forGrid[i + 1] as readonly GridObject[];
   return undefined;
 }
@@ -67,10 +67,8 @@ function memoised(forGrid: unknown[] | undefined, key: number): readonly GridObj
  * order either way. Most grids are cut several ways and are cut alike; the scan costs far less
  * than a flood, and the search then finds the two lists equal at once.
  */
-function sameAsSimplerCut(grid: Grid, options: ComponentOptions): readonly GridObject[] | undefined {
+function sameAsSimplerCut(grid: Grid, forGrid: readonly unknown[], options: ComponentOptions): readonly GridObject[] | undefined {
   const { diagonal, multicolour, background } = options;
-  const forGrid = grid.componentsMemo;
-  if (!forGrid) return undefined;
   if (diagonal) {
     const simpler = memoised(forGrid, optionKey(false, multicolour, background));
     if (simpler && cornersAddNothing(grid, background, multicolour)) return simpler;

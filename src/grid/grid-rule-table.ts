@@ -74,7 +74,7 @@ export function gridKey(g: Grid, property: GridProperty): GridKey | undefined {
       return property === 'colour_count' ? n : set;
     }
     case 'cells':
-      return g.cells.length - colourCounts(g)[backgroundColour(g)]!;
+      return g.height * g.width - colourCounts(g)[backgroundColour(g)]!;
     case 'objects':
     case 'objects_diagonal':
       return components(g, { diagonal: property === 'objects_diagonal', multicolour: false, background: backgroundColour(g) }).length;

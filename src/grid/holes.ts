@@ -38,7 +38,7 @@ const markWork = new WorkArray(Uint8Array);
  * border by edge steps through cells of that colour (1 = enclosed).
  */
 export function enclosedCells(grid: Grid, open: number): Uint8Array {
-  const mark = newCells(grid.cells.length);
+  const mark = newCells(grid.height * grid.width);
   markEnclosed(grid.height, grid.width, grid.cells, open, mark);
   return mark;
 }
@@ -98,7 +98,7 @@ function regionsEnclosed(height: number, width: number, cells: Uint8Array, open:
 /** Regions of background cells (edge neighbours) that cannot reach the border, in reading order. */
 export function enclosedRegions(grid: Grid): readonly GridObject[] {
   const background = backgroundColour(grid);
-  const n = grid.cells.length;
+  const n = grid.height * grid.width;
   const enclosed = markWork.take(n);
   if (markEnclosed(grid.height, grid.width, grid.cells, background, enclosed) === 0) return [];
   const cells = newCells(n);
@@ -110,10 +110,11 @@ export function enclosedRegions(grid: Grid): readonly GridObject[] {
 export function fillEnclosed(g: Grid, colour: number): Grid {
   const background = backgroundColour(g);
   if (colour === background) return g;
-  const enclosed = markWork.take(g.cells.length);
+  const cells = g.cells;
+  const enclosed = markWork.take(cells.length);
   // Nothing enclosed: the grid itself, not a copy.
-  if (markEnclosed(g.height, g.width, g.cells, background, enclosed) === 0) return g;
-  const out = copyCells(g.cells);
+  if (markEnclosed(g.height, g.width, cells, background, enclosed) === 0) return g;
+  const out = copyCells(cells);
   for (let i = 0; i < out.length; i++) if (enclosed[i]) out[i] = colour;
   return new Grid(g.height, g.width, out);
 }

@@ -16,8 +16,9 @@ export function joinRight(a: Grid, b: Grid): Grid | null {
 /** The second grid placed below the first; null unless their widths match and the result fits the size cap. */
 export function joinBelow(a: Grid, b: Grid): Grid | null {
   if (a.width !== b.width || !shapeAllowed(a.height + b.height, a.width)) return null;
-  const out = newCells(a.cells.length + b.cells.length);
-  out.set(a.cells, 0);
-  out.set(b.cells, a.cells.length);
+  const top = a.cells;
+  const out = newCells(top.length + b.height * b.width);
+  out.set(top, 0);
+  out.set(b.cells, top.length);
   return new Grid(a.height + b.height, a.width, out);
 }

@@ -35,7 +35,7 @@ export function colourCount(o: GridObject): number {
 
 /** Whether the object fills its whole bounding box. */
 export function isSolidRectangle(o: GridObject): boolean {
-  return o.size === o.cells.length;
+  return o.size === o.height * o.width;
 }
 
 /** Whether the object is a straight line one cell thick: a single full row or column. */
@@ -80,8 +80,7 @@ export function touchesColour(o: GridObject, g: Grid, colour: number): boolean {
           if (nc < 0 || nc >= width || g.data[g.offset + nr * width + nc] !== colour) continue;
           const sr = nr - o.top;
           const sc = nc - o.left;
-          const inside = sr >= 0 && sr < o.height && sc >= 0 && sc < o.width && o.data[o.offset + sr * o.width + sc] !== EMPTY;
-          if (!inside) return true;
+          if (!holdsCell(o, sr, sc)) return true;
         }
       }
     }

@@ -73,7 +73,7 @@ export function eraseObjects(g: Grid, objects: readonly GridObject[]): Grid {
 
 /** The grid with every cell outside the object turned to the background colour. */
 export function keepOnlyObject(g: Grid, object: GridObject): Grid {
-  const out = fillCells(newCells(g.cells.length), backgroundColour(g));
+  const out = fillCells(newCells(g.height * g.width), backgroundColour(g));
   paintObjectInto(out, g.height, g.width, object);
   return new Grid(g.height, g.width, out);
 }

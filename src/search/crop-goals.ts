@@ -123,11 +123,13 @@ export class CropGoals {
     const top = r[4 * i]!;
     const left = r[4 * i + 1]!;
     const output = this.outputs[i]!;
-    const { height, width, cells } = output;
+    const { height, width } = output;
     const source = grid.data;
+    const wanted = output.data;
     for (let row = 0; row < height; row++) {
       const from = grid.offset + (top + row) * grid.width + left;
-      for (let c = 0; c < width; c++) if (source[from + c] !== cells[row * width + c]) return false;
+      const at = output.offset + row * width;
+      for (let c = 0; c < width; c++) if (source[from + c] !== wanted[at + c]) return false;
     }
     return true;
   }
